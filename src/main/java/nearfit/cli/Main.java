@@ -1,0 +1,109 @@
+package nearfit.cli;
+
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.io.OutputStreamWriter;
+import java.nio.charset.StandardCharsets;
+
+import nearfit.table.NearfitException;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+/**
+ * The {@code nearfit} command line: one entry point with a sub-command per job.
+ *
+ * <p>Exit statuses: 0 success; 1 only from {@code check} when the check fails; 2 for a usage or input
+ * error, printed as one line {@code nearfit: ...} on standard error (with the stack trace only under
+ * {@code --debug}).
+ */
+@Command(name = "nearfit",
+        mixinStandardHelpOptions = true,
+        versionProvider = Main.Version.class,
+        description = "k-nearest-neighbour reference curves for equipment logs, in the terminal.",
+        subcommands = {
+            ViewCommand.class,
+            DescribeCommand.class,
+            PlotCommand.class,
+            TuneCommand.class,
+            FitCommand.class,
+            PredictCommand.class,
+            CheckCommand.class,
+            CompletionCommand.class,
+        })
+public final class Main implements Runnable {
+    /** Exit status for a usage or input error. */
+    public static final int EXIT_USAGE = 2;
+    /** Exit status of {@code check} when the flagged share is over the limit. */
+    public static final int EXIT_CHECK_FAILED = 1;
+
+    @Option(names = "--debug", scope = CommandLine.ScopeType.INHERIT,
+            description = "Print stack traces of failures.")
+    boolean debug;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        throw new CommandLine.ParameterException(spec.commandLine(), "name a command; see nearfit --help");
+    }
+
+    public static void main(String[] args) {
+        int status = run(args,
+                new PrintWriter(new OutputStreamWriter(System.out, StandardCharsets.UTF_8), true),
+                new PrintWriter(new OutputStreamWriter(System.err, StandardCharsets.UTF_8), true));
+        System.exit(status);
+    }
+
+    /**
+     * Runs one command line in-process, writing to the given streams; the tests' entry point.
+     *
+     * @return the exit status
+     */
+    public static int run(String[] args, PrintWriter out, PrintWriter err) {
+        CommandLine cli = commandLine();
+        cli.setOut(out);
+        cli.setErr(err);
+        boolean debug = java.util.Arrays.asList(args).contains("--debug");
+        cli.setParameterExceptionHandler((ex, a) -> {
+            err.println("nearfit: " + ex.getMessage());
+            err.flush();
+            return EXIT_USAGE;
+        });
+        cli.setExecutionExceptionHandler((ex, c, parsed) -> {
+            if (ex instanceof NearfitException) {
+                err.println("nearfit: " + ex.getMessage());
+            } else {
+                err.println("nearfit: internal error: " + ex);
+            }
+            if (debug) {
+                StringWriter sw = new StringWriter();
+                ex.printStackTrace(new PrintWriter(sw));
+                err.print(sw);
+            }
+            err.flush();
+            return EXIT_USAGE;
+        });
+        int status = cli.execute(args);
+        out.flush();
+        err.flush();
+        return status;
+    }
+
+    /** A fresh command line with every sub-command; used by completion too. */
+    static CommandLine commandLine() {
+        CommandLine cli = new CommandLine(new Main());
+        cli.setCaseInsensitiveEnumValuesAllowed(true);
+        return cli;
+    }
+
+    /** The version written into the jar's manifest by the build. */
+    static final class Version implements CommandLine.IVersionProvider {
+        @Override
+        public String[] getVersion() {
+            String v = Main.class.getPackage().getImplementationVersion();
+            return new String[] {"nearfit " + (v == null ? "dev" : v)};
+        }
+    }
+}
