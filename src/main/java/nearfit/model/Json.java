@@ -93,6 +93,42 @@ public final class Json {
             return this;
         }
 
+        /**
+         * Writes a value read by {@link Json#parse} or built of the same types: null, Boolean, Number,
+         * String, List and Map with String keys.
+         */
+        public Writer any(Object v) {
+            if (v == null) {
+                return nullValue();
+            } else if (v instanceof Boolean b) {
+                return value(b.booleanValue());
+            } else if (v instanceof Integer || v instanceof Long) {
+                return value(((Number) v).longValue());
+            } else if (v instanceof Number n) {
+                return value(n.doubleValue());
+            } else if (v instanceof String s) {
+                return value(s);
+            } else if (v instanceof double[] a) {
+                return array(a);
+            } else if (v instanceof int[] a) {
+                return array(a);
+            } else if (v instanceof List<?> list) {
+                beginArray();
+                for (Object o : list) {
+                    any(o);
+                }
+                return endArray();
+            } else if (v instanceof Map<?, ?> map) {
+                beginObject();
+                for (Map.Entry<?, ?> e : map.entrySet()) {
+                    key(String.valueOf(e.getKey()));
+                    any(e.getValue());
+                }
+                return endObject();
+            }
+            throw new IllegalArgumentException("no JSON form for " + v.getClass().getName());
+        }
+
         /** Writes an array of numbers. */
         public Writer array(double[] values) {
             beginArray();
@@ -175,6 +211,11 @@ public final class Json {
             }
             out.append('"');
         }
+    }
+
+    /** The compact JSON text of a value built of null, Boolean, Number, String, List and Map. */
+    public static String write(Object value) {
+        return new Writer().any(value).toString();
     }
 
     /**
