@@ -9,6 +9,12 @@ import org.junit.jupiter.api.Test;
 /** Source for the code points: the Unicode Standard, Braille Patterns block U+2800–U+28FF (dot n is bit n − 1). */
 class BrailleCanvasTest {
 
+    private static CellGrid gridOf(Canvas canvas) {
+        CellGrid.Builder g = CellGrid.builder(canvas.columns(), canvas.rows());
+        canvas.writeTo(g, 0, 0);
+        return g.build();
+    }
+
     @Test
     void allEightDotsAreU28FF() {
         assertEquals(0x28FF, BrailleCanvas.codePointOfDots(1, 2, 3, 4, 5, 6, 7, 8));
@@ -43,10 +49,8 @@ class BrailleCanvasTest {
     @Test
     void aPixelLightsTheDotAtItsPlaceInItsCell() {
         BrailleCanvas canvas = new BrailleCanvas(3, 2);
-        canvas.addPoint(3, 6); // cell (1, 1), left column... x 3 is the right column of cell 1, y 6 row 2 of cell 1
-        CellGrid.Builder g = CellGrid.builder(3, 2);
-        canvas.writeTo(g, 0, 0);
-        CellGrid grid = g.build();
+        canvas.addPoint(3, 6); // x 3: right column of cell 1; y 6: third row of cell 1 -> dot 6
+        CellGrid grid = gridOf(canvas);
         assertEquals(BrailleCanvas.codePointOfDots(6), grid.codePoint(1, 1));
         assertEquals(' ', grid.codePoint(0, 0));
         assertEquals(1, canvas.count(1, 1));
@@ -97,9 +101,7 @@ class BrailleCanvasTest {
         BrailleCanvas canvas = new BrailleCanvas(1, 1);
         canvas.addPoint(1, 3);
         canvas.mark(Layer.CURVE, 0, 0);
-        CellGrid.Builder g = CellGrid.builder(1, 1);
-        canvas.writeTo(g, 0, 0);
-        CellGrid grid = g.build();
+        CellGrid grid = gridOf(canvas);
         assertEquals(Role.CURVE, grid.role(0, 0));
         assertEquals(BrailleCanvas.codePointOfDots(1), grid.codePoint(0, 0));
     }
@@ -109,9 +111,7 @@ class BrailleCanvasTest {
         BrailleCanvas canvas = new BrailleCanvas(1, 1);
         canvas.addPoint(1, 3);
         canvas.mark(Layer.BAND, 0, 0);
-        CellGrid.Builder g = CellGrid.builder(1, 1);
-        canvas.writeTo(g, 0, 0);
-        CellGrid grid = g.build();
+        CellGrid grid = gridOf(canvas);
         assertEquals(Role.BAND, grid.role(0, 0));
         assertEquals(BrailleCanvas.codePointOfDots(1, 8), grid.codePoint(0, 0));
     }
@@ -121,10 +121,9 @@ class BrailleCanvasTest {
         BrailleCanvas canvas = new BrailleCanvas(1, 1);
         canvas.mark(Layer.CURVE, 0, 0);
         canvas.mark(Layer.FLAG, 1, 1);
-        CellGrid.Builder g = CellGrid.builder(1, 1);
-        canvas.writeTo(g, 0, 0);
-        assertEquals(BrailleCanvas.FLAG_GLYPH, g.build().codePoint(0, 0));
-        assertEquals(Role.FLAG, g.build().role(0, 0));
+        CellGrid grid = gridOf(canvas);
+        assertEquals(BrailleCanvas.FLAG_GLYPH, grid.codePoint(0, 0));
+        assertEquals(Role.FLAG, grid.role(0, 0));
     }
 
     @Test
