@@ -62,8 +62,9 @@ class DemoSiteLogTest {
         Path root = projectRoot();
         first = dir.resolve("x.csv.gz");
         second = dir.resolve("y.csv.gz");
-        generate(root, first);
-        generate(root, second);
+        Process a = generate(root, first), b = generate(root, second); // both at once: two cores
+        awaitSuccess(a);
+        awaitSuccess(b);
         read(first);
     }
 
@@ -74,11 +75,14 @@ class DemoSiteLogTest {
         return p;
     }
 
-    static void generate(Path root, Path out) throws IOException, InterruptedException {
+    static Process generate(Path root, Path out) throws IOException {
         String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
-        Process proc = new ProcessBuilder(java, "--source", "17", "scripts/make-demo-log",
+        return new ProcessBuilder(java, "--source", "17", "scripts/make-demo-log",
                 "--rows", Integer.toString(ROWS), "--out", out.toString())
                 .directory(root.toFile()).redirectErrorStream(true).start();
+    }
+
+    static void awaitSuccess(Process proc) throws IOException, InterruptedException {
         String log = new String(proc.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
         assertTrue(proc.waitFor(120, TimeUnit.SECONDS), "generator did not finish");
         assertEquals(0, proc.exitValue(), log);
