@@ -32,8 +32,6 @@ import java.util.zip.GZIPInputStream;
 public final class CsvLoader {
     /** Bytes read before parsing to sniff the dialect and types. */
     static final int HEAD_BYTES = 2 * ChunkParser.MAX_ROW_BYTES;
-    /** Plain files smaller than this are parsed on one thread. */
-    static final long PARALLEL_MIN_BYTES = 8L << 20;
 
     private final LoadOptions options;
 
@@ -98,7 +96,7 @@ public final class CsvLoader {
         ChunkParser.Shared shared = shared(size);
         List<ChunkResult> parts;
         int threads = options.threads();
-        if (threads == 1 || size < PARALLEL_MIN_BYTES) {
+        if (threads == 1 || size < options.parallelMinBytes()) {
             try (FileChannel ch = FileChannel.open(path, StandardOpenOption.READ)) {
                 ChunkParser parser = new ChunkParser(layout, name, false, shared);
                 parts = List.of(parser.parse(Channels.newInputStream(ch.position(layout.dataOffset())),

@@ -25,8 +25,10 @@ public final class LoadOptions {
     private final LoadProgress progress;
     private final List<String> keepColumns;
     private final BooleanSupplier cancelSignal;
+    private final long parallelMinBytes;
 
     private LoadOptions(Builder b) {
+        this.parallelMinBytes = b.parallelMinBytes;
         this.delimiter = b.delimiter;
         this.header = b.header;
         this.threads = b.threads;
@@ -49,6 +51,7 @@ public final class LoadOptions {
         b.progress = progress;
         b.keepColumns = keepColumns;
         b.cancelSignal = cancelSignal;
+        b.parallelMinBytes = parallelMinBytes;
         return b;
     }
 
@@ -82,6 +85,11 @@ public final class LoadOptions {
         return cancelSignal;
     }
 
+    /** Plain files smaller than this are parsed on one thread (8 MiB; lowered by tests). */
+    long parallelMinBytes() {
+        return parallelMinBytes;
+    }
+
     /** Builds {@link LoadOptions}; each setter returns the builder. */
     public static final class Builder {
         private char delimiter;
@@ -90,6 +98,7 @@ public final class LoadOptions {
         private LoadProgress progress = LoadProgress.NONE;
         private List<String> keepColumns = List.of();
         private BooleanSupplier cancelSignal = () -> false;
+        private long parallelMinBytes = 8L << 20;
 
         private Builder() {
         }
@@ -133,6 +142,12 @@ public final class LoadOptions {
         /** A signal polled about once per block; true cancels the load. */
         public Builder cancelSignal(BooleanSupplier s) {
             this.cancelSignal = Objects.requireNonNull(s);
+            return this;
+        }
+
+        /** Lets tests exercise the parallel path on small files. */
+        Builder parallelMinBytes(long bytes) {
+            this.parallelMinBytes = bytes;
             return this;
         }
 
