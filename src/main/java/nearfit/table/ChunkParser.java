@@ -20,7 +20,7 @@ import java.util.zip.ZipException;
 final class ChunkParser {
     /** The longest row accepted, in bytes; longer ones are reported as an error. */
     static final int MAX_ROW_BYTES = 1 << 20;
-    static final int BUFFER_BYTES = 4 << 20;
+    static final int BUFFER_BYTES = 2 << 20;
 
     private final Layout layout;
     private final String source;
@@ -44,7 +44,6 @@ final class ChunkParser {
         ChunkResult r = new ChunkResult(layout, firstLine);
         RowTokenizer tok = new RowTokenizer(layout.delimiter());
         byte[] buf = new byte[BUFFER_BYTES];
-        byte[] scratch = new byte[MAX_ROW_BYTES + 1];
         long bufOffset = start;
         int pos = 0;
         int limit = 0;
@@ -97,7 +96,7 @@ final class ChunkParser {
                 if (next == RowTokenizer.NEED_MORE) {
                     break;
                 }
-                r.row(buf, tok, line, scratch);
+                r.row(buf, tok, line);
                 line += tok.newlines();
                 pos = next;
             }

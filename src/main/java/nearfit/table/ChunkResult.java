@@ -21,6 +21,8 @@ final class ChunkResult {
     long longRows;
     long endOffset;
     long endLine;
+    /** For unescaped fields and decimal commas; grows to the longest field that needs it. */
+    private byte[] scratch = new byte[256];
     /** The first failure, or null; thrown by the loader only if this stretch is kept. */
     Failure failure;
 
@@ -54,7 +56,7 @@ final class ChunkResult {
     }
 
     /** Adds one tokenized row that starts on {@code line}; blank lines are skipped. */
-    void row(byte[] b, RowTokenizer tok, long line, byte[] scratch) {
+    void row(byte[] b, RowTokenizer tok, long line) {
         int n = tok.fields();
         if (n == 1 && !tok.quoted(0) && tok.contentEnd(0) == tok.contentStart(0)) {
             return;
@@ -70,6 +72,9 @@ final class ChunkResult {
             if (f >= n) {
                 c.addMissing();
                 continue;
+            }
+            if (tok.rawEnd(f) - tok.rawStart(f) > scratch.length) {
+                scratch = new byte[Math.max(tok.rawEnd(f) - tok.rawStart(f), 2 * scratch.length)];
             }
             byte[] src = b;
             int s;

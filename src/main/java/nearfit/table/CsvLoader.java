@@ -245,6 +245,10 @@ public final class CsvLoader {
                 if (c instanceof NearfitException ne) {
                     throw ne;
                 }
+                if (c instanceof OutOfMemoryError) {
+                    throw NearfitException.inFile(name, "out of memory while loading; give Java more heap "
+                            + "(for example NEARFIT_JAVA_OPTS=-Xmx16g)", c);
+                }
                 throw NearfitException.inFile(name, "cannot read: " + c, c);
             }
         }
