@@ -47,6 +47,15 @@ final class ColumnBuilder {
      * @return false when the cell is a bad cell (present but not of the column's type)
      */
     boolean add(byte[] b, int s, int e, boolean decimalComma, byte[] scratch, boolean scratchInUse) {
+        if (type == ColumnType.NUMBER) {
+            // Hot path: most cells are plain decimals with no spaces, read in one pass.
+            double v = CellText.parsePlainDecimal(b, s, e, decimalComma ? (byte) ',' : (byte) '.');
+            if (v == v) {
+                size++;
+                numbers.add(v);
+                return true;
+            }
+        }
         s = CellText.trimStart(b, s, e);
         e = CellText.trimEnd(b, s, e);
         if (CellText.isMissing(b, s, e)) {
