@@ -1,67 +1,32 @@
 package nearfit.table;
 
-import java.util.Arrays;
+/** A growable sequence of ints in fixed chunks; see {@link ChunkedStore}. */
+final class IntChunks extends ChunkedStore {
+    private int[] last;
 
-/**
- * A growable sequence of ints held in fixed chunks of {@value #CHUNK} values, so growing never copies
- * what is already stored and no chunk is large enough to be a humongous object for the collector.
- *
- * <p>Invariant: every chunk but the last is full; {@code size} values are stored in total.
- */
-final class IntChunks {
-    static final int SHIFT = 15;
-    static final int CHUNK = 1 << SHIFT;
-    static final int MASK = CHUNK - 1;
-
-    private int[][] chunks = new int[4][];
-    private int chunkCount;
-    private int size;
+    @Override
+    Object newArray() {
+        return new int[CHUNK];
+    }
 
     void add(int v) {
         int at = size & MASK;
         if (at == 0) {
-            newChunk();
+            last = (int[]) newChunk();
         }
-        chunks[chunkCount - 1][at] = v;
+        last[at] = v;
         size++;
     }
 
     int get(int i) {
-        return chunks[i >>> SHIFT][i & MASK];
-    }
-
-    int size() {
-        return size;
-    }
-
-    /** Moves all of {@code other}'s values to the end of this sequence, releasing its chunks as they go. */
-    void drainFrom(IntChunks other) {
-        for (int c = 0; c < other.chunkCount; c++) {
-            int[] src = other.chunks[c];
-            int n = Math.min(CHUNK, other.size - c * CHUNK);
-            int done = 0;
-            while (done < n) {
-                int at = size & MASK;
-                if (at == 0) {
-                    newChunk();
-                }
-                int len = Math.min(n - done, CHUNK - at);
-                System.arraycopy(src, done, chunks[chunkCount - 1], at, len);
-                size += len;
-                done += len;
-            }
-            other.chunks[c] = null;
-        }
-        other.chunkCount = 0;
-        other.size = 0;
+        return ((int[]) chunks[i >>> SHIFT])[i & MASK];
     }
 
     /** Sets every stored value {@code v >= 0} to {@code map[v]}; negative values (missing) stay. */
     void remap(int[] map) {
         for (int c = 0; c < chunkCount; c++) {
-            int[] a = chunks[c];
-            int n = Math.min(CHUNK, size - c * CHUNK);
-            for (int i = 0; i < n; i++) {
+            int[] a = (int[]) chunks[c];
+            for (int i = 0, n = filled(c); i < n; i++) {
                 if (a[i] >= 0) {
                     a[i] = map[a[i]];
                 }
@@ -69,10 +34,8 @@ final class IntChunks {
         }
     }
 
-    private void newChunk() {
-        if (chunkCount == chunks.length) {
-            chunks = Arrays.copyOf(chunks, chunkCount * 2);
-        }
-        chunks[chunkCount++] = new int[CHUNK];
+    @Override
+    void chunksChanged() {
+        last = chunkCount == 0 ? null : (int[]) chunks[chunkCount - 1];
     }
 }

@@ -1,76 +1,39 @@
 package nearfit.table;
 
-import java.util.Arrays;
+/** A growable sequence of longs in fixed chunks; see {@link ChunkedStore}. */
+final class LongChunks extends ChunkedStore {
+    private long[] last;
 
-/**
- * A growable sequence of longs held in fixed chunks of {@value #CHUNK} values, so growing never copies
- * what is already stored and no chunk is large enough to be a humongous object for the collector.
- *
- * <p>Invariant: every chunk but the last is full; {@code size} values are stored in total.
- */
-final class LongChunks {
-    static final int SHIFT = 15;
-    static final int CHUNK = 1 << SHIFT;
-    static final int MASK = CHUNK - 1;
-
-    private long[][] chunks = new long[4][];
-    private int chunkCount;
-    private int size;
+    @Override
+    Object newArray() {
+        return new long[CHUNK];
+    }
 
     void add(long v) {
         int at = size & MASK;
         if (at == 0) {
-            newChunk();
+            last = (long[]) newChunk();
         }
-        chunks[chunkCount - 1][at] = v;
+        last[at] = v;
         size++;
     }
 
     long get(int i) {
-        return chunks[i >>> SHIFT][i & MASK];
+        return ((long[]) chunks[i >>> SHIFT])[i & MASK];
     }
 
-    int size() {
-        return size;
-    }
-
-    /** Moves all of {@code other}'s values to the end of this sequence, releasing its chunks as they go. */
-    void drainFrom(LongChunks other) {
-        for (int c = 0; c < other.chunkCount; c++) {
-            long[] src = other.chunks[c];
-            int n = Math.min(CHUNK, other.size - c * CHUNK);
-            int done = 0;
-            while (done < n) {
-                int at = size & MASK;
-                if (at == 0) {
-                    newChunk();
-                }
-                int len = Math.min(n - done, CHUNK - at);
-                System.arraycopy(src, done, chunks[chunkCount - 1], at, len);
-                size += len;
-                done += len;
-            }
-            other.chunks[c] = null;
-        }
-        other.chunkCount = 0;
-        other.size = 0;
-    }
-
-    /** Adds {@code delta} to every stored value (used to turn a worker's local line numbers into file lines). */
+    /** Adds {@code delta} to every stored value (turns a worker's local line numbers into file lines). */
     void addToAll(long delta) {
         for (int c = 0; c < chunkCount; c++) {
-            long[] a = chunks[c];
-            int n = Math.min(CHUNK, size - c * CHUNK);
-            for (int i = 0; i < n; i++) {
+            long[] a = (long[]) chunks[c];
+            for (int i = 0, n = filled(c); i < n; i++) {
                 a[i] += delta;
             }
         }
     }
 
-    private void newChunk() {
-        if (chunkCount == chunks.length) {
-            chunks = Arrays.copyOf(chunks, chunkCount * 2);
-        }
-        chunks[chunkCount++] = new long[CHUNK];
+    @Override
+    void chunksChanged() {
+        last = chunkCount == 0 ? null : (long[]) chunks[chunkCount - 1];
     }
 }
