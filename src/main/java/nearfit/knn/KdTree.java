@@ -1,0 +1,241 @@
+package nearfit.knn;
+
+/**
+ * A k-d tree (Bentley 1975; k-nearest search after Friedman, Bentley &amp; Finkel 1977) over packed
+ * coordinates. The tree is implicit and balanced: node i has children 2i+1 and 2i+2, every leaf
+ * sits at depth {@code depth} and holds at most {@link #LEAF_SIZE} rows. Each node splits its rows
+ * at the median of its widest coordinate (selection on an int permutation) and stores its bounding
+ * box, which gives an exact lower bound on the key for every metric. The coordinates are copied in
+ * tree order so a leaf scan reads memory in sequence.
+ */
+public final class KdTree implements NeighborIndex {
+    /** Rows per leaf at most. */
+    static final int LEAF_SIZE = 16;
+
+    private final int d;
+    private final int n;
+    private final Metric base;
+    private final int depth;
+    private final int[] start;
+    private final int[] end;
+    private final double[] lo;
+    private final double[] hi;
+    private final double[] treeCoords;
+    private final int[] treePos;
+
+    private KdTree(int d, int n, Metric base, int depth, int[] start, int[] end, double[] lo, double[] hi,
+                   double[] treeCoords, int[] treePos) {
+        this.d = d;
+        this.n = n;
+        this.base = base;
+        this.depth = depth;
+        this.start = start;
+        this.end = end;
+        this.lo = lo;
+        this.hi = hi;
+        this.treeCoords = treeCoords;
+        this.treePos = treePos;
+    }
+
+    /** Builds a tree over packed coordinates (n*d), splitting the top levels over threads. */
+    public static KdTree build(double[] coords, int d, Metric base, int threads) {
+        int n = coords.length / d;
+        int depth = 0;
+        while ((n + (1 << depth) - 1) >> depth > LEAF_SIZE) {
+            depth++;
+        }
+        int nodes = (1 << (depth + 1)) - 1;
+        int[] perm = new int[n];
+        for (int i = 0; i < n; i++) {
+            perm[i] = i;
+        }
+        Builder b = new Builder(coords, d, depth, perm, nodes);
+        b.build(0, 0, n, 0, Math.max(1, threads));
+        double[] tc = new double[n * d];
+        for (int i = 0; i < n; i++) {
+            System.arraycopy(coords, perm[i] * d, tc, i * d, d);
+        }
+        return new KdTree(d, n, base.base(), depth, b.start, b.end, b.lo, b.hi, tc, perm);
+    }
+
+    /** The build state; each node's slots are written by exactly one thread. */
+    private static final class Builder {
+        final double[] coords;
+        final int d;
+        final int depth;
+        final int[] perm;
+        final int[] start;
+        final int[] end;
+        final double[] lo;
+        final double[] hi;
+
+        Builder(double[] coords, int d, int depth, int[] perm, int nodes) {
+            this.coords = coords;
+            this.d = d;
+            this.depth = depth;
+            this.perm = perm;
+            this.start = new int[nodes];
+            this.end = new int[nodes];
+            this.lo = new double[nodes * d];
+            this.hi = new double[nodes * d];
+        }
+
+        void build(int node, int from, int to, int level, int threads) {
+            start[node] = from;
+            end[node] = to;
+            box(node, from, to);
+            if (level == depth) {
+                return;
+            }
+            int dim = widest(node);
+            int mid = (from + to) >>> 1;
+            select(from, to, mid, dim);
+            if (threads > 1 && to - from > 50_000) {
+                int half = threads / 2;
+                Thread t = new Thread(() -> build(2 * node + 1, from, mid, level + 1, half));
+                t.start();
+                build(2 * node + 2, mid, to, level + 1, threads - half);
+                join(t);
+            } else {
+                build(2 * node + 1, from, mid, level + 1, 1);
+                build(2 * node + 2, mid, to, level + 1, 1);
+            }
+        }
+
+        private static void join(Thread t) {
+            try {
+                t.join();
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw new CancelledException();
+            }
+        }
+
+        private void box(int node, int from, int to) {
+            int o = node * d;
+            for (int j = 0; j < d; j++) {
+                lo[o + j] = Double.POSITIVE_INFINITY;
+                hi[o + j] = Double.NEGATIVE_INFINITY;
+            }
+            for (int i = from; i < to; i++) {
+                int p = perm[i] * d;
+                for (int j = 0; j < d; j++) {
+                    double v = coords[p + j];
+                    if (v < lo[o + j]) {
+                        lo[o + j] = v;
+                    }
+                    if (v > hi[o + j]) {
+                        hi[o + j] = v;
+                    }
+                }
+            }
+        }
+
+        private int widest(int node) {
+            int best = 0;
+            double w = -1;
+            for (int j = 0; j < d; j++) {
+                double s = hi[node * d + j] - lo[node * d + j];
+                if (s > w) {
+                    w = s;
+                    best = j;
+                }
+            }
+            return best;
+        }
+
+        private double v(int i, int dim) {
+            return coords[perm[i] * d + dim];
+        }
+
+        /** Quickselect with a three-way partition, so runs of equal values cost linear time. */
+        private void select(int from, int to, int kth, int dim) {
+            int l = from;
+            int r = to - 1;
+            while (l < r) {
+                double a = v(l, dim);
+                double b = v((l + r) >>> 1, dim);
+                double c = v(r, dim);
+                double pivot = Math.max(Math.min(a, b), Math.min(Math.max(a, b), c));
+                int lt = l;
+                int gt = r;
+                int i = l;
+                while (i <= gt) {
+                    double x = v(i, dim);
+                    if (x < pivot) {
+                        swap(lt++, i++);
+                    } else if (x > pivot) {
+                        swap(i, gt--);
+                    } else {
+                        i++;
+                    }
+                }
+                if (kth < lt) {
+                    r = lt - 1;
+                } else if (kth > gt) {
+                    l = gt + 1;
+                } else {
+                    return;
+                }
+            }
+        }
+
+        private void swap(int i, int j) {
+            int t = perm[i];
+            perm[i] = perm[j];
+            perm[j] = t;
+        }
+    }
+
+    @Override
+    public void search(double[] query, int k, int exclude, NeighborList out) {
+        out.reset(k);
+        visit(0, 0, query, exclude, out);
+        out.finish();
+    }
+
+    private void visit(int node, int level, double[] q, int exclude, NeighborList out) {
+        if (level == depth) {
+            scanLeaf(node, q, exclude, out);
+            return;
+        }
+        int left = 2 * node + 1;
+        int right = left + 1;
+        double bl = Metric.boxKey(base, lo, hi, left * d, q, d);
+        double br = Metric.boxKey(base, lo, hi, right * d, q, d);
+        int first = bl <= br ? left : right;
+        int second = bl <= br ? right : left;
+        double bSecond = Math.max(bl, br);
+        if (Math.min(bl, br) <= out.bound()) {
+            visit(first, level + 1, q, exclude, out);
+        }
+        if (bSecond <= out.bound()) {
+            visit(second, level + 1, q, exclude, out);
+        }
+    }
+
+    private void scanLeaf(int node, double[] q, int exclude, NeighborList out) {
+        int to = end[node];
+        for (int i = start[node]; i < to; i++) {
+            double key = Metric.key(base, treeCoords, i, q, d);
+            if (key <= out.bound() && treePos[i] != exclude) {
+                out.offer(key, treePos[i]);
+            }
+        }
+    }
+
+    @Override
+    public int size() {
+        return n;
+    }
+
+    @Override
+    public int dimensions() {
+        return d;
+    }
+
+    @Override
+    public Metric metric() {
+        return base;
+    }
+}
