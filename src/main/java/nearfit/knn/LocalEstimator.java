@@ -133,7 +133,8 @@ final class LocalEstimator {
                     weight[i] = 1 / metric.distanceOfKey(key[i]);
                 }
             }
-        } else if (w == Weighting.TRICUBE && e < count) {
+        } else if (w == Weighting.TRICUBE && e < count
+                && metric.distanceOfKey(key[e]) > metric.distanceOfKey(key[e - 1])) {
             double h = metric.distanceOfKey(key[e]); // first neighbour beyond the k-th distance
             for (int i = 0; i < n; i++) {
                 double r = metric.distanceOfKey(key[i]) / h;

@@ -133,27 +133,36 @@ public final class ReferenceData {
         return new ReferenceData(names.clone(), responseName, keptIn, keptY, keptC, classCount, ids, dropped, n - m);
     }
 
-    /** Sorts the kept row indexes lexicographically: input 0, ..., input d-1, response (LSD, stable). */
+    /**
+     * Sorts the kept row indexes lexicographically: input 0, ..., input d-1, response. LSD: one
+     * stable radix pass per key from the last; each pass sorts the keys laid out in the current
+     * order, since the library's stability is with respect to array index.
+     */
     private static void canonicalOrder(int[] kept, double[][] in, double[] y, int[] codes) {
         int m = kept.length;
+        int[] order = new int[m];
         int[] perm = new int[m];
         double[] key = new double[m];
         int[] next = new int[m];
         for (int i = 0; i < m; i++) {
-            perm[i] = i;
+            order[i] = kept[i];
         }
         for (int j = in.length; j >= 0; j--) {
             for (int i = 0; i < m; i++) {
-                int r = kept[i];
+                int r = order[i];
                 // +0.0 turns -0.0 into 0.0: equal values must sort as equal.
                 key[i] = j == in.length ? (y != null ? y[r] + 0.0 : codes[r]) : in[j][r] + 0.0;
+                perm[i] = i;
             }
             DoubleArrays.radixSortIndirect(perm, key, true);
+            for (int i = 0; i < m; i++) {
+                next[i] = order[perm[i]];
+            }
+            int[] t = order;
+            order = next;
+            next = t;
         }
-        for (int i = 0; i < m; i++) {
-            next[i] = kept[perm[i]];
-        }
-        System.arraycopy(next, 0, kept, 0, m);
+        System.arraycopy(order, 0, kept, 0, m);
     }
 
     /** Number of kept rows. */
