@@ -5,8 +5,8 @@ package nearfit.knn;
  * coordinates. The tree is implicit and balanced: node i has children 2i+1 and 2i+2, every leaf
  * sits at depth {@code depth} and holds at most {@link #LEAF_SIZE} rows. Each node splits its rows
  * at the median of its widest coordinate (selection on an int permutation) and stores its bounding
- * box, which gives an exact lower bound on the key for every metric. The coordinates are copied in
- * tree order so a leaf scan reads memory in sequence.
+ * box, which gives an exact lower bound on the key for every metric. The coordinates are moved into tree
+ * order while building, so both the build and a leaf scan read memory in sequence.
  */
 public final class KdTree implements NeighborIndex {
     /** Rows per leaf at most. */
@@ -45,35 +45,34 @@ public final class KdTree implements NeighborIndex {
             depth++;
         }
         int nodes = (1 << (depth + 1)) - 1;
-        int[] perm = new int[n];
-        for (int i = 0; i < n; i++) {
-            perm[i] = i;
-        }
-        Builder b = new Builder(coords, d, depth, perm, nodes);
+        Builder b = new Builder(coords.clone(), d, depth, n, nodes);
         b.build(0, 0, n, 0, Math.max(1, threads));
-        double[] tc = new double[n * d];
-        for (int i = 0; i < n; i++) {
-            System.arraycopy(coords, perm[i] * d, tc, i * d, d);
-        }
-        return new KdTree(d, n, base.base(), depth, b.start, b.end, b.lo, b.hi, tc, perm);
+        return new KdTree(d, n, base.base(), depth, b.start, b.end, b.lo, b.hi, b.rows, b.pos);
     }
 
-    /** The build state; each node's slots are written by exactly one thread. */
+    /**
+     * The build state. Rows are moved physically (d doubles and a position per swap) rather than
+     * through an index permutation, so every pass over a node reads memory in sequence; each
+     * node's slots and row range are written by exactly one thread.
+     */
     private static final class Builder {
-        final double[] coords;
+        final double[] rows;
+        final int[] pos;
         final int d;
         final int depth;
-        final int[] perm;
         final int[] start;
         final int[] end;
         final double[] lo;
         final double[] hi;
 
-        Builder(double[] coords, int d, int depth, int[] perm, int nodes) {
-            this.coords = coords;
+        Builder(double[] rows, int d, int depth, int n, int nodes) {
+            this.rows = rows;
             this.d = d;
             this.depth = depth;
-            this.perm = perm;
+            this.pos = new int[n];
+            for (int i = 0; i < n; i++) {
+                pos[i] = i;
+            }
             this.start = new int[nodes];
             this.end = new int[nodes];
             this.lo = new double[nodes * d];
@@ -118,9 +117,9 @@ public final class KdTree implements NeighborIndex {
                 hi[o + j] = Double.NEGATIVE_INFINITY;
             }
             for (int i = from; i < to; i++) {
-                int p = perm[i] * d;
+                int p = i * d;
                 for (int j = 0; j < d; j++) {
-                    double v = coords[p + j];
+                    double v = rows[p + j];
                     if (v < lo[o + j]) {
                         lo[o + j] = v;
                     }
@@ -144,46 +143,51 @@ public final class KdTree implements NeighborIndex {
             return best;
         }
 
-        private double v(int i, int dim) {
-            return coords[perm[i] * d + dim];
-        }
-
-        /** Quickselect with a three-way partition, so runs of equal values cost linear time. */
+        /**
+         * Hoare-partition quickselect (Wirth's FIND): stops on equal keys from both sides, so runs
+         * of equal values still split evenly and cost linear time; swaps only misplaced rows.
+         */
         private void select(int from, int to, int kth, int dim) {
             int l = from;
             int r = to - 1;
             while (l < r) {
-                double a = v(l, dim);
-                double b = v((l + r) >>> 1, dim);
-                double c = v(r, dim);
+                double a = rows[l * d + dim];
+                double b = rows[((l + r) >>> 1) * d + dim];
+                double c = rows[r * d + dim];
                 double pivot = Math.max(Math.min(a, b), Math.min(Math.max(a, b), c));
-                int lt = l;
-                int gt = r;
                 int i = l;
-                while (i <= gt) {
-                    double x = v(i, dim);
-                    if (x < pivot) {
-                        swap(lt++, i++);
-                    } else if (x > pivot) {
-                        swap(i, gt--);
-                    } else {
+                int j = r;
+                while (i <= j) {
+                    while (rows[i * d + dim] < pivot) {
                         i++;
                     }
+                    while (rows[j * d + dim] > pivot) {
+                        j--;
+                    }
+                    if (i <= j) {
+                        swap(i++, j--);
+                    }
                 }
-                if (kth < lt) {
-                    r = lt - 1;
-                } else if (kth > gt) {
-                    l = gt + 1;
-                } else {
-                    return;
+                if (j < kth) {
+                    l = i;
+                }
+                if (kth < i) {
+                    r = j;
                 }
             }
         }
 
         private void swap(int i, int j) {
-            int t = perm[i];
-            perm[i] = perm[j];
-            perm[j] = t;
+            int a = i * d;
+            int b = j * d;
+            for (int k = 0; k < d; k++) {
+                double t = rows[a + k];
+                rows[a + k] = rows[b + k];
+                rows[b + k] = t;
+            }
+            int t = pos[i];
+            pos[i] = pos[j];
+            pos[j] = t;
         }
     }
 
@@ -201,8 +205,8 @@ public final class KdTree implements NeighborIndex {
         }
         int left = 2 * node + 1;
         int right = left + 1;
-        double bl = Metric.boxKey(base, lo, hi, left * d, q, d);
-        double br = Metric.boxKey(base, lo, hi, right * d, q, d);
+        double bl = boxKey(left, q);
+        double br = boxKey(right, q);
         int first = bl <= br ? left : right;
         int second = bl <= br ? right : left;
         double bSecond = Math.max(bl, br);
@@ -214,8 +218,36 @@ public final class KdTree implements NeighborIndex {
         }
     }
 
+    /** The box bound; Euclidean written out branch-free (the same values as {@link Metric#boxKey}). */
+    private double boxKey(int node, double[] q) {
+        if (base != Metric.EUCLIDEAN) {
+            return Metric.boxKey(base, lo, hi, node * d, q, d);
+        }
+        int o = node * d;
+        double s = 0;
+        for (int j = 0; j < d; j++) {
+            double g = Math.max(0.0, Math.max(lo[o + j] - q[j], q[j] - hi[o + j]));
+            s += g * g;
+        }
+        return s;
+    }
+
     private void scanLeaf(int node, double[] q, int exclude, NeighborList out) {
         int to = end[node];
+        if (base == Metric.EUCLIDEAN) {
+            for (int i = start[node]; i < to; i++) {
+                int o = i * d;
+                double key = 0;
+                for (int j = 0; j < d; j++) {
+                    double t = treeCoords[o + j] - q[j];
+                    key += t * t;
+                }
+                if (key <= out.bound() && treePos[i] != exclude) {
+                    out.offer(key, treePos[i]);
+                }
+            }
+            return;
+        }
         for (int i = start[node]; i < to; i++) {
             double key = Metric.key(base, treeCoords, i, q, d);
             if (key <= out.bound() && treePos[i] != exclude) {

@@ -113,26 +113,88 @@ public final class KnnModel {
      */
     public Estimates estimateAll(double[][] columns, Progress progress) {
         requireNumeric();
-        int d = data.dimensions();
         int n = columns[0].length;
+        int d = data.dimensions();
+        double[] q = transformAll(columns);
+        int[] order = QueryOrder.of(q, d, n);
         Estimates out = Estimates.ofSize(n);
         Workers.run(n, settings.threads(), () -> new Object[] {searcher(), new double[d]}, (sc, c, from, to) -> {
             Searcher s = (Searcher) sc[0];
-            double[] raw = (double[]) sc[1];
-            for (int i = from; i < to; i++) {
-                boolean nan = false;
-                for (int j = 0; j < d; j++) {
-                    raw[j] = columns[j][i];
-                    nan |= Double.isNaN(raw[j]);
-                }
-                if (nan) {
+            double[] p = (double[]) sc[1];
+            for (int r = from; r < to; r++) {
+                int i = order[r];
+                if (!point(q, i, p)) {
                     markMissing(out, i);
                 } else {
-                    s.estimateAt(s.transformed(raw), -1, out, i);
+                    s.estimateAt(p, -1, out, i);
                 }
             }
         }, progress);
         return out;
+    }
+
+    /**
+     * The first k neighbours (k from the settings) of many raw points given as one column per
+     * input, in parallel; a point with a NaN coordinate gets row id -1, distance NaN, count 0.
+     */
+    public NeighborTable neighborsAll(double[][] columns, Progress progress) {
+        int n = columns[0].length;
+        int d = data.dimensions();
+        int k = settings.k();
+        double[] q = transformAll(columns);
+        int[] order = QueryOrder.of(q, d, n);
+        int[] ids = new int[n * k];
+        double[] dist = new double[n * k];
+        int[] counted = new int[n];
+        int[] rowIds = data.rowIds();
+        Metric metric = settings.metric();
+        Workers.run(n, settings.threads(), () -> new Object[] {new NeighborList(), new double[d]}, (sc, c, from, to) -> {
+            NeighborList list = (NeighborList) sc[0];
+            double[] p = (double[]) sc[1];
+            for (int r = from; r < to; r++) {
+                int i = order[r];
+                if (!point(q, i, p)) {
+                    java.util.Arrays.fill(ids, i * k, i * k + k, -1);
+                    java.util.Arrays.fill(dist, i * k, i * k + k, Double.NaN);
+                    continue;
+                }
+                index.search(p, k, -1, list);
+                for (int j = 0; j < k; j++) {
+                    ids[i * k + j] = rowIds[list.position(j)];
+                    dist[i * k + j] = metric.distanceOfKey(list.key(j));
+                }
+                counted[i] = list.count();
+            }
+        }, progress);
+        return new NeighborTable(k, ids, dist, counted);
+    }
+
+    /** Raw columns to packed coordinates (n*d); NaN stays NaN. */
+    private double[] transformAll(double[][] columns) {
+        int d = data.dimensions();
+        int n = columns[0].length;
+        double[] q = new double[n * d];
+        double[] raw = new double[d];
+        double[] out = new double[d];
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < d; j++) {
+                raw[j] = columns[j][i];
+            }
+            transform.apply(raw, out);
+            System.arraycopy(out, 0, q, i * d, d);
+        }
+        return q;
+    }
+
+    /** Copies query i into p; false when a coordinate is NaN. */
+    private static boolean point(double[] q, int i, double[] p) {
+        int d = p.length;
+        boolean ok = true;
+        for (int j = 0; j < d; j++) {
+            p[j] = q[i * d + j];
+            ok &= !Double.isNaN(p[j]);
+        }
+        return ok;
     }
 
     private static void markMissing(Estimates out, int i) {

@@ -1,6 +1,8 @@
 package nearfit.knn;
 
 import it.unimi.dsi.fastutil.doubles.DoubleArrays;
+import it.unimi.dsi.fastutil.ints.IntArrays;
+import it.unimi.dsi.fastutil.ints.IntComparator;
 import java.util.Arrays;
 import nearfit.table.NearfitException;
 
@@ -10,7 +12,7 @@ import nearfit.table.NearfitException;
  *
  * <p>A row is kept when every input and the response are present: not NaN for numbers, a code
  * {@code >= 0} for a category. Kept rows are stored in a <em>canonical order</em> (ascending by
- * input 0, then input 1, ..., then the response), so every sum the engine takes runs in an order
+ * input 0, then input 1, ..., then the response, then the row id), so every sum the engine takes runs in an order
  * that does not depend on the order the rows arrived in: shuffling the rows changes no result,
  * bit for bit. Arrays handed out are the stored ones; callers must not change them.
  */
@@ -109,7 +111,7 @@ public final class ReferenceData {
             }
         }
         kept = Arrays.copyOf(kept, m);
-        canonicalOrder(kept, in, y, codes);
+        canonicalOrder(kept, in, y, codes, rowIds);
         double[][] keptIn = new double[d][m];
         for (int j = 0; j < d; j++) {
             double[] src = in[j];
@@ -134,33 +136,45 @@ public final class ReferenceData {
     }
 
     /**
-     * Sorts the kept row indexes lexicographically: input 0, ..., input d-1, response. LSD: one
-     * stable radix pass per key from the last; each pass sorts the keys laid out in the current
-     * order, since the library's stability is with respect to array index.
+     * Sorts the kept row indexes lexicographically by input 0, ..., input d-1, response, row id:
+     * one radix pass on input 0, then a comparison sort inside each run of equal input-0 values
+     * (runs are short for measured data, long for coarse data; both stay O(n log n)).
      */
-    private static void canonicalOrder(int[] kept, double[][] in, double[] y, int[] codes) {
+    private static void canonicalOrder(int[] kept, double[][] in, double[] y, int[] codes, int[] rowIds) {
         int m = kept.length;
-        int[] order = new int[m];
         int[] perm = new int[m];
         double[] key = new double[m];
-        int[] next = new int[m];
+        double[] x0 = in[0];
         for (int i = 0; i < m; i++) {
-            order[i] = kept[i];
+            key[i] = x0[kept[i]] + 0.0; // +0.0 turns -0.0 into 0.0: equal values sort as equal
+            perm[i] = i;
         }
-        for (int j = in.length; j >= 0; j--) {
-            for (int i = 0; i < m; i++) {
-                int r = order[i];
-                // +0.0 turns -0.0 into 0.0: equal values must sort as equal.
-                key[i] = j == in.length ? (y != null ? y[r] + 0.0 : codes[r]) : in[j][r] + 0.0;
-                perm[i] = i;
+        DoubleArrays.radixSortIndirect(perm, key, false);
+        int[] order = new int[m];
+        for (int i = 0; i < m; i++) {
+            order[i] = kept[perm[i]];
+        }
+        IntComparator rest = (a, b) -> {
+            for (int j = 1; j < in.length; j++) {
+                int c = Double.compare(in[j][a] + 0.0, in[j][b] + 0.0);
+                if (c != 0) {
+                    return c;
+                }
             }
-            DoubleArrays.radixSortIndirect(perm, key, true);
-            for (int i = 0; i < m; i++) {
-                next[i] = order[perm[i]];
+            int c = y != null ? Double.compare(y[a] + 0.0, y[b] + 0.0) : Integer.compare(codes[a], codes[b]);
+            if (c != 0) {
+                return c;
             }
-            int[] t = order;
-            order = next;
-            next = t;
+            return rowIds == null ? Integer.compare(a, b) : Integer.compare(rowIds[a], rowIds[b]);
+        };
+        int from = 0;
+        for (int i = 1; i <= m; i++) {
+            if (i == m || x0[order[i]] + 0.0 != x0[order[from]] + 0.0) {
+                if (i - from > 1) {
+                    IntArrays.quickSort(order, from, i, rest);
+                }
+                from = i;
+            }
         }
         System.arraycopy(order, 0, kept, 0, m);
     }
