@@ -18,12 +18,12 @@ public final class KdTree implements NeighborIndex {
     private final int depth;
     private final int[] start;
     private final int[] end;
-    private final double[] lo;
-    private final double[] hi;
+    /** Per node, per dimension: min then max, interleaved so a node's box fills adjacent memory. */
+    private final double[] box;
     private final double[] treeCoords;
     private final int[] treePos;
 
-    private KdTree(int d, int n, Metric base, int depth, int[] start, int[] end, double[] lo, double[] hi,
+    private KdTree(int d, int n, Metric base, int depth, int[] start, int[] end, double[] box,
                    double[] treeCoords, int[] treePos) {
         this.d = d;
         this.n = n;
@@ -31,8 +31,7 @@ public final class KdTree implements NeighborIndex {
         this.depth = depth;
         this.start = start;
         this.end = end;
-        this.lo = lo;
-        this.hi = hi;
+        this.box = box;
         this.treeCoords = treeCoords;
         this.treePos = treePos;
     }
@@ -47,7 +46,12 @@ public final class KdTree implements NeighborIndex {
         int nodes = (1 << (depth + 1)) - 1;
         Builder b = new Builder(coords.clone(), d, depth, n, nodes);
         b.build(0, 0, n, 0, Math.max(1, threads));
-        return new KdTree(d, n, base.base(), depth, b.start, b.end, b.lo, b.hi, b.rows, b.pos);
+        double[] box = new double[nodes * 2 * d];
+        for (int i = 0; i < nodes * d; i++) {
+            box[2 * i] = b.lo[i];
+            box[2 * i + 1] = b.hi[i];
+        }
+        return new KdTree(d, n, base.base(), depth, b.start, b.end, box, b.rows, b.pos);
     }
 
     /**
@@ -221,12 +225,12 @@ public final class KdTree implements NeighborIndex {
     /** The box bound; Euclidean written out branch-free (the same values as {@link Metric#boxKey}). */
     private double boxKey(int node, double[] q) {
         if (base != Metric.EUCLIDEAN) {
-            return Metric.boxKey(base, lo, hi, node * d, q, d);
+            return Metric.boxKey(base, box, node * 2 * d, q, d);
         }
-        int o = node * d;
+        int o = node * 2 * d;
         double s = 0;
         for (int j = 0; j < d; j++) {
-            double g = Math.max(0.0, Math.max(lo[o + j] - q[j], q[j] - hi[o + j]));
+            double g = Math.max(0.0, Math.max(box[o + 2 * j] - q[j], q[j] - box[o + 2 * j + 1]));
             s += g * g;
         }
         return s;

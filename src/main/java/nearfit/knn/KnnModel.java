@@ -13,6 +13,7 @@ public final class KnnModel {
     private final InputTransform transform;
     private final double[] coords;
     private final NeighborIndex index;
+    private final double[] classValues;
 
     private KnnModel(ReferenceData data, KnnSettings settings, InputTransform transform, double[] coords,
                      NeighborIndex index) {
@@ -21,6 +22,20 @@ public final class KnnModel {
         this.transform = transform;
         this.coords = coords;
         this.index = index;
+        this.classValues = data.isCategory() ? codesAsValues(data.classes()) : null;
+    }
+
+    private static double[] codesAsValues(int[] codes) {
+        double[] v = new double[codes.length];
+        for (int i = 0; i < codes.length; i++) {
+            v[i] = codes[i];
+        }
+        return v;
+    }
+
+    /** Class codes as doubles, for the estimator's (key, value) order; null for a numeric response. */
+    double[] classValues() {
+        return classValues;
     }
 
     /**

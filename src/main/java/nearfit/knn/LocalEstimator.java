@@ -27,7 +27,7 @@ final class LocalEstimator {
         this.metric = metric;
     }
 
-    /** Loads a neighbour list with the values (responses or class codes) at its positions. */
+    /** Loads a neighbour list with the values (responses, or class codes as doubles) at its positions. */
     void load(NeighborList list, double[] values) {
         int n = list.count();
         ensure(n);
@@ -36,21 +36,6 @@ final class LocalEstimator {
         for (int i = 0; i < n; i++) {
             key[i] = keys[i];
             val[i] = values[pos[i]];
-        }
-        count = n;
-        PairSort.sort(key, val, 0, n);
-        preparedFor = null;
-    }
-
-    /** Loads a list of class codes. */
-    void loadClasses(NeighborList list, int[] classes) {
-        int n = list.count();
-        ensure(n);
-        double[] keys = list.keys();
-        int[] pos = list.positions();
-        for (int i = 0; i < n; i++) {
-            key[i] = keys[i];
-            val[i] = classes[pos[i]];
         }
         count = n;
         PairSort.sort(key, val, 0, n);

@@ -63,19 +63,21 @@ public enum Metric {
     }
 
     /**
-     * A lower bound on the key from {@code q} to any point of the box {@code [lo, hi]} stored at
-     * offset {@code off}. Computed with the same operations in the same order as {@link #key}, so
+     * A lower bound on the key from {@code q} to any point of the box stored at offset
+     * {@code off} as (min, max) pairs per dimension. Computed with the same operations in the same order as {@link #key}, so
      * by monotone rounding it never exceeds the key of a point inside.
      */
-    static double boxKey(Metric base, double[] lo, double[] hi, int off, double[] q, int d) {
+    static double boxKey(Metric base, double[] box, int off, double[] q, int d) {
         double s = 0;
         for (int j = 0; j < d; j++) {
             double g;
             double qj = q[j];
-            if (qj < lo[off + j]) {
-                g = lo[off + j] - qj;
-            } else if (qj > hi[off + j]) {
-                g = qj - hi[off + j];
+            double lo = box[off + 2 * j];
+            double hi = box[off + 2 * j + 1];
+            if (qj < lo) {
+                g = lo - qj;
+            } else if (qj > hi) {
+                g = qj - hi;
             } else {
                 continue;
             }

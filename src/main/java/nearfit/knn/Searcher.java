@@ -51,7 +51,7 @@ public final class Searcher {
         model.transform().apply(raw, coords);
         int k = model.settings().k();
         find(coords, k, -1);
-        estimator.loadClasses(list, model.data().classes());
+        estimator.load(list, model.classValues());
         estimator.prepare(model.settings().weighting(), k);
         int winner = estimator.vote(k, shares, nearest);
         return new ClassVote(winner, shares.clone(), estimator.counted(k));

@@ -251,16 +251,8 @@ public final class Tuning {
             int c = Math.max(1, data.classCount());
             this.shares = new double[c];
             this.nearest = new double[c];
-            double[] v = y != null ? y : toDouble(classes);
+            double[] v = y != null ? y : model.classValues();
             this.indexValues = map == null ? v : gather(v, map);
-        }
-
-        private static double[] toDouble(int[] c) {
-            double[] v = new double[c.length];
-            for (int i = 0; i < c.length; i++) {
-                v[i] = c[i];
-            }
-            return v;
         }
 
         private static double[] gather(double[] v, int[] map) {

@@ -252,4 +252,35 @@ class KnnModelTest {
         assertTrue(t.errorRate()[0] >= 0 && t.errorRate()[0] <= 1);
         assertTrue(Double.isNaN(t.rmse()[0]));
     }
+
+    @Test
+    void batchNeighboursEqualOnePointSearchesAndMarkMissingPoints() {
+        KnnModel m = KnnModel.fit(TuningTest.coarse(12, 3000, 3), KnnSettings.defaults().withK(4));
+        Random r = new Random(12);
+        int n = 300;
+        double[][] q = new double[3][n];
+        for (int j = 0; j < 3; j++) {
+            for (int i = 0; i < n; i++) {
+                q[j][i] = r.nextDouble() * 8;
+            }
+        }
+        q[1][7] = Double.NaN;
+        NeighborTable t = m.neighborsAll(q, Progress.NONE);
+        Estimates e = m.estimateAll(q, Progress.NONE);
+        Searcher s = m.searcher();
+        for (int i = 0; i < n; i++) {
+            if (i == 7) {
+                assertEquals(-1, t.rowIds()[i * 4]);
+                assertTrue(Double.isNaN(e.fit()[i]));
+                continue;
+            }
+            NeighborList nl = s.neighbors(new double[] {q[0][i], q[1][i], q[2][i]});
+            assertEquals(nl.count(), t.counted()[i]);
+            for (int j = 0; j < 4; j++) {
+                assertEquals(s.rowId(nl.position(j)), t.rowIds()[i * 4 + j]);
+                assertEquals(Math.sqrt(nl.key(j)), t.distances()[i * 4 + j], 0);
+            }
+            assertEquals(s.estimate(new double[] {q[0][i], q[1][i], q[2][i]}), e.at(i));
+        }
+    }
 }
