@@ -10,7 +10,8 @@ import nearfit.table.NearfitException;
  * The reference rows a model is fitted on: the kept rows' inputs, response and row ids, and how
  * many rows were left out for a missing value.
  *
- * <p>A row is kept when every input and the response are present: not NaN for numbers, a code
+ * <p>A row is kept when every input and the response are present: finite for numbers (NaN and
+ * infinities count as missing: an infinite reading cannot be placed or averaged), a code
  * {@code >= 0} for a category. Kept rows are stored in a <em>canonical order</em> (ascending by
  * input 0, then input 1, ..., then the response, then the row id), so every sum the engine takes runs in an order
  * that does not depend on the order the rows arrived in: shuffling the rows changes no result,
@@ -97,12 +98,12 @@ public final class ReferenceData {
         for (int i = 0; i < n; i++) {
             boolean ok = true;
             for (int j = 0; j < d; j++) {
-                if (Double.isNaN(in[j][i])) {
+                if (!Double.isFinite(in[j][i])) {
                     dropped[j]++;
                     ok = false;
                 }
             }
-            if (y != null ? Double.isNaN(y[i]) : codes[i] < 0) {
+            if (y != null ? !Double.isFinite(y[i]) : codes[i] < 0) {
                 dropped[d]++;
                 ok = false;
             }

@@ -1,0 +1,147 @@
+package nearfit.knn;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.Random;
+
+import net.jqwik.api.Arbitraries;
+import net.jqwik.api.Arbitrary;
+import net.jqwik.api.Combinators;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.Provide;
+import nearfit.table.NearfitException;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The engine's promise: a query with finite inputs against a reference with at least k usable rows gets
+ * a finite fit and window width, whatever the settings, duplicates, constant inputs or scales.
+ */
+class KnnRobustnessTest {
+
+    /** A reference drawn from a seed: n rows, d inputs, some with heavy duplication or a constant column. */
+    record Case(long seed, int n, int d, int k, int shape, KnnSettings settings) {
+        double[][] inputs() {
+            Random r = new Random(seed);
+            double[][] x = new double[d][n];
+            for (int j = 0; j < d; j++) {
+                double scale = Math.pow(10, r.nextInt(9) - 3); // 1e-3 .. 1e5: units from m/s to Pa
+                for (int i = 0; i < n; i++) {
+                    x[j][i] = switch ((shape + j) % 4) {
+                        case 0 -> r.nextGaussian() * scale;
+                        case 1 -> Math.floor(r.nextDouble() * 3) * scale; // three distinct values: many ties
+                        case 2 -> j == 0 ? scale : r.nextDouble() * scale; // first input constant
+                        default -> i % 2 == 0 ? 0.0 : r.nextDouble() * scale;
+                    };
+                }
+            }
+            return x;
+        }
+
+        double[] response() {
+            Random r = new Random(~seed);
+            double[] y = new double[n];
+            for (int i = 0; i < n; i++) {
+                y[i] = shape == 3 ? 42.0 : r.nextGaussian() * 500 + 1000;
+            }
+            return y;
+        }
+    }
+
+    @Provide
+    Arbitrary<Case> cases() {
+        Arbitrary<KnnSettings> settings = Combinators.combine(Arbitraries.of(Metric.class),
+                Arbitraries.of(Weighting.class), Arbitraries.of(Scaling.class), Arbitraries.of(Band.class))
+                .as((m, w, s, b) -> KnnSettings.defaults().withMetric(m).withWeighting(w).withScaling(s).withBand(b)
+                        .withThreads(1));
+        return Combinators.combine(Arbitraries.longs(), Arbitraries.integers().between(1, 120),
+                Arbitraries.integers().between(1, 3), Arbitraries.integers().between(1, 30),
+                Arbitraries.integers().between(0, 3), settings)
+                .as((seed, extra, d, k, shape, s) -> new Case(seed, k + extra - 1, d, k, shape, s.withK(k)));
+    }
+
+    private static String[] names(int d) {
+        String[] n = new String[d];
+        for (int j = 0; j < d; j++) {
+            n[j] = "input_" + j;
+        }
+        return n;
+    }
+
+    /**
+     * A fit may refuse inputs it cannot scale (a constant input, a MAD of 0, a singular covariance), but
+     * only with a message naming the input, never by returning NaN.
+     */
+    private static void assertNamesAnInput(NearfitException refused) {
+        assertTrue(refused.getMessage().contains("input_"), refused.getMessage());
+    }
+
+    @Property(tries = 300)
+    void aFiniteQueryWithAtLeastKRowsGetsAFiniteFit(@ForAll("cases") Case c) {
+        ReferenceData data = ReferenceData.numeric(names(c.d()), c.inputs(), "response", c.response(), null);
+        KnnModel model;
+        try {
+            model = KnnModel.fit(data, c.settings());
+        } catch (NearfitException refused) {
+            assertNamesAnInput(refused);
+            return;
+        }
+        Random r = new Random(c.seed() + 1);
+        double[][] x = c.inputs();
+        for (int q = 0; q < 8; q++) {
+            double[] point = new double[c.d()];
+            for (int j = 0; j < c.d(); j++) {
+                // At a reference value, between values, and far outside the reference's range.
+                double v = x[j][r.nextInt(c.n())];
+                point[j] = q % 3 == 0 ? v : q % 3 == 1 ? v * (1 + r.nextGaussian()) : v * 1e4 + 1e4;
+            }
+            Estimate e = model.estimate(point);
+            assertTrue(Double.isFinite(e.fit()), () -> "fit " + e + " at " + java.util.Arrays.toString(point));
+            assertTrue(Double.isFinite(e.windowWidth()), () -> "window " + e);
+            assertTrue(e.neighbourCount() >= c.k(), () -> "neighbours " + e);
+        }
+    }
+
+    @Property(tries = 60)
+    void leaveOneOutFitsAreFiniteWhenEveryRowHasKOthers(@ForAll("cases") Case c) {
+        ReferenceData data = ReferenceData.numeric(names(c.d()), c.inputs(), "response", c.response(), null);
+        if (c.n() <= c.k() || c.settings().metric() == Metric.MAHALANOBIS) {
+            return; // leave-one-out needs k other rows; Mahalanobis refusals are covered above
+        }
+        KnnModel model;
+        try {
+            model = KnnModel.fit(data, c.settings());
+        } catch (NearfitException refused) {
+            assertNamesAnInput(refused);
+            return;
+        }
+        FlagResult f = Flags.leaveOneOut(model, Progress.NONE);
+        for (int i = 0; i < f.looFit().length; i++) {
+            assertTrue(Double.isFinite(f.looFit()[i]), "leave-one-out fit of row " + f.rowIds()[i]);
+        }
+    }
+
+    @Test
+    void anInfiniteInputIsDroppedLikeAMissingOneAndLeavesTheOtherFitsFinite() {
+        // An input of 1e999 or "Infinity" in a file: the row cannot be placed, so it is not a neighbour.
+        double[] x = {1, 2, 3, 4, Double.POSITIVE_INFINITY, 6, 7, 8};
+        double[] y = {10, 20, 30, 40, 50, 60, 70, 80};
+        ReferenceData data = ReferenceData.numeric(new String[] {"wind_ms"}, new double[][] {x}, "power_kw", y, null);
+        assertEquals(7, data.size());
+        assertEquals(1, data.droppedPerColumn()[0]);
+        KnnModel m = KnnModel.fit(data, KnnSettings.defaults().withK(2).withThreads(1));
+        assertEquals(15.0, m.estimate(1.5).fit(), 1e-12);
+    }
+
+    @Test
+    void anInfiniteResponseIsDroppedLikeAMissingOne() {
+        double[] x = {1, 2, 3, 4, 5};
+        double[] y = {10, 20, Double.NEGATIVE_INFINITY, 40, 50};
+        ReferenceData data = ReferenceData.numeric(new String[] {"wind_ms"}, new double[][] {x}, "power_kw", y, null);
+        assertEquals(4, data.size());
+        assertEquals(1, data.droppedPerColumn()[1]);
+        KnnModel m = KnnModel.fit(data, KnnSettings.defaults().withK(2).withThreads(1));
+        assertTrue(Double.isFinite(m.estimate(3.0).fit()));
+    }
+}
