@@ -66,8 +66,10 @@ final class ColumnBuilder {
         switch (type) {
             case NUMBER -> {
                 double v = CellText.parseNumber(b, s, e, decimalComma, scratchInUse ? b : scratch);
-                numbers.add(v);
-                return countBad(Double.isNaN(v));
+                // A reading is never infinite: Infinity or 1e999 is a bad cell, read as missing.
+                boolean bad = !Double.isFinite(v);
+                numbers.add(bad ? Double.NaN : v);
+                return countBad(bad);
             }
             case TIME -> {
                 long t = TimeParser.parse(b, s, e);
