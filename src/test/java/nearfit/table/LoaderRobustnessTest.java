@@ -1,0 +1,139 @@
+package nearfit.table;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTimeoutPreemptively;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.BufferedWriter;
+import java.io.IOException;
+import java.io.RandomAccessFile;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.concurrent.atomic.AtomicBoolean;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** The loader on inputs that are large, odd or change under it: counted bad cells or one located message. */
+class LoaderRobustnessTest {
+    /** A hang detector, not a speed bound: the slowest case here takes a few seconds. */
+    private static final Duration HANG = Duration.ofSeconds(120);
+
+    @TempDir
+    Path dir;
+
+    private Path numbers(String name, int rows) throws IOException {
+        Path p = dir.resolve(name);
+        try (BufferedWriter w = Files.newBufferedWriter(p, StandardCharsets.UTF_8)) {
+            w.write("wind_ms,power_kw\n");
+            for (int i = 0; i < rows; i++) {
+                w.write((i % 250) / 10.0 + "," + (i % 2000) + ".5\n");
+            }
+        }
+        return p;
+    }
+
+    @Test
+    void everySpellingOfInfinityIsABadCellSoTheSummaryStaysFinite() {
+        String[] spellings = {"Infinity", "-Infinity", "inf", "-inf", "+Inf", "INF", "1e999", "-1e999", "infinity"};
+        StringBuilder sb = new StringBuilder("wind_ms,power_kw\n");
+        for (int i = 0; i < 200; i++) {
+            String w = i % 20 == 5 && i / 20 < spellings.length ? spellings[i / 20] : Double.toString(3 + i % 10);
+            sb.append(w).append(',').append(i).append('\n');
+        }
+        Table t = CsvFiles.load(dir, sb.toString());
+        Column wind = t.column("wind_ms");
+        assertEquals(ColumnType.NUMBER, wind.type());
+        assertEquals(spellings.length, wind.badCount());
+        ColumnSummary s = ColumnSummary.of(wind);
+        assertEquals(3.0, s.min(), 0);
+        assertEquals(12.0, s.max(), 0);
+        assertTrue(Double.isFinite(s.mean()) && Double.isFinite(s.sd()), s.toString());
+    }
+
+    @Test
+    void aColumnThatTurnsToTextAfterAMillionRowsCountsBadCellsWithTheirLines() throws IOException {
+        Path p = dir.resolve("turns.csv");
+        int rows = 1_000_000;
+        try (BufferedWriter w = Files.newBufferedWriter(p, StandardCharsets.UTF_8)) {
+            w.write("wind_ms,status\n");
+            for (int i = 0; i < rows + 500; i++) {
+                w.write((i % 250) / 10.0 + "," + (i < rows ? Integer.toString(i % 7) : "offline since " + i) + "\n");
+            }
+        }
+        Table t = assertTimeoutPreemptively(HANG, () -> CsvLoader.load(p, "turns.csv", LoadOptions.DEFAULT));
+        assertEquals(rows + 500, t.rowCount());
+        Column status = t.column("status");
+        assertEquals(ColumnType.NUMBER, status.type(), "typed from the first rows");
+        assertEquals(500, status.badCount());
+        BadCell first = t.report().badExamples().get(0);
+        assertEquals(rows + 2, first.line(), "header is line 1, so row index 1 000 000 is line 1 000 002");
+        assertEquals("offline since 1000000", first.text());
+    }
+
+    @Test
+    void aLineOfSeveralMegabytesIsRefusedWithItsLineNumber() throws IOException {
+        Path p = dir.resolve("wide.csv");
+        try (BufferedWriter w = Files.newBufferedWriter(p, StandardCharsets.UTF_8)) {
+            w.write("wind_ms,power_kw\n1,2\n3,\"");
+            for (int i = 0; i < 5 << 20; i++) {
+                w.write('x');
+            }
+            w.write("\"\n5,6\n");
+        }
+        NearfitException ex = assertTimeoutPreemptively(HANG, () -> org.junit.jupiter.api.Assertions.assertThrows(
+                NearfitException.class, () -> CsvLoader.load(p, "wide.csv", LoadOptions.DEFAULT)));
+        assertEquals("wide.csv", ex.file());
+        assertEquals(3, ex.line());
+    }
+
+    /** Truncates the file to a third of its size the first time the loader reports progress. */
+    private static LoadProgress truncateOnFirstReport(Path p, AtomicBoolean done) {
+        return (bytes, total, rows) -> {
+            if (done.compareAndSet(false, true)) {
+                try (RandomAccessFile f = new RandomAccessFile(p.toFile(), "rw")) {
+                    f.setLength(f.length() / 3);
+                } catch (IOException ex) {
+                    throw new java.io.UncheckedIOException(ex);
+                }
+            }
+        };
+    }
+
+    @Test
+    void aFileCutShorterWhileLoadingLoadsWhatIsLeftOrSaysWhereItEnded() throws IOException {
+        for (int threads : new int[] {1, 2}) {
+            Path p = numbers("shrinking-" + threads + ".csv", 3_000_000);
+            AtomicBoolean cut = new AtomicBoolean();
+            LoadOptions o = LoadOptions.builder().threads(threads).progress(truncateOnFirstReport(p, cut)).build();
+            try {
+                Table t = assertTimeoutPreemptively(HANG, () -> CsvLoader.load(p, "shrinking.csv", o));
+                assertTrue(cut.get(), "the file was cut during the load");
+                assertTrue(t.rowCount() > 0 && t.rowCount() < 3_000_000, "rows " + t.rowCount());
+            } catch (NearfitException ex) {
+                assertEquals("shrinking.csv", ex.file(), ex.getMessage());
+            }
+        }
+    }
+
+    @Test
+    void aFileDeletedWhileLoadingIsStillReadWholeThroughTheOpenHandle() throws IOException {
+        // POSIX: unlinking a file leaves its data readable through descriptors already open.
+        Path p = numbers("vanishing.csv", 1_500_000);
+        AtomicBoolean gone = new AtomicBoolean();
+        LoadOptions o = LoadOptions.builder().threads(1).progress((bytes, total, rows) -> {
+            if (gone.compareAndSet(false, true)) {
+                try {
+                    Files.delete(p);
+                } catch (IOException ex) {
+                    throw new java.io.UncheckedIOException(ex);
+                }
+            }
+        }).build();
+        Table t = assertTimeoutPreemptively(HANG, () -> CsvLoader.load(p, "vanishing.csv", o));
+        assertTrue(gone.get());
+        assertEquals(1_500_000, t.rowCount());
+    }
+}
