@@ -1,0 +1,134 @@
+package nearfit.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.BufferedWriter;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
+
+/**
+ * The bad-input corpus (src/test/resources/bad-input, written by its make-corpus.py) through the
+ * commands, in-process through {@link Main#run}: each input ends with exit status 2 and the one line
+ * below, or with status 0 where the input is acceptable, and never with a stack trace.
+ */
+class BadInputCorpusTest {
+    @TempDir
+    Path dir;
+
+    /**
+     * One corpus file and what {@code describe} must do with it. {@code FILE} in a message stands for
+     * the path given on the command line; for status 0 the message is a line the report must contain.
+     */
+    record Case(String file, int status, String message) {
+        @Override
+        public String toString() {
+            return file;
+        }
+    }
+
+    static List<Case> corpus() {
+        return List.of(
+                new Case("empty.csv", 2, "nearfit: FILE: empty file: no header and no rows"),
+                new Case("header-only.csv", 2, "nearfit: FILE: header only: no data rows"),
+                new Case("binary.bin", 2, "nearfit: FILE: not a CSV text file: binary data (a NUL byte) at byte 0"),
+                new Case("truncated.csv.gz", 2, "nearfit: FILE: truncated or damaged gzip stream before any row "
+                        + "(Unexpected end of ZLIB input stream)"),
+                new Case("quote-never-closed.csv", 2, "nearfit: FILE:13: the quote opened on this line is never closed"),
+                // Lines 11 and 12 use ; and tab: each is one field, padded, and its whole text a bad time.
+                new Case("mixed-delimiters.csv", 0, "ragged rows: 2 (2 short, padded with missing; 0 long, extra fields dropped)"),
+                new Case("all-missing-power.csv", 0, "power_kw    number        0       30    0"),
+                new Case("constant-input.csv", 0, "air_temp_c  number       40        0    0"),
+                // NaN, nan, NAN are missing tokens; the ten spellings of infinity are bad cells.
+                new Case("nan-and-infinity.csv", 0, "bad cells: 10 (read as missing)"),
+                // Bytes that are not UTF-8 are decoded with replacement characters, not refused.
+                new Case("latin1-bytes.csv", 0, "latin1-bytes.csv: 30 rows, 5 columns, delimiter comma, header row"),
+                new Case("windows-line-endings.csv", 0, "windows-line-endings.csv: 30 rows, 5 columns, delimiter comma, header row"),
+                new Case("good.csv", 0, "bad cells: 0 (read as missing)"));
+    }
+
+    record Result(int status, String out, String err) {
+    }
+
+    static Result run(String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int status = Main.run(args, new PrintWriter(out), new PrintWriter(err));
+        return new Result(status, out.toString(), err.toString());
+    }
+
+    private Path copy(String name) throws IOException {
+        try (InputStream in = BadInputCorpusTest.class.getResourceAsStream("/bad-input/" + name)) {
+            Path p = dir.resolve(name);
+            Files.write(p, in.readAllBytes());
+            return p;
+        }
+    }
+
+    /** Status 2 with exactly one line and no trace; or status 0 with the expected line in the report. */
+    static void assertOutcome(Case c, Path file, Result r) {
+        assertEquals(c.status(), r.status(), () -> c.file() + ": " + r);
+        assertFalse(r.err().contains("\tat ") || r.err().contains("Exception"), () -> "a stack trace: " + r.err());
+        if (c.status() == 2) {
+            assertEquals(c.message().replace("FILE", file.toString()) + "\n", r.err());
+        } else {
+            assertTrue(r.out().contains(c.message().replace("FILE", file.toString())), () -> r.out());
+        }
+    }
+
+    @ParameterizedTest(name = "describe {0}")
+    @MethodSource("corpus")
+    void describeEndsEachBadInputWithItsStatusAndOneLine(Case c) throws IOException {
+        Path file = copy(c.file());
+        assertOutcome(c, file, run("describe", "--quiet", file.toString()));
+    }
+
+    @Test
+    void describeReportsBytesThatAreNotUtf8AsReplacementCharactersInTheirLabels() throws IOException {
+        Result r = run("describe", "--quiet", copy("latin1-bytes.csv").toString());
+        assertEquals(0, r.status());
+        assertTrue(r.out().contains("turbine: 11 distinct"), r.out());
+    }
+
+    @Test
+    void describeNamesTheLineOfALineOfSeveralMegabytes() throws IOException {
+        Path p = dir.resolve("wide.csv");
+        try (BufferedWriter w = Files.newBufferedWriter(p, StandardCharsets.UTF_8)) {
+            w.write("wind_ms,note\n1,ok\n2,\"");
+            w.write("x".repeat(6 << 20));
+            w.write("\"\n3,ok\n");
+        }
+        Result r = run("describe", "--quiet", p.toString());
+        assertEquals(2, r.status(), r.toString());
+        assertEquals("nearfit: " + p + ":3: line over 1 MB (a quote never closed, or not a CSV file?)\n", r.err());
+    }
+
+    @Test
+    void describeReadsAMillionNumbersFollowedByTextAsBadCellsOfANumberColumn() throws IOException {
+        Path p = dir.resolve("turns.csv");
+        try (BufferedWriter w = Files.newBufferedWriter(p, StandardCharsets.UTF_8)) {
+            w.write("wind_ms,power_kw\n");
+            for (int i = 0; i < 1_000_000; i++) {
+                w.write((i % 250) / 10.0 + "," + (i % 2000) + "\n");
+            }
+            for (int i = 0; i < 40; i++) {
+                w.write("7.5,offline\n");
+            }
+        }
+        Result r = run("describe", "--quiet", p.toString());
+        assertEquals(0, r.status(), r.toString());
+        assertTrue(r.out().contains("bad cells: 40 (read as missing)\n  line 1000002, column power_kw: \"offline\"\n"), r.out());
+    }
+}
