@@ -11,8 +11,14 @@ import net.jqwik.api.Combinators;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.Provide;
+import nearfit.table.CategoryColumn;
+import nearfit.table.CsvLoader;
+import nearfit.table.LoadOptions;
 import nearfit.table.NearfitException;
+import nearfit.table.RowSet;
+import nearfit.table.Table;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 /**
  * The engine's promise: a query with finite inputs against a reference with at least k usable rows gets
@@ -143,5 +149,81 @@ class KnnRobustnessTest {
         assertEquals(1, data.droppedPerColumn()[1]);
         KnnModel m = KnnModel.fit(data, KnnSettings.defaults().withK(2).withThreads(1));
         assertTrue(Double.isFinite(m.estimate(3.0).fit()));
+    }
+
+    @TempDir
+    java.nio.file.Path dir;
+
+    /** A wind-site log with repeated readings (ties), blank cells and a turbine running low. */
+    private static java.util.List<String> siteRows(int n) {
+        Random r = new Random(11);
+        java.util.List<String> rows = new java.util.ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            String turbine = "T0" + (1 + i % 8);
+            double wind = Math.round((3 + r.nextDouble() * 12) * 10) / 10.0; // one decimal: many ties
+            double temp = Math.round(r.nextGaussian() * 50) / 10.0;
+            double power = Math.min(2000, 1.1 * wind * wind * wind) * (turbine.equals("T05") ? 0.9 : 1)
+                    + Math.round(r.nextGaussian() * 300) / 10.0;
+            rows.add(java.time.Instant.ofEpochSecond(1_735_689_600L + 600L * (i / 8)) + "," + turbine + ","
+                    + (i % 97 == 0 ? "" : Double.toString(wind)) + "," + temp + "," + power);
+        }
+        return rows;
+    }
+
+    private Table load(String name, java.util.List<String> rows) throws java.io.IOException {
+        java.nio.file.Path p = dir.resolve(name);
+        java.nio.file.Files.write(p, (String.join("\n", rows) + "\n").getBytes(java.nio.charset.StandardCharsets.UTF_8));
+        return CsvLoader.load(p, name, LoadOptions.DEFAULT);
+    }
+
+    private static KnnModel fit(Table t) {
+        RowSet all = t.allRows();
+        double[][] x = new double[2][t.rowCount()];
+        double[] y = new double[t.rowCount()];
+        t.numeric("wind_ms").copyValues(all, x[0], 0);
+        t.numeric("air_temp_c").copyValues(all, x[1], 0);
+        t.numeric("power_kw").copyValues(all, y, 0);
+        return KnnModel.fit(ReferenceData.numeric(new String[] {"wind_ms", "air_temp_c"}, x, "power_kw", y, null),
+                KnnSettings.defaults().withK(15).withWeighting(Weighting.TRICUBE).withThreads(2));
+    }
+
+    /** Each row's identity in the source: its time and turbine, unique in the log. */
+    private static String key(Table t, int row) {
+        return (long) t.numeric("time").asDouble(row) + "/" + ((CategoryColumn) t.column("turbine")).label(row);
+    }
+
+    @Test
+    void aShuffledCopyOfAFileGivesTheSameFlagsAndPredictionsRowByRow() throws java.io.IOException {
+        java.util.List<String> rows = siteRows(3000);
+        java.util.List<String> shuffled = new java.util.ArrayList<>(rows);
+        java.util.Collections.shuffle(shuffled, new Random(5));
+        String header = "time,turbine,wind_ms,air_temp_c,power_kw";
+        rows.add(0, header);
+        shuffled.add(0, header);
+        Table a = load("site.csv", rows);
+        Table b = load("shuffled.csv", shuffled);
+        KnnModel ma = fit(a);
+        KnnModel mb = fit(b);
+        FlagResult fa = Flags.leaveOneOut(ma, Progress.NONE);
+        FlagResult fb = Flags.leaveOneOut(mb, Progress.NONE);
+        java.util.Map<String, Integer> inB = new java.util.HashMap<>();
+        for (int i = 0; i < fb.rowIds().length; i++) {
+            inB.put(key(b, fb.rowIds()[i]), i);
+        }
+        assertEquals(fa.rowIds().length, inB.size());
+        assertTrue(fa.flaggedCount() > 0, "the low turbine gives some flags to compare");
+        assertEquals(fa.flaggedCount(), fb.flaggedCount());
+        for (int i = 0; i < fa.rowIds().length; i++) {
+            String k = key(a, fa.rowIds()[i]);
+            int j = inB.get(k);
+            assertEquals(fa.looFit()[i], fb.looFit()[j], 0, k);
+            assertEquals(fa.z()[i], fb.z()[j], 0, k);
+            assertEquals(fa.flagged()[i], fb.flagged()[j], k);
+        }
+        for (double w = 2; w < 17; w += 0.37) {
+            Estimate ea = ma.estimate(w, 4.0);
+            Estimate eb = mb.estimate(w, 4.0);
+            assertEquals(ea, eb, "at wind " + w);
+        }
     }
 }
