@@ -74,6 +74,8 @@ public final class Main implements Runnable {
         cli.setExecutionExceptionHandler((ex, c, parsed) -> {
             if (ex instanceof NearfitException) {
                 err.println("nearfit: " + ex.getMessage());
+            } else if (rootCause(ex) instanceof OutOfMemoryError) {
+                err.println(outOfMemory()); // from a worker thread, wrapped
             } else {
                 err.println("nearfit: internal error: " + ex);
             }
@@ -85,10 +87,31 @@ public final class Main implements Runnable {
             err.flush();
             return EXIT_USAGE;
         });
-        int status = cli.execute(args);
+        int status;
+        try {
+            status = cli.execute(args);
+        } catch (OutOfMemoryError ex) {
+            // The heap is the user's to raise; a stack trace would hide that. The input is unreachable by now.
+            err.println(outOfMemory());
+            status = EXIT_USAGE;
+        }
         out.flush();
         err.flush();
         return status;
+    }
+
+    /** Worded like the loader's own out-of-memory message. */
+    private static String outOfMemory() {
+        return "nearfit: out of memory after loading (heap " + (Runtime.getRuntime().maxMemory() >> 20)
+                + " MB); give Java more heap (for example NEARFIT_JAVA_OPTS=-Xmx16g)";
+    }
+
+    private static Throwable rootCause(Throwable t) {
+        Throwable c = t;
+        while (c.getCause() != null && c.getCause() != c) {
+            c = c.getCause();
+        }
+        return c;
     }
 
     /** A fresh command line with every sub-command; used by completion too. */
