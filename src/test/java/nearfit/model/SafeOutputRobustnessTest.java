@@ -1,0 +1,78 @@
+package nearfit.model;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.BufferedReader;
+import java.io.IOException;
+import java.io.InputStreamReader;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.TimeUnit;
+import java.util.stream.Stream;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** A write killed from outside (SIGKILL, SIGTERM) mid-way leaves the previous file exactly as it was. */
+class SafeOutputRobustnessTest {
+    @TempDir
+    Path dir;
+
+    /** Child process: replaces the file named in args[0] with 2 GB written slowly, saying when it has begun. */
+    public static final class SlowWriter {
+        public static void main(String[] args) {
+            SafeOutput.write(Path.of(args[0]), true, List.of(), out -> {
+                byte[] block = new byte[1 << 20];
+                for (int i = 0; i < 2048; i++) {
+                    out.write(block);
+                    if (i == 8) {
+                        System.out.println("writing");
+                        System.out.flush();
+                    }
+                }
+            });
+        }
+    }
+
+    private void killMidWrite(boolean forcibly) throws Exception {
+        Path target = dir.resolve("reference.nfm");
+        byte[] previous = "the previous model\n".getBytes(StandardCharsets.UTF_8);
+        Files.write(target, previous);
+        String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
+        String cp = System.getProperty("surefire.test.class.path", System.getProperty("java.class.path"));
+        Process p = new ProcessBuilder(java, "-cp", cp, SlowWriter.class.getName(), target.toString())
+                .redirectErrorStream(true).start();
+        try (BufferedReader r = new BufferedReader(new InputStreamReader(p.getInputStream(), StandardCharsets.UTF_8))) {
+            assertEquals("writing", r.readLine(), "the child began writing");
+            if (forcibly) {
+                p.destroyForcibly(); // SIGKILL on Linux
+            } else {
+                p.destroy(); // SIGTERM
+            }
+            assertTrue(p.waitFor(60, TimeUnit.SECONDS));
+        }
+        assertTrue(p.exitValue() != 0, "the child was killed, not finished");
+        assertArrayEquals(previous, Files.readAllBytes(target));
+        try (Stream<Path> files = Files.list(dir)) {
+            // No finally block runs in a killed process, so its temporary file may stay: hidden, named .part.
+            for (Path f : files.toList()) {
+                String n = f.getFileName().toString();
+                assertTrue(n.equals("reference.nfm") || n.startsWith(".reference.nfm.") && n.endsWith(".part"), n);
+            }
+        }
+    }
+
+    @Test
+    void aWriteKilledWithSigkillLeavesThePreviousFileIntact() throws Exception {
+        killMidWrite(true);
+    }
+
+    @Test
+    void aWriteStoppedWithSigtermLeavesThePreviousFileIntact() throws Exception {
+        killMidWrite(false);
+    }
+}
