@@ -1,0 +1,22 @@
+package nearfit.tui;
+
+/** What a background job sees of the explorer: whether it is still wanted, and where to say how far it got. */
+public interface JobControl {
+    /** Whether a newer setting made this job useless; long loops check it and stop. */
+    boolean cancelled();
+
+    /** Reports progress, {@code fraction} from 0 to 1. */
+    void progress(double fraction);
+
+    /** A control that is never cancelled and ignores progress, for exports and tests. */
+    JobControl NONE = new JobControl() {
+        @Override
+        public boolean cancelled() {
+            return false;
+        }
+
+        @Override
+        public void progress(double fraction) {
+        }
+    };
+}

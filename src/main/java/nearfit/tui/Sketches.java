@@ -1,0 +1,46 @@
+package nearfit.tui;
+
+/**
+ * The drawings the screen takes from the plot package, each kept until its inputs change so that moving
+ * between panels redraws without recomposing the scatter. Used from the drawing thread only.
+ */
+final class Sketches {
+    private final Workbench workbench;
+    private Object plotKey;
+    private Cells plot;
+    private Object stripKey;
+    private Cells strip;
+    private Object chartKey;
+    private Cells chart;
+
+    Sketches(Workbench workbench) {
+        this.workbench = workbench;
+    }
+
+    Cells plot(PlotScene scene, int width, int height) {
+        Object key = java.util.List.of(scene, width, height);
+        if (!key.equals(plotKey)) {
+            plot = workbench.plot(scene, width, height);
+            plotKey = key;
+        }
+        return plot;
+    }
+
+    Cells strip(CurveResult curve, int width, boolean ascii) {
+        Object key = java.util.Arrays.asList(curve, width, ascii);
+        if (!key.equals(stripKey)) {
+            strip = workbench.widthStrip(curve, width, ascii);
+            stripKey = key;
+        }
+        return strip;
+    }
+
+    Cells chart(TuningResult tuning, int k, int width, int height, boolean ascii) {
+        Object key = java.util.Arrays.asList(tuning, k, width, height, ascii);
+        if (!key.equals(chartKey)) {
+            chart = workbench.tuningChart(tuning, k, width, height, ascii);
+            chartKey = key;
+        }
+        return chart;
+    }
+}
