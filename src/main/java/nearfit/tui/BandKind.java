@@ -4,8 +4,8 @@ package nearfit.tui;
 public enum BandKind {
     /** The neighbours' 10 % and 90 % quantiles. */
     QUANTILE_10_90("q10-q90"),
-    /** The neighbours' 25 % and 75 % quantiles. */
-    QUANTILE_25_75("q25-q75"),
+    /** The neighbours' 5 % and 95 % quantiles. */
+    QUANTILE_05_95("q05-q95"),
     /** Fit plus or minus two standard deviations of the neighbours' responses. */
     TWO_SD("±2 SD"),
     /** No band. */

@@ -68,7 +68,7 @@ final class Exporter {
             case CURVE_CSV -> out -> curveCsv(s, require(r.curve(), "the curve"), out);
             case FLAGS_CSV -> out -> flagsCsv(s, require(r.flags(), "the flagged rows"), out);
             case PNG -> out -> workbench.writePng(scene, w, h, out);
-            case TEXT -> out -> text(workbench.plot(scene, TEXT_WIDTH, TEXT_HEIGHT), out);
+            case TEXT -> out -> text(workbench.plot(scene, TEXT_WIDTH, TEXT_HEIGHT).plot(), out);
         };
     }
 

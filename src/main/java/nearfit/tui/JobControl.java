@@ -8,6 +8,10 @@ public interface JobControl {
     /** Reports progress, {@code fraction} from 0 to 1. */
     void progress(double fraction);
 
+    /** Reports rows read so far, for work whose total is unknown (a gzip file's load). */
+    default void rows(long rows) {
+    }
+
     /** A control that is never cancelled and ignores progress, for exports and tests. */
     JobControl NONE = new JobControl() {
         @Override

@@ -7,7 +7,9 @@ public enum Metric {
     /** Summed absolute differences. */
     MANHATTAN("Manhattan"),
     /** Largest absolute difference. */
-    CHEBYSHEV("Chebyshev");
+    CHEBYSHEV("Chebyshev"),
+    /** Euclidean after whitening by the inputs' covariance. */
+    MAHALANOBIS("Mahalanobis");
 
     private final String label;
 

@@ -56,7 +56,7 @@ final class Panels {
             return "flagged rows: leave-one-out "
                     + (Double.isNaN(r.flagsProgress()) ? "waiting" : Math.round(100 * r.flagsProgress()) + " %");
         }
-        return "flagged rows: " + Figures.count(r.flags().flagged().size()) + " with |z| > "
+        return "flagged rows: " + Figures.count(r.flags().flaggedCount()) + " with |z| > "
                 + Figures.value(r.flags().threshold()) + ", largest first (Enter jumps, Esc)";
     }
 

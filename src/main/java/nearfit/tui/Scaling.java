@@ -4,10 +4,10 @@ package nearfit.tui;
 public enum Scaling {
     /** Subtract the mean, divide by the standard deviation. */
     STANDARD("z-score"),
+    /** Subtract the median, divide by 1.4826 times the median absolute deviation. */
+    ROBUST("median/MAD"),
     /** Map the minimum to 0 and the maximum to 1. */
     RANGE("min-max"),
-    /** Subtract the median, divide by the interquartile range. */
-    ROBUST("median/IQR"),
     /** Inputs as they are. */
     NONE("none");
 

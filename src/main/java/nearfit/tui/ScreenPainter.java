@@ -23,13 +23,12 @@ final class ScreenPainter {
         header(pen, layout, s, r, in);
         if (in.request() != null) {
             PlotScene scene = scene(s, r, in, pen.look());
-            pen.cells(sketches.plot(scene, layout.width(), layout.plotHeight()), 0, layout.plotTop());
+            PlotCells drawn = sketches.plot(scene, layout.width(), layout.plotHeight());
+            pen.cells(drawn.plot(), 0, layout.plotTop());
+            pen.cells(drawn.strip(), 0, layout.stripRow());
         } else {
             pen.text(2, layout.plotTop() + layout.plotHeight() / 2, "no rows to plot: change the row condition (/)",
                     Ink.WARNING);
-        }
-        if (r.curve() != null) {
-            pen.cells(sketches.strip(r.curve(), layout.width(), pen.look().ascii()), 0, layout.stripRow());
         }
         pen.text(0, layout.statusRow(), Figures.fit(status(s, r, in), layout.width(), pen.look().ascii()),
                 s.message().isEmpty() && r.failure().isEmpty() ? Ink.TEXT : Ink.WARNING);
@@ -42,7 +41,7 @@ final class ScreenPainter {
         CurveRequest q = in.request();
         double x = q.from() + s.crosshair() * (q.to() - q.from());
         CurveResult curve = r.curve() != null && r.curve().size() == q.steps() ? r.curve() : null;
-        return new PlotScene(s.model(), q, curve, r.flags(), s.mode(), s.flagMarks(), x, s.nearHeldOnly(),
+        return new PlotScene(s.model(), q, curve, r.flags(), s.mode(), s.flagMarks(), x, s.heldQuantile(), s.nearHeldOnly(),
                 s.markedRow(), look.ascii());
     }
 
@@ -117,6 +116,18 @@ final class ScreenPainter {
         return sb.toString();
     }
 
+    /** The leave-one-out RMSE at k: from the flags when the core gives it, else from the tuning table. */
+    static double looRmse(ViewState s, Results r) {
+        if (r.flags() != null && !Double.isNaN(r.flags().looRmse())) {
+            return r.flags().looRmse();
+        }
+        if (r.tuning() != null) {
+            int i = r.tuning().indexOf(s.k());
+            return i < 0 ? Double.NaN : r.tuning().rmse()[i];
+        }
+        return Double.NaN;
+    }
+
     static String label(java.util.List<String> labels, int code) {
         return code >= 0 && code < labels.size() ? labels.get(code) : "#" + code;
     }
@@ -144,11 +155,13 @@ final class ScreenPainter {
         } else {
             sb.append("fitting ...");
         }
+        sb.append("  |  LOO RMSE ").append(Figures.value(looRmse(s, r)));
         FlagResult f = r.flags();
-        if (f != null) {
-            sb.append("  |  LOO RMSE ").append(Figures.value(f.looRmse())).append("  |  flagged ")
-                    .append(Figures.count(f.flagged().size())).append(" (").append(Figures.percent(f.share()))
-                    .append(')');
+        if (f != null && f.rows() == 0) {
+            sb.append("  |  no flags for a category response");
+        } else if (f != null) {
+            sb.append("  |  flagged ").append(Figures.count(f.flaggedCount())).append(" (")
+                    .append(Figures.percent(f.share())).append(')');
         } else {
             sb.append("  |  leave-one-out ").append(Double.isNaN(r.flagsProgress()) ? "waiting"
                     : Math.round(100 * r.flagsProgress()) + " %");

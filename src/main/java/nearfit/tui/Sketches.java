@@ -7,9 +7,7 @@ package nearfit.tui;
 final class Sketches {
     private final Workbench workbench;
     private Object plotKey;
-    private Cells plot;
-    private Object stripKey;
-    private Cells strip;
+    private PlotCells plot;
     private Object chartKey;
     private Cells chart;
 
@@ -17,22 +15,13 @@ final class Sketches {
         this.workbench = workbench;
     }
 
-    Cells plot(PlotScene scene, int width, int height) {
+    PlotCells plot(PlotScene scene, int width, int height) {
         Object key = java.util.List.of(scene, width, height);
         if (!key.equals(plotKey)) {
             plot = workbench.plot(scene, width, height);
             plotKey = key;
         }
         return plot;
-    }
-
-    Cells strip(CurveResult curve, int width, boolean ascii) {
-        Object key = java.util.Arrays.asList(curve, width, ascii);
-        if (!key.equals(stripKey)) {
-            strip = workbench.widthStrip(curve, width, ascii);
-            stripKey = key;
-        }
-        return strip;
     }
 
     Cells chart(TuningResult tuning, int k, int width, int height, boolean ascii) {

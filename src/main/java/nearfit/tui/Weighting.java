@@ -4,10 +4,10 @@ package nearfit.tui;
 public enum Weighting {
     /** Every neighbour counts the same. */
     EQUAL("equal"),
-    /** Tricube of distance over window width (Cleveland 1979). */
-    TRICUBE("tricube"),
     /** One over distance. */
-    INVERSE("1/distance");
+    INVERSE("1/distance"),
+    /** Tricube of distance over window width (Cleveland 1979). */
+    TRICUBE("tricube");
 
     private final String label;
 

@@ -47,11 +47,11 @@ public interface Workbench {
     /** Leave-one-out residuals at {@code model.k()} and the rows they flag, labelled by the group column. */
     FlagResult flags(ModelSettings model, String groupColumn, JobControl control);
 
-    /** The plot: axes, points, curve, band, flags and crosshair in {@code width} by {@code height} cells. */
-    Cells plot(PlotScene scene, int width, int height);
-
-    /** The window width along the display input, one row of {@code width} cells. */
-    Cells widthStrip(CurveResult curve, int width, boolean ascii);
+    /**
+     * The plot (axes, points, curve, band, flags and crosshair) in {@code width} by {@code height} cells, and
+     * under it one row of {@code width} cells showing the window width along the same horizontal axis.
+     */
+    PlotCells plot(PlotScene scene, int width, int height);
 
     /** RMSE against log k with the lowest and the one-SE k marked. */
     Cells tuningChart(TuningResult tuning, int currentK, int width, int height, boolean ascii);

@@ -106,18 +106,15 @@ class ScriptedWorkbench implements Workbench {
         List<FlaggedRow> rows = new ArrayList<>();
         rows.add(new FlaggedRow(41, 43, "2026-03-02T10:10:00Z", "T02", List.of(12.5), 300, 1900, -1600, -7.5));
         rows.add(new FlaggedRow(7, 9, "2026-03-01T01:10:00Z", "T01", List.of(5.0), 900, 400, 500, 4.1));
-        return new FlagResult(1000, 85.25, 3.5, rows);
+        return new FlagResult(1000, rows.size(), 85.25, 3.5, rows);
     }
 
     @Override
-    public Cells plot(PlotScene scene, int width, int height) {
-        return new TextCells(width, height, "plot " + scene.model().response() + " vs " + scene.request().displayInput()
-                + (scene.curve() == null ? " (no curve)" : " curve fit " + scene.curve().fit()[0]), '\u28ff');
-    }
-
-    @Override
-    public Cells widthStrip(CurveResult curve, int width, boolean ascii) {
-        return new TextCells(width, 1, "width " + curve.width()[0], ascii ? '=' : '\u2581');
+    public PlotCells plot(PlotScene scene, int width, int height) {
+        Cells strip = scene.curve() == null ? new TextCells(width, 1, "", ' ')
+                : new TextCells(width, 1, "width " + scene.curve().width()[0], scene.ascii() ? '=' : '\u2581');
+        return new PlotCells(new TextCells(width, height, "plot " + scene.model().response() + " vs " + scene.request().displayInput()
+                + (scene.curve() == null ? " (no curve)" : " curve fit " + scene.curve().fit()[0]), '\u28ff'), strip);
     }
 
     @Override
