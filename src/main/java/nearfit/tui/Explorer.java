@@ -32,10 +32,12 @@ public final class Explorer implements AutoCloseable {
     private final Workbench workbench;
     private final Look look;
     private final BlockingQueue<Object> events = new LinkedBlockingQueue<>();
-    private final Jobs jobs = new Jobs(events, Jobs.Kind.values().length);
+    private final Jobs jobs = new Jobs(events);
     private final Sketches sketches;
     private final Exporter exporter;
     private final Map<List<Object>, Double> quantiles = new HashMap<>();
+    private final it.unimi.dsi.fastutil.ints.Int2ObjectOpenHashMap<com.googlecode.lanterna.TextCharacter> characters =
+            new it.unimi.dsi.fastutil.ints.Int2ObjectOpenHashMap<>();
     private ViewState state;
     private Results results;
     private Layout layout;
@@ -96,6 +98,20 @@ public final class Explorer implements AutoCloseable {
     /** Waits until the background work of the current state is done, applies its results and draws. */
     public void settle() throws IOException, InterruptedException {
         jobs.awaitIdle(120_000);
+        drainEvents();
+        draw();
+    }
+
+    /** Waits until the curve of the current state is in and drawn, leaving tuning and flags running. */
+    public void settleCurve() throws IOException, InterruptedException {
+        jobs.awaitIdle(Jobs.Kind.CURVE, 120_000);
+        drainEvents();
+        draw();
+    }
+
+    /** Waits until one kind of background work is done ("curve", "tuning" or "flags"), then draws. */
+    public void settle(String kind) throws IOException, InterruptedException {
+        jobs.awaitIdle(Jobs.Kind.valueOf(kind.toUpperCase(java.util.Locale.ROOT)), 600_000);
         drainEvents();
         draw();
     }
@@ -225,7 +241,9 @@ public final class Explorer implements AutoCloseable {
         if (!fk.equals(flagsKey)) {
             flagsKey = fk;
             generation++;
-            results = results.withFlags(null, 0);
+            // The previous flags stay on screen, marked as updating, until the new ones arrive: a k change
+            // then redraws without recomposing the plot.
+            results = results.withFlags(results.flags(), 0);
             String group = state.groupColumn();
             jobs.start(Jobs.Kind.FLAGS, generation, c -> workbench.flags(model, group, c));
         }
@@ -299,7 +317,7 @@ public final class Explorer implements AutoCloseable {
         results = new Results(results.curve(), jobs.progress(Jobs.Kind.CURVE), results.tuning(),
                 jobs.progress(Jobs.Kind.TUNING), results.flags(), jobs.progress(Jobs.Kind.FLAGS),
                 results.rowsUsed(), results.failure());
-        Pen pen = new Pen(screen.newTextGraphics(), look, layout.width(), layout.height());
+        Pen pen = new Pen(screen.newTextGraphics(), look, layout.width(), layout.height(), characters);
         ScreenPainter.paint(pen, layout, state, results, frameInput(), sketches);
         screen.setCursorPosition(null);
         screen.refresh(Screen.RefreshType.DELTA);

@@ -8,8 +8,10 @@ import java.util.concurrent.TimeUnit;
 import java.util.function.Function;
 
 /**
- * The explorer's background work: one executor, at most one live job per kind, each job tagged with the
- * generation of the state that asked for it. Starting a job cancels the older one of its kind, and a result
+ * The explorer's background work: one executor with two lanes, at most one live job per kind, each job
+ * tagged with the generation of the state that asked for it. The curve has a lane of its own, so a k change
+ * never waits behind leave-one-out work; flags and tuning share the other lane, one after the other, so
+ * that on a two-core machine one core stays free for the curve and the frame. Starting a job cancels the older one of its kind, and a result
  * whose generation is no longer the latest of its kind is dropped by {@link #isCurrent}.
  *
  * <p>Finished jobs post a {@link Done} to the explorer's event queue; progress posts {@link #TICK} at most
@@ -27,20 +29,24 @@ final class Jobs implements AutoCloseable {
     /** Posted when a running job's progress moved on, so the header can be redrawn. */
     static final Object TICK = new Object();
 
-    private final ExecutorService pool;
+    private final ExecutorService curveLane;
+    private final ExecutorService longLane;
     private final BlockingQueue<Object> events;
     private final long[] latest = new long[Kind.values().length];
     private final Control[] running = new Control[Kind.values().length];
     private int outstanding;
+    private final int[] outstandingOf = new int[Kind.values().length];
 
-    /** @param threads worker threads: one per kind keeps a k change from waiting behind a long tuning run */
-    Jobs(BlockingQueue<Object> events, int threads) {
+    Jobs(BlockingQueue<Object> events) {
         this.events = events;
-        this.pool = Executors.newFixedThreadPool(threads, r -> {
-            Thread t = new Thread(r, "nearfit-job");
-            t.setDaemon(true);
-            return t;
-        });
+        this.curveLane = Executors.newSingleThreadExecutor(r -> daemon(r, "nearfit-curve"));
+        this.longLane = Executors.newSingleThreadExecutor(r -> daemon(r, "nearfit-leave-one-out"));
+    }
+
+    private static Thread daemon(Runnable r, String name) {
+        Thread t = new Thread(r, name);
+        t.setDaemon(true);
+        return t;
     }
 
     /** Cancels the running job of this kind and starts {@code work} for generation {@code generation}. */
@@ -54,8 +60,9 @@ final class Jobs implements AutoCloseable {
         latest[kind.ordinal()] = generation;
         synchronized (this) {
             outstanding++;
+            outstandingOf[kind.ordinal()]++;
         }
-        pool.execute(() -> run(kind, generation, c, work));
+        (kind == Kind.CURVE ? curveLane : longLane).execute(() -> run(kind, generation, c, work));
     }
 
     private <T> void run(Kind kind, long generation, Control c, Function<JobControl, T> work) {
@@ -74,6 +81,7 @@ final class Jobs implements AutoCloseable {
             c.finished = true;
             synchronized (this) {
                 outstanding--;
+                outstandingOf[kind.ordinal()]--;
                 notifyAll();
             }
         }
@@ -102,6 +110,18 @@ final class Jobs implements AutoCloseable {
         }
     }
 
+    /** Waits until no job of one kind is running or queued; for benchmarks. */
+    synchronized void awaitIdle(Kind kind, long timeoutMillis) throws InterruptedException {
+        long end = System.currentTimeMillis() + timeoutMillis;
+        while (outstandingOf[kind.ordinal()] > 0) {
+            long left = end - System.currentTimeMillis();
+            if (left <= 0) {
+                throw new IllegalStateException(kind + " work still running after " + timeoutMillis + " ms");
+            }
+            wait(left);
+        }
+    }
+
     @Override
     public void close() {
         for (Control c : running) {
@@ -109,9 +129,11 @@ final class Jobs implements AutoCloseable {
                 c.cancelled = true;
             }
         }
-        pool.shutdownNow();
+        curveLane.shutdownNow();
+        longLane.shutdownNow();
         try {
-            pool.awaitTermination(2, TimeUnit.SECONDS);
+            curveLane.awaitTermination(2, TimeUnit.SECONDS);
+            longLane.awaitTermination(2, TimeUnit.SECONDS);
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
         }

@@ -8,6 +8,7 @@ import com.googlecode.lanterna.TextColor;
  */
 final class Palette {
     private static final int[] INDEX = new int[Ink.values().length];
+    private static final TextColor[] COLOUR = new TextColor[Ink.values().length];
 
     static {
         java.util.Arrays.fill(INDEX, -1);
@@ -32,6 +33,10 @@ final class Palette {
         set(Ink.MARKER, 213);
         set(Ink.WIDTH, 109);
         set(Ink.WARNING, 203);
+        for (Ink ink : Ink.values()) {
+            int i = INDEX[ink.ordinal()];
+            COLOUR[ink.ordinal()] = i < 0 ? TextColor.ANSI.DEFAULT : new TextColor.Indexed(i);
+        }
     }
 
     private Palette() {
@@ -43,7 +48,6 @@ final class Palette {
 
     /** The foreground colour of an ink; the terminal's default when colour is off or the ink has none. */
     static TextColor foreground(Ink ink, Look look) {
-        int i = INDEX[ink.ordinal()];
-        return !look.colour() || i < 0 ? TextColor.ANSI.DEFAULT : new TextColor.Indexed(i);
+        return look.colour() ? COLOUR[ink.ordinal()] : TextColor.ANSI.DEFAULT;
     }
 }

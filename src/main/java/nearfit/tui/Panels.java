@@ -56,7 +56,9 @@ final class Panels {
             return "flagged rows: leave-one-out "
                     + (Double.isNaN(r.flagsProgress()) ? "waiting" : Math.round(100 * r.flagsProgress()) + " %");
         }
-        return "flagged rows: " + Figures.count(r.flags().flaggedCount()) + " with |z| > "
+        String updating = Double.isNaN(r.flagsProgress()) ? ""
+                : " (updating " + Math.round(100 * r.flagsProgress()) + " %)";
+        return "flagged rows" + updating + ": " + Figures.count(r.flags().flaggedCount()) + " with |z| > "
                 + Figures.value(r.flags().threshold()) + ", largest first (Enter jumps, Esc)";
     }
 

@@ -11,8 +11,13 @@ final class Pen {
     private final Look look;
     private final int width;
     private final int height;
+    private static final int INKS = Ink.values().length;
+    /** Characters made so far, by code point times {@link #INKS} plus ink; shared by the frames of one look. */
+    private final it.unimi.dsi.fastutil.ints.Int2ObjectOpenHashMap<TextCharacter> made;
 
-    Pen(TextGraphics g, Look look, int width, int height) {
+    Pen(TextGraphics g, Look look, int width, int height,
+            it.unimi.dsi.fastutil.ints.Int2ObjectOpenHashMap<TextCharacter> made) {
+        this.made = made;
         this.g = g;
         this.look = look;
         this.width = width;
@@ -62,15 +67,25 @@ final class Pen {
                 if (x < 0 || x >= width || y < 0 || y >= height) {
                     continue;
                 }
-                int cp = cells.codePoint(c, r);
-                char ch = Character.isBmpCodePoint(cp) ? (char) cp : '?';
-                Ink ink = cells.ink(c, r);
-                TextCharacter t = ink == Ink.CURVE
-                        ? new TextCharacter(ch, Palette.foreground(ink, look), bg, SGR.BOLD)
-                        : new TextCharacter(ch, Palette.foreground(ink, look), bg);
-                g.setCharacter(x, y, t);
+                g.setCharacter(x, y, character(cells.codePoint(c, r), cells.ink(c, r), bg));
             }
         }
+    }
+
+    /**
+     * The Lanterna character for a code point in an ink, made once per pair: a frame has thousands of cells
+     * but only a few hundred distinct braille patterns and inks.
+     */
+    private TextCharacter character(int cp, Ink ink, TextColor bg) {
+        int key = cp * INKS + ink.ordinal();
+        TextCharacter t = made.get(key);
+        if (t == null) {
+            char ch = Character.isBmpCodePoint(cp) ? (char) cp : '?';
+            t = ink == Ink.CURVE ? new TextCharacter(ch, Palette.foreground(ink, look), bg, SGR.BOLD)
+                    : new TextCharacter(ch, Palette.foreground(ink, look), bg);
+            made.put(key, t);
+        }
+        return t;
     }
 
     /** A box with a title, its inside blanked; box lines in ASCII when the look asks for it. */

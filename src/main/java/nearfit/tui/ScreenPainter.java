@@ -162,6 +162,9 @@ final class ScreenPainter {
         } else if (f != null) {
             sb.append("  |  flagged ").append(Figures.count(f.flaggedCount())).append(" (")
                     .append(Figures.percent(f.share())).append(')');
+            if (!Double.isNaN(r.flagsProgress())) {
+                sb.append(" updating ").append(Math.round(100 * r.flagsProgress())).append(" %");
+            }
         } else {
             sb.append("  |  leave-one-out ").append(Double.isNaN(r.flagsProgress()) ? "waiting"
                     : Math.round(100 * r.flagsProgress()) + " %");

@@ -16,7 +16,14 @@ final class Sketches {
     }
 
     PlotCells plot(PlotScene scene, int width, int height) {
-        Object key = java.util.List.of(scene, width, height);
+        // k, weights and band reach the plot only through the curve and flags (compared by identity), so a
+        // frame drawn right after a k change, still with the old curve, reuses the composed plot.
+        ModelSettings m = scene.model();
+        ModelSettings shape = new ModelSettings(m.condition(), m.response(), m.inputs(), 1, m.metric(),
+                Weighting.EQUAL, m.scaling(), BandKind.OFF);
+        Object key = java.util.Arrays.asList(shape, scene.request(), scene.curve(), scene.flags(), scene.mode(),
+                scene.flagMarks(), scene.crosshairX(), scene.heldQuantile(), scene.nearHeldOnly(), scene.markedRow(),
+                scene.ascii(), width, height);
         if (!key.equals(plotKey)) {
             plot = workbench.plot(scene, width, height);
             plotKey = key;

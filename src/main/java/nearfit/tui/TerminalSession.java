@@ -152,7 +152,8 @@ public final class TerminalSession {
     private void drawLoading(String shownName, double fraction) throws IOException {
         screen.doResizeIfNecessary();
         Layout layout = new Layout(screen.getTerminalSize().getColumns(), screen.getTerminalSize().getRows());
-        Pen pen = new Pen(screen.newTextGraphics(), look, layout.width(), layout.height());
+        Pen pen = new Pen(screen.newTextGraphics(), look, layout.width(), layout.height(),
+                new it.unimi.dsi.fastutil.ints.Int2ObjectOpenHashMap<>());
         pen.clear();
         pen.text(0, 0, Figures.fit("nearfit  loading " + shownName + "  " + Math.round(100 * fraction) + " %",
                 layout.width(), look.ascii()), Ink.TITLE);

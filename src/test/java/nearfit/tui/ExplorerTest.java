@@ -102,7 +102,7 @@ class ExplorerTest {
             v.explorer.settle();
             assertEquals(before + 1, wb.curveCalls.get(), "a new width asks for a curve with new steps");
             assertTrue(v.row(23).startsWith("? help"), v.row(22));
-            assertEquals(2 * 90, v.explorer.results().curve().size());
+            assertEquals(90, v.explorer.results().curve().size());
         }
     }
 
