@@ -320,7 +320,9 @@ public final class Explorer implements AutoCloseable {
         Pen pen = new Pen(screen.newTextGraphics(), look, layout.width(), layout.height(), characters);
         ScreenPainter.paint(pen, layout, state, results, frameInput(), sketches);
         screen.setCursorPosition(null);
-        screen.refresh(Screen.RefreshType.DELTA);
+        // After a resize the terminal may have reflowed or cleared its cells, so the frame is sent whole;
+        // otherwise only the cells that changed.
+        screen.refresh(resized != null ? Screen.RefreshType.COMPLETE : Screen.RefreshType.DELTA);
         framesDrawn++;
     }
 
