@@ -32,9 +32,11 @@ public final class Flags {
         double[] res = new double[n];
         double[] local = new double[n];
         FlagScale scale = s.flagScale();
+        int[] order = Tuning.spatialOrder(model.coords(), d, Tuning.allRows(n));
         Workers.run(n, s.threads(), model::searcher, (sr, c, from, to) -> {
             double[] q = new double[d];
-            for (int i = from; i < to; i++) {
+            for (int r = from; r < to; r++) {
+                int i = order[r];
                 System.arraycopy(model.coords(), i * d, q, 0, d);
                 sr.find(q, k, i);
                 LocalEstimator est = sr.estimator();

@@ -130,12 +130,13 @@ public final class Tuning {
                                      int kmax, Progress progress, boolean exclude) {
         int d = model.data().dimensions();
         int chunks = Workers.chunks(rows.length);
+        int[] order = spatialOrder(model.coords(), d, rows);
         double[][] partial = new double[chunks][];
         Workers.run(rows.length, model.settings().threads(), () -> new RowPass(model, index, map, kmax), (pass, c, from, to) -> {
             double[] sums = new double[kmax * SUMS];
             double[] q = new double[d];
             for (int r = from; r < to; r++) {
-                int pos = rows[r];
+                int pos = rows[order[r]];
                 System.arraycopy(model.coords(), pos * d, q, 0, d);
                 pass.run(q, exclude ? pos : -1, pos, sums);
             }
@@ -148,6 +149,19 @@ public final class Tuning {
             }
         }
         return total;
+    }
+
+    /**
+     * The order to evaluate rows in: Morton order of their coordinates, so consecutive rows search
+     * the same part of the index while it is in cache. It depends only on the (canonical) data, so
+     * the chunk sums, and the table, stay independent of row order and thread count.
+     */
+    static int[] spatialOrder(double[] coords, int d, int[] rows) {
+        double[] q = new double[rows.length * d];
+        for (int i = 0; i < rows.length; i++) {
+            System.arraycopy(coords, rows[i] * d, q, i * d, d);
+        }
+        return QueryOrder.of(q, d, rows.length);
     }
 
     private static TuningTable table(String method, ReferenceData data, int[] rows, double[] s, int kmax) {

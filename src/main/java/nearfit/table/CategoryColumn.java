@@ -6,20 +6,18 @@ import java.util.List;
  * A column of few distinct labels (a group such as a turbine id), stored as {@code int} codes into a
  * dictionary. Code -1 marks a missing value; codes are numbered in order of first appearance in the file.
  */
-public final class CategoryColumn implements Column {
+public final class CategoryColumn extends NamedColumn implements Column {
     /** The code stored for a missing label. */
     public static final int MISSING = -1;
 
-    private final String name;
     private final IntChunks codes;
     private final List<String> labels;
-    private final long missing;
 
+    /** Any text is a valid label, so a category column has no bad cells. */
     CategoryColumn(String name, IntChunks codes, List<String> labels, long missing) {
-        this.name = name;
+        super(name, missing, 0);
         this.codes = codes;
         this.labels = List.copyOf(labels);
-        this.missing = missing;
     }
 
     /** The label code at {@code row}, or {@link #MISSING}. */
@@ -44,11 +42,6 @@ public final class CategoryColumn implements Column {
     }
 
     @Override
-    public String name() {
-        return name;
-    }
-
-    @Override
     public ColumnType type() {
         return ColumnType.CATEGORY;
     }
@@ -61,16 +54,5 @@ public final class CategoryColumn implements Column {
     @Override
     public boolean isMissing(int row) {
         return codes.get(row) == MISSING;
-    }
-
-    @Override
-    public long missingCount() {
-        return missing;
-    }
-
-    /** Always 0: any text is a valid label. */
-    @Override
-    public long badCount() {
-        return 0;
     }
 }

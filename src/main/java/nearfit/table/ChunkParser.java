@@ -62,7 +62,7 @@ final class ChunkParser {
                 int n;
                 try {
                     n = in.read(buf, limit, buf.length - limit);
-                } catch (java.io.InterruptedIOException ex) {
+                } catch (java.io.InterruptedIOException | java.nio.channels.ClosedByInterruptException ex) {
                     throw new LoadCancelledException(source);
                 } catch (IOException ex) {
                     r.fail(line, readFailure(ex, line), !gzip);

@@ -70,6 +70,8 @@ public final class CsvLoader {
                 }
             }
             return loadPlain(path, name, size, t0);
+        } catch (java.nio.channels.ClosedByInterruptException ex) {
+            throw new LoadCancelledException(name); // the loading thread was interrupted
         } catch (NoSuchFileException ex) {
             throw NearfitException.inFile(name, "no such file");
         } catch (AccessDeniedException ex) {

@@ -1,17 +1,12 @@
 package nearfit.table;
 
 /** A column of decimal numbers stored as doubles in chunks; NaN marks a missing value. */
-public final class NumberColumn implements NumericColumn {
-    private final String name;
+public final class NumberColumn extends NamedColumn implements NumericColumn {
     private final DoubleChunks values;
-    private final long missing;
-    private final long bad;
 
     NumberColumn(String name, DoubleChunks values, long missing, long bad) {
-        this.name = name;
+        super(name, missing, bad);
         this.values = values;
-        this.missing = missing;
-        this.bad = bad;
     }
 
     /** The value at {@code row}, NaN when missing. */
@@ -32,11 +27,6 @@ public final class NumberColumn implements NumericColumn {
     }
 
     @Override
-    public String name() {
-        return name;
-    }
-
-    @Override
     public ColumnType type() {
         return ColumnType.NUMBER;
     }
@@ -49,15 +39,5 @@ public final class NumberColumn implements NumericColumn {
     @Override
     public boolean isMissing(int row) {
         return Double.isNaN(values.get(row));
-    }
-
-    @Override
-    public long missingCount() {
-        return missing;
-    }
-
-    @Override
-    public long badCount() {
-        return bad;
     }
 }

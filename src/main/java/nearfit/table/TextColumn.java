@@ -4,20 +4,12 @@ package nearfit.table;
  * A column of free text. Its values are kept out of memory (they stay in the file, found through
  * {@link Table#lineOf(int)}); only the counts are held, which is all summaries need.
  */
-public final class TextColumn implements Column {
-    private final String name;
+public final class TextColumn extends NamedColumn implements Column {
     private final int size;
-    private final long missing;
 
     TextColumn(String name, int size, long missing) {
-        this.name = name;
+        super(name, missing, 0);
         this.size = size;
-        this.missing = missing;
-    }
-
-    @Override
-    public String name() {
-        return name;
     }
 
     @Override
@@ -34,15 +26,5 @@ public final class TextColumn implements Column {
     @Override
     public boolean isMissing(int row) {
         return false;
-    }
-
-    @Override
-    public long missingCount() {
-        return missing;
-    }
-
-    @Override
-    public long badCount() {
-        return 0;
     }
 }

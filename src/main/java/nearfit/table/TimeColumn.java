@@ -4,20 +4,15 @@ package nearfit.table;
  * A column of ISO 8601 dates and date-times stored as {@code long} milliseconds since 1970-01-01T00:00Z.
  * Values without an offset are read as UTC. {@link #MISSING} marks a missing value.
  */
-public final class TimeColumn implements NumericColumn {
+public final class TimeColumn extends NamedColumn implements NumericColumn {
     /** The sentinel stored for a missing time; no ISO 8601 value parses to it. */
     public static final long MISSING = Long.MIN_VALUE;
 
-    private final String name;
     private final LongChunks values;
-    private final long missing;
-    private final long bad;
 
     TimeColumn(String name, LongChunks values, long missing, long bad) {
-        this.name = name;
+        super(name, missing, bad);
         this.values = values;
-        this.missing = missing;
-        this.bad = bad;
     }
 
     /** Epoch milliseconds at {@code row}, or {@link #MISSING}. */
@@ -40,11 +35,6 @@ public final class TimeColumn implements NumericColumn {
     }
 
     @Override
-    public String name() {
-        return name;
-    }
-
-    @Override
     public ColumnType type() {
         return ColumnType.TIME;
     }
@@ -57,15 +47,5 @@ public final class TimeColumn implements NumericColumn {
     @Override
     public boolean isMissing(int row) {
         return values.get(row) == MISSING;
-    }
-
-    @Override
-    public long missingCount() {
-        return missing;
-    }
-
-    @Override
-    public long badCount() {
-        return bad;
     }
 }
