@@ -62,6 +62,9 @@ final class ScreenPainter {
             one.append("  where ").append(s.condition());
         }
         one.append("  |  ").append(tuningState(r));
+        if (!Double.isNaN(r.flagsProgress())) {
+            one.append("  |  flags ").append(Math.round(100 * r.flagsProgress())).append(" %");
+        }
         if (!Double.isNaN(in.loading())) {
             one.append("  loading ").append(Math.round(100 * in.loading())).append(" %");
         }
@@ -79,22 +82,20 @@ final class ScreenPainter {
         return "tuning not run";
     }
 
+    /** The model line: what is fitted and where it is held first, then the estimator's settings. */
     private static String model(ViewState s, Results r, FrameInput in) {
         StringBuilder sb = new StringBuilder();
         sb.append(s.response()).append(" ~ ").append(String.join(" + ", s.inputs()));
         if (!in.classLabels().isEmpty()) {
             sb.append("  share of ").append(label(in.classLabels(), s.responseClass()));
         }
-        sb.append("  k=").append(s.k()).append("  ").append(s.metric().label())
-                .append("  weights ").append(s.weighting().label())
-                .append("  scaling ").append(s.scaling().label())
-                .append("  band ").append(s.band().label());
+        sb.append("  k=").append(s.k());
         Map<String, Double> held = new TreeMap<>(in.heldValues());
         for (Map.Entry<String, Double> e : held.entrySet()) {
-            sb.append(e.getKey().equals(s.heldInput()) ? "  [" : "  ").append(e.getKey()).append('=')
-                    .append(Figures.value(e.getValue()))
-                    .append(" (q").append(Math.round(100 * s.heldQuantile().getOrDefault(e.getKey(), 0.5))).append(')')
-                    .append(e.getKey().equals(s.heldInput()) ? "]" : "");
+            boolean moving = e.getKey().equals(s.heldInput());
+            sb.append(moving ? "  [" : "  ").append(e.getKey()).append('=').append(Figures.value(e.getValue()))
+                    .append(" q").append(Math.round(100 * s.heldQuantile().getOrDefault(e.getKey(), 0.5)))
+                    .append(moving ? "]" : "");
         }
         if (s.nearHeldOnly()) {
             sb.append("  near held only");
@@ -107,12 +108,8 @@ final class ScreenPainter {
         if (s.mode() != PlotMode.RESPONSE) {
             sb.append(s.mode() == PlotMode.RESIDUALS ? "  residuals" : "  residuals over time");
         }
-        if (!Double.isNaN(r.curveProgress()) || !Double.isNaN(r.flagsProgress())) {
-            sb.append("  working");
-            if (!Double.isNaN(r.flagsProgress())) {
-                sb.append(" (flags ").append(Math.round(100 * r.flagsProgress())).append(" %)");
-            }
-        }
+        sb.append("  ").append(s.metric().label()).append(", weights ").append(s.weighting().label())
+                .append(", scaling ").append(s.scaling().label()).append(", band ").append(s.band().label());
         return sb.toString();
     }
 

@@ -126,7 +126,7 @@ public final class TerminalSession {
         Progress progress = new Progress();
         CompletableFuture<Workbench> task = CompletableFuture.supplyAsync(() -> opener.open(file, shownName, progress));
         while (true) {
-            drawLoading(shownName, progress.fraction);
+            drawLoading(shownName, progress.fraction, progress.rows);
             try {
                 return task.get(100, TimeUnit.MILLISECONDS);
             } catch (TimeoutException e) {
@@ -149,14 +149,16 @@ public final class TerminalSession {
         }
     }
 
-    private void drawLoading(String shownName, double fraction) throws IOException {
+    private void drawLoading(String shownName, double fraction, long rows) throws IOException {
         screen.doResizeIfNecessary();
         Layout layout = new Layout(screen.getTerminalSize().getColumns(), screen.getTerminalSize().getRows());
         Pen pen = new Pen(screen.newTextGraphics(), look, layout.width(), layout.height(),
                 new it.unimi.dsi.fastutil.ints.Int2ObjectOpenHashMap<>());
         pen.clear();
-        pen.text(0, 0, Figures.fit("nearfit  loading " + shownName + "  " + Math.round(100 * fraction) + " %",
-                layout.width(), look.ascii()), Ink.TITLE);
+        // A gzip file's decompressed size is unknown until the end, so its progress is the rows read.
+        String done = fraction > 0 ? Math.round(100 * fraction) + " %" : Figures.count(rows) + " rows";
+        pen.text(0, 0, Figures.fit("nearfit  loading " + shownName + "  " + done, layout.width(), look.ascii()),
+                Ink.TITLE);
         pen.text(0, layout.height() - 1, "q cancels", Ink.LABEL);
         screen.refresh(Screen.RefreshType.DELTA);
     }
@@ -164,6 +166,12 @@ public final class TerminalSession {
     private static final class Progress implements JobControl {
         volatile boolean cancelled;
         volatile double fraction;
+        volatile long rows;
+
+        @Override
+        public void rows(long n) {
+            rows = n;
+        }
 
         @Override
         public boolean cancelled() {

@@ -101,4 +101,33 @@ class CoreExplorerTest {
             assertTrue(v.text().contains("flagged rows:"), v.text());
         }
     }
+
+    @Test
+    void aCategoryResponseDrawsTheVoteShareOfTheHighlightedClass(@TempDir Path dir) throws Exception {
+        Workbench wb = load(dir);
+        try (VirtualScreen v = new VirtualScreen(wb, ViewState.initial("turbine", List.of("wind_ms"), 20), 120, 40,
+                new Look(false, true))) {
+            CurveResult c = v.explorer.results().curve();
+            for (double share : c.fit()) {
+                assertTrue(share >= 0 && share <= 1, "a vote share: " + share);
+            }
+            assertTrue(v.row(1).contains("share of T01"), v.row(1));
+            v.type("n");
+            assertTrue(v.row(1).contains("share of T02"), v.row(1));
+        }
+    }
+
+    @Test
+    void residualsOverTimeUseTheTimeAxisAndGroupsCompareWithTheOthers(@TempDir Path dir) throws Exception {
+        Workbench wb = load(dir);
+        try (VirtualScreen v = open(wb)) {
+            v.type("T");
+            assertTrue(v.text().contains("residual of power_kw"), v.text());
+            assertTrue(v.text().contains("2026-03"), "time ticks on the axis: " + v.text());
+            v.type("T").type("g").key(KeyType.ArrowDown).key(KeyType.Enter).type("n").type("o");
+            assertTrue(v.row(1).contains("group turbine T01 vs others"), v.row(1));
+            assertTrue(v.explorer.results().failure().isEmpty(), v.explorer.results().failure());
+            assertEquals(120, v.explorer.results().curve().size());
+        }
+    }
 }
