@@ -153,8 +153,15 @@ public final class Explorer implements AutoCloseable {
     private void startKeyReader() {
         Thread reader = new Thread(() -> {
             try {
+                // Lanterna's virtual terminal holds its lock while it blocks in readInput, which would stop
+                // every frame, so it is polled; a real terminal is read blocking.
+                boolean poll = screen.getTerminal() instanceof com.googlecode.lanterna.terminal.virtual.VirtualTerminal;
                 while (true) {
-                    KeyStroke k = screen.readInput();
+                    KeyStroke k = poll ? screen.pollInput() : screen.readInput();
+                    if (poll && k == null) {
+                        Thread.sleep(5);
+                        continue;
+                    }
                     events.add(k == null ? new KeyStroke(KeyType.EOF) : k);
                     if (k == null || k.getKeyType() == KeyType.EOF) {
                         return;
@@ -162,6 +169,8 @@ public final class Explorer implements AutoCloseable {
                 }
             } catch (IOException | RuntimeException e) {
                 events.add(new KeyStroke(KeyType.EOF));
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
             }
         }, "nearfit-keys");
         reader.setDaemon(true);

@@ -139,20 +139,14 @@ final class Jobs implements AutoCloseable {
         }
     }
 
-    private final class Control implements JobControl {
-        volatile boolean cancelled;
+    /** A job's flags that also post a {@link #TICK} when its progress passes a percentage point. */
+    private final class Control extends JobFlags {
         volatile boolean finished;
-        volatile double fraction;
         private int lastPercent = -1;
 
         @Override
-        public boolean cancelled() {
-            return cancelled;
-        }
-
-        @Override
         public void progress(double f) {
-            fraction = f;
+            super.progress(f);
             int percent = (int) (100 * f);
             if (percent != lastPercent) {
                 lastPercent = percent;

@@ -131,7 +131,12 @@ final class ScenePoints {
         int[] rows = f.rowIds();
         double[] x;
         if (s.mode() == PlotMode.RESIDUALS_OVER_TIME) {
-            x = table.numeric(timeName()).copyValues(RowSet.of(rows));
+            // The flags' row ids are in the knn package's canonical order, not ascending, so no RowSet.
+            nearfit.table.NumericColumn time = table.numeric(timeName());
+            x = new double[rows.length];
+            for (int i = 0; i < rows.length; i++) {
+                x[i] = time.asDouble(rows[i]);
+            }
         } else {
             ReferenceData data = references.model(s.model(), null, -1).data();
             x = data.input(s.model().inputs().indexOf(s.request().displayInput()));

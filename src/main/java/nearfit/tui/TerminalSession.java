@@ -123,7 +123,7 @@ public final class TerminalSession {
     /** Loads on a background thread while drawing progress; q or Ctrl-C cancels (returns {@code null}). */
     private Workbench load(Path file, String shownName, WorkbenchOpener opener) throws IOException,
             InterruptedException {
-        Progress progress = new Progress();
+        JobFlags progress = new JobFlags();
         CompletableFuture<Workbench> task = CompletableFuture.supplyAsync(() -> opener.open(file, shownName, progress));
         while (true) {
             drawLoading(shownName, progress.fraction, progress.rows);
@@ -161,26 +161,5 @@ public final class TerminalSession {
                 Ink.TITLE);
         pen.text(0, layout.height() - 1, "q cancels", Ink.LABEL);
         screen.refresh(Screen.RefreshType.DELTA);
-    }
-
-    private static final class Progress implements JobControl {
-        volatile boolean cancelled;
-        volatile double fraction;
-        volatile long rows;
-
-        @Override
-        public void rows(long n) {
-            rows = n;
-        }
-
-        @Override
-        public boolean cancelled() {
-            return cancelled;
-        }
-
-        @Override
-        public void progress(double f) {
-            fraction = f;
-        }
     }
 }

@@ -21,7 +21,7 @@ class TerminalSessionTest {
     private static final StartSettings START = new StartSettings(List.of("wind_ms"), "power_kw", 0);
 
     @Test
-    void aBadFileEndsWithTheLoadersMessageOnOneLineAfterTheScreenIsRestored() {
+    void aBadFileEndsWithTheLoadersMessageOnOneLineAfterTheScreenIsRestored() throws Exception {
         DefaultVirtualTerminal vt = new DefaultVirtualTerminal(new TerminalSize(100, 30));
         StringWriter err = new StringWriter();
         int status = TerminalSession.run(new TerminalScreen(vt), Path.of("broken.csv"), "broken.csv",
@@ -33,7 +33,7 @@ class TerminalSessionTest {
     }
 
     @Test
-    void qQuitsWith0AndCtrlCWith130() {
+    void qQuitsWith0AndCtrlCWith130() throws Exception {
         for (KeyStroke key : List.of(new KeyStroke('q', false, false), new KeyStroke('c', true, false))) {
             DefaultVirtualTerminal vt = new DefaultVirtualTerminal(new TerminalSize(100, 30));
             vt.addInput(key);
@@ -46,7 +46,7 @@ class TerminalSessionTest {
     }
 
     @Test
-    void anUnknownColumnIsNamedWithItsOption() {
+    void anUnknownColumnIsNamedWithItsOption() throws Exception {
         DefaultVirtualTerminal vt = new DefaultVirtualTerminal(new TerminalSize(100, 30));
         StringWriter err = new StringWriter();
         int status = TerminalSession.run(new TerminalScreen(vt), Path.of("x.csv"), "x.csv",

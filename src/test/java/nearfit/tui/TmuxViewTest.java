@@ -29,16 +29,12 @@ class TmuxViewTest {
 
     @Test
     void viewDrawsBrailleFollowsKeysRedrawsOnResizeAndQuitsCleanly(@TempDir Path dir) throws Exception {
-        assumeTrue(hasTmux() || System.getenv("CI") != null, "tmux is not installed (CI installs it)");
-        Path csv = dir.resolve("small-site.csv");
-        Files.writeString(csv, smallLog(), StandardCharsets.UTF_8);
-        String session = "nearfit-view-" + UUID.randomUUID().toString().substring(0, 8);
+        String session = newSession(dir);
         try {
-            tmux("new-session", "-d", "-s", session, "-x", "120", "-y", "40", "bash --norc --noprofile");
             // A script keeps the long command line off the screen the test reads.
             Path script = dir.resolve("run-view.sh");
             Files.writeString(script, "cd '" + dir + "'\nLANG=C.UTF-8 " + javaCommand() + " view "
-                    + csv.getFileName() + "\necho NEARFIT_EXIT=$?\n", StandardCharsets.UTF_8);
+                    + "small-site.csv" + "\necho NEARFIT_EXIT=$?\n", StandardCharsets.UTF_8);
             tmux("send-keys", "-t", session, "sh " + script, "Enter");
             String first = waitFor(session, s -> s.contains("k=20") && hasBraille(s), "first frame");
             assertTrue(first.contains("small-site.csv"), first);
@@ -72,15 +68,11 @@ class TmuxViewTest {
 
     @Test
     void ctrlCExits130AndSigtermExits143WithTheTerminalSettingsRestored(@TempDir Path dir) throws Exception {
-        assumeTrue(hasTmux() || System.getenv("CI") != null, "tmux is not installed (CI installs it)");
-        Path csv = dir.resolve("small-site.csv");
-        Files.writeString(csv, smallLog(), StandardCharsets.UTF_8);
-        String session = "nearfit-view-" + UUID.randomUUID().toString().substring(0, 8);
+        String session = newSession(dir);
         try {
-            tmux("new-session", "-d", "-s", session, "-x", "120", "-y", "40", "bash --norc --noprofile");
             // Runs the explorer twice; each time compares the terminal settings (stty -g) before and after.
             Path script = dir.resolve("run-twice.sh");
-            String run = "before=$(stty -g); LANG=C.UTF-8 " + javaCommand() + " view " + csv.getFileName()
+            String run = "before=$(stty -g); LANG=C.UTF-8 " + javaCommand() + " view " + "small-site.csv"
                     + "; status=$?; [ \"$before\" = \"$(stty -g)\" ] && same=yes || same=no; "
                     + "echo \"NEARFIT_EXIT=$status SAME_TTY=$same\"\n";
             Files.writeString(script, "cd '" + dir + "'\n" + run + run, StandardCharsets.UTF_8);
@@ -95,6 +87,15 @@ class TmuxViewTest {
         } finally {
             new ProcessBuilder("tmux", "kill-session", "-t", session).start().waitFor(10, TimeUnit.SECONDS);
         }
+    }
+
+    /** Writes the small log into {@code dir} and opens a detached 120x40 session with a plain shell. */
+    private static String newSession(Path dir) throws IOException, InterruptedException {
+        assumeTrue(hasTmux() || System.getenv("CI") != null, "tmux is not installed (CI installs it)");
+        Files.writeString(dir.resolve("small-site.csv"), smallLog(), StandardCharsets.UTF_8);
+        String session = "nearfit-view-" + UUID.randomUUID().toString().substring(0, 8);
+        tmux("new-session", "-d", "-s", session, "-x", "120", "-y", "40", "bash --norc --noprofile");
+        return session;
     }
 
     /** The java process started under the session's shell: pane shell, then sh, then java. */
