@@ -135,7 +135,7 @@ final class PlainRowReader {
      * As {@link #decimalByBytes} for up to 7 digits before and 7 after the point, eight bytes at a time
      * (needs 17 readable bytes at {@code i}); -1 for anything else, which the byte loop then decides.
      */
-    private int decimalByWords(byte[] b, int i) {
+    int decimalByWords(byte[] b, int i) {
         long w = DigitWords.word(b, i);
         int n = DigitWords.leadingDigits(w);
         if (n == 8) {

@@ -76,6 +76,16 @@ class PlainRowReaderTest {
     }
 
     @Test
+    void theWordAtATimePathTakesTheUsualReadings() {
+        PlainRowReader r = new PlainRowReader(numbers(1, ',', false));
+        byte[] b = "2345.67,12.345,3.4567,-12.34\n........".getBytes(StandardCharsets.US_ASCII);
+        assertEquals(7, r.decimalByWords(b, 0));
+        assertEquals(14, r.decimalByWords(b, 8));
+        assertEquals(-1, r.decimalByWords("123456789.5,....................".getBytes(StandardCharsets.US_ASCII), 0),
+                "eight digits or more are left to the byte loop");
+    }
+
+    @Test
     void readsADecimalCommaRowWhenTheLayoutSaysSo() {
         PlainRowReader r = new PlainRowReader(numbers(2, ';', true));
         assertEquals(11, read(r, "12,5;-0,25\n", 0));
