@@ -1,0 +1,351 @@
+package nearfit.tui;
+
+import java.io.IOException;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.concurrent.BlockingQueue;
+import java.util.concurrent.LinkedBlockingQueue;
+import java.util.concurrent.TimeUnit;
+
+import com.googlecode.lanterna.TerminalSize;
+import com.googlecode.lanterna.input.KeyStroke;
+import com.googlecode.lanterna.input.KeyType;
+import com.googlecode.lanterna.screen.Screen;
+import com.googlecode.lanterna.screen.TerminalScreen;
+
+import nearfit.table.NearfitException;
+
+/**
+ * The explorer: holds the current {@link ViewState} and the latest {@link Results}, turns key presses into new
+ * states, asks the {@link Workbench} for what a state needs on background {@link Jobs}, and draws frames.
+ *
+ * <p>All fields are used from one thread, the one that calls {@link #run} (or, in tests, {@link #press} and
+ * {@link #settle}); background jobs only post events to the queue.
+ */
+public final class Explorer implements AutoCloseable {
+    /** Exit status after Ctrl-C, as a shell reports a process ended by SIGINT. */
+    public static final int EXIT_INTERRUPTED = 130;
+
+    private final TerminalScreen screen;
+    private final Workbench workbench;
+    private final Look look;
+    private final BlockingQueue<Object> events = new LinkedBlockingQueue<>();
+    private final Jobs jobs = new Jobs(events);
+    private final Sketches sketches;
+    private final Exporter exporter;
+    private final Map<List<Object>, Double> quantiles = new HashMap<>();
+    private final it.unimi.dsi.fastutil.ints.Int2ObjectOpenHashMap<com.googlecode.lanterna.TextCharacter> characters =
+            new it.unimi.dsi.fastutil.ints.Int2ObjectOpenHashMap<>();
+    private ViewState state;
+    private Results results;
+    private Layout layout;
+    private long generation;
+    private Object curveKey;
+    private Object tuningKey;
+    private Object flagsKey;
+    private int exitStatus;
+    private long framesDrawn;
+
+    /**
+     * @param screen    a started screen
+     * @param workbench the loaded table and the core behind it
+     * @param initial   the first state
+     * @param look      ASCII or not, colour or not
+     */
+    public Explorer(TerminalScreen screen, Workbench workbench, ViewState initial, Look look) {
+        this.screen = screen;
+        this.workbench = workbench;
+        this.look = look;
+        this.sketches = new Sketches(workbench);
+        this.exporter = new Exporter(workbench);
+        this.state = initial;
+        this.results = Results.none(workbench.rowsUsed(initial.condition()));
+        this.layout = layoutOf(screen.getTerminalSize());
+    }
+
+    /** The current state. */
+    public ViewState state() {
+        return state;
+    }
+
+    /** The latest results. */
+    public Results results() {
+        return results;
+    }
+
+    /** Frames drawn so far. */
+    public long framesDrawn() {
+        return framesDrawn;
+    }
+
+    /** Starts the jobs the first state needs and draws the first frame. */
+    public void start() throws IOException {
+        submit();
+        draw();
+    }
+
+    /** Handles one key: the next state, its effect, the jobs it needs and a frame. */
+    public void press(KeyStroke key) throws IOException {
+        Step step = KeyPress.next(state, key, context());
+        state = step.state();
+        perform(step.effect());
+        submit();
+        draw();
+    }
+
+    /** Waits until the background work of the current state is done, applies its results and draws. */
+    public void settle() throws IOException, InterruptedException {
+        jobs.awaitIdle(120_000);
+        drainEvents();
+        draw();
+    }
+
+    /** Waits until the curve of the current state is in and drawn, leaving tuning and flags running. */
+    public void settleCurve() throws IOException, InterruptedException {
+        jobs.awaitIdle(Jobs.Kind.CURVE, 120_000);
+        drainEvents();
+        draw();
+    }
+
+    /** Waits until one kind of background work is done ("curve", "tuning" or "flags"), then draws. */
+    public void settle(String kind) throws IOException, InterruptedException {
+        jobs.awaitIdle(Jobs.Kind.valueOf(kind.toUpperCase(java.util.Locale.ROOT)), 600_000);
+        drainEvents();
+        draw();
+    }
+
+    /**
+     * Runs until quit: keys come from a reader thread, results and progress from the jobs, all through one
+     * queue, so a key is handled as soon as it arrives whatever the jobs are doing.
+     *
+     * @return 0 after {@code q}, {@link #EXIT_INTERRUPTED} after Ctrl-C
+     */
+    public int run() throws IOException, InterruptedException {
+        startKeyReader();
+        screen.getTerminal().addResizeListener((t, size) -> events.offer(Jobs.TICK));
+        start();
+        while (!state.quit()) {
+            Object e = events.poll(250, TimeUnit.MILLISECONDS);
+            while (e != null && !state.quit()) {
+                handle(e);
+                e = events.poll();
+            }
+            if (!state.quit()) {
+                draw();
+            }
+        }
+        return exitStatus;
+    }
+
+    private void handle(Object e) throws IOException {
+        if (e instanceof KeyStroke key) {
+            Step step = KeyPress.next(state, key, context());
+            state = step.state();
+            perform(step.effect());
+            submit();
+        } else if (e instanceof Jobs.Done d) {
+            apply(d);
+        }
+    }
+
+    private void startKeyReader() {
+        Thread reader = new Thread(() -> {
+            try {
+                // Lanterna's virtual terminal holds its lock while it blocks in readInput, which would stop
+                // every frame, so it is polled; a real terminal is read blocking.
+                boolean poll = screen.getTerminal() instanceof com.googlecode.lanterna.terminal.virtual.VirtualTerminal;
+                while (true) {
+                    KeyStroke k = poll ? screen.pollInput() : screen.readInput();
+                    if (poll && k == null) {
+                        Thread.sleep(5);
+                        continue;
+                    }
+                    events.add(k == null ? new KeyStroke(KeyType.EOF) : k);
+                    if (k == null || k.getKeyType() == KeyType.EOF) {
+                        return;
+                    }
+                }
+            } catch (IOException | RuntimeException e) {
+                events.add(new KeyStroke(KeyType.EOF));
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+            }
+        }, "nearfit-keys");
+        reader.setDaemon(true);
+        reader.start();
+    }
+
+    private void drainEvents() throws IOException {
+        Object e;
+        while ((e = events.poll()) != null) {
+            handle(e);
+        }
+    }
+
+    private void apply(Jobs.Done d) {
+        if (!jobs.isCurrent(d)) {
+            return;
+        }
+        if (d.failure() != null) {
+            results = results.withFailure(oneLine(d.failure()));
+            return;
+        }
+        switch (d.kind()) {
+            case CURVE -> results = results.withCurve((CurveResult) d.value(), Double.NaN);
+            case TUNING -> results = results.withTuning((TuningResult) d.value(), Double.NaN);
+            case FLAGS -> results = results.withFlags((FlagResult) d.value(), Double.NaN);
+        }
+    }
+
+    static String oneLine(Throwable t) {
+        if (t instanceof NearfitException) {
+            return t.getMessage();
+        }
+        String m = t.getMessage();
+        return "internal error: " + t.getClass().getSimpleName() + (m == null ? "" : ": " + m.lines().findFirst().orElse(""));
+    }
+
+    private void perform(Effect effect) {
+        if (effect instanceof Effect.Interrupt) {
+            exitStatus = EXIT_INTERRUPTED;
+            state = state.edit().quit(true).build();
+        } else if (effect instanceof Effect.ApplyCondition c) {
+            try {
+                int rows = workbench.rowsUsed(c.condition());
+                state = state.edit().condition(c.condition()).zoom(Double.NaN, Double.NaN).markedRow(-1)
+                        .message(c.condition().isEmpty() ? "all rows" : Figures.count(rows) + " rows match").build();
+                results = results.withRowsUsed(rows).withFailure("");
+            } catch (NearfitException e) {
+                state = state.edit().message(e.getMessage()).build();
+            }
+        } else if (effect instanceof Effect.Export x) {
+            state = exporter.export(x, state, results, frameInput());
+        }
+    }
+
+    /** Starts whatever job the state needs that is not already running or done for the same settings. */
+    private void submit() {
+        if (results.rowsUsed() == 0) {
+            return;
+        }
+        ModelSettings model = state.model();
+        CurveRequest request = request();
+        List<Object> ck = java.util.Arrays.asList(model, request);
+        if (request != null && !ck.equals(curveKey)) {
+            curveKey = ck;
+            generation++;
+            results = results.withCurve(results.curve(), 0);
+            jobs.start(Jobs.Kind.CURVE, generation, c -> workbench.curve(model, request, c));
+        }
+        ModelSettings anyK = model.withK(1);
+        if (!anyK.equals(tuningKey)) {
+            tuningKey = anyK;
+            generation++;
+            results = results.withTuning(null, 0);
+            jobs.start(Jobs.Kind.TUNING, generation, c -> workbench.tune(model, c));
+        }
+        List<Object> fk = java.util.Arrays.asList(model, state.groupColumn());
+        if (!fk.equals(flagsKey)) {
+            flagsKey = fk;
+            generation++;
+            // The previous flags stay on screen, marked as updating, until the new ones arrive: a k change
+            // then redraws without recomposing the plot.
+            results = results.withFlags(results.flags(), 0);
+            String group = state.groupColumn();
+            jobs.start(Jobs.Kind.FLAGS, generation, c -> workbench.flags(model, group, c));
+        }
+    }
+
+    /** The curve request of the current state and screen size, or {@code null} without rows. */
+    CurveRequest request() {
+        double from = state.wholeRange() ? quantile(state.displayInput(), 0) : state.zoomFrom();
+        double to = state.wholeRange() ? quantile(state.displayInput(), 1) : state.zoomTo();
+        if (Double.isNaN(from) || Double.isNaN(to)) {
+            return null;
+        }
+        if (!(to > from)) {
+            to = from + 1;
+        }
+        int responseClass = kindOf(state.response()) == ColumnKind.CATEGORY ? state.responseClass() : -1;
+        return new CurveRequest(state.displayInput(), heldValues(), from, to, layout.curveSteps(),
+                state.groupColumn(), state.group(), state.compare(), responseClass);
+    }
+
+    private Map<String, Double> heldValues() {
+        Map<String, Double> held = new HashMap<>();
+        for (Map.Entry<String, Double> e : state.heldQuantile().entrySet()) {
+            held.put(e.getKey(), quantile(e.getKey(), e.getValue()));
+        }
+        return held;
+    }
+
+    /** A quantile from the core, asked once per column, condition and level. */
+    private double quantile(String column, double q) {
+        List<Object> key = List.of(column, state.condition(), q);
+        Double v = quantiles.get(key);
+        if (v == null) {
+            v = workbench.quantile(column, state.condition(), q);
+            quantiles.put(key, v);
+        }
+        return v;
+    }
+
+    private ColumnKind kindOf(String column) {
+        for (ColumnInfo c : workbench.columns()) {
+            if (c.name().equals(column)) {
+                return c.kind();
+            }
+        }
+        return null;
+    }
+
+    private KeyContext context() {
+        int groups = state.groupColumn() == null ? 0 : workbench.labels(state.groupColumn()).size();
+        int classes = kindOf(state.response()) == ColumnKind.CATEGORY ? workbench.labels(state.response()).size() : 0;
+        return new KeyContext(workbench.columns(), results, quantile(state.displayInput(), 0),
+                quantile(state.displayInput(), 1), groups, classes, workbench.timeColumn() != null);
+    }
+
+    FrameInput frameInput() {
+        List<String> groups = state.groupColumn() == null ? List.of() : workbench.labels(state.groupColumn());
+        List<String> classes = kindOf(state.response()) == ColumnKind.CATEGORY
+                ? workbench.labels(state.response()) : List.of();
+        return new FrameInput(workbench.source(), workbench.totalRows(), workbench.columns(), heldValues(),
+                results.rowsUsed() == 0 ? null : request(), groups, classes, Double.NaN);
+    }
+
+    /** Draws a frame, first taking in a new terminal size (which may ask for a new curve). */
+    void draw() throws IOException {
+        TerminalSize resized = screen.doResizeIfNecessary();
+        if (resized != null) {
+            layout = layoutOf(resized);
+            submit();
+        }
+        results = new Results(results.curve(), jobs.progress(Jobs.Kind.CURVE), results.tuning(),
+                jobs.progress(Jobs.Kind.TUNING), results.flags(), jobs.progress(Jobs.Kind.FLAGS),
+                results.rowsUsed(), results.failure());
+        Pen pen = new Pen(screen.newTextGraphics(), look, layout.width(), layout.height(), characters);
+        ScreenPainter.paint(pen, layout, state, results, frameInput(), sketches);
+        screen.setCursorPosition(null);
+        // After a resize the terminal may have reflowed or cleared its cells, so the frame is sent whole;
+        // otherwise only the cells that changed.
+        screen.refresh(resized != null ? Screen.RefreshType.COMPLETE : Screen.RefreshType.DELTA);
+        framesDrawn++;
+    }
+
+    private static Layout layoutOf(TerminalSize size) {
+        return new Layout(size.getColumns(), size.getRows());
+    }
+
+    @Override
+    public void close() {
+        jobs.close();
+    }
+
+    @Override
+    public String toString() {
+        return "Explorer[" + Objects.toString(state) + "]";
+    }
+}

@@ -1,0 +1,157 @@
+package nearfit.tui;
+
+import java.util.concurrent.BlockingQueue;
+import java.util.concurrent.CancellationException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.TimeUnit;
+import java.util.function.Function;
+
+/**
+ * The explorer's background work: one executor with two lanes, at most one live job per kind, each job
+ * tagged with the generation of the state that asked for it. The curve has a lane of its own, so a k change
+ * never waits behind leave-one-out work; flags and tuning share the other lane, one after the other, so
+ * that on a two-core machine one core stays free for the curve and the frame. Starting a job cancels the older one of its kind, and a result
+ * whose generation is no longer the latest of its kind is dropped by {@link #isCurrent}.
+ *
+ * <p>Finished jobs post a {@link Done} to the explorer's event queue; progress posts {@link #TICK} at most
+ * once per percentage point. {@link #start}, {@link #isCurrent} and {@link #progress} are called from the
+ * explorer's thread only.
+ */
+final class Jobs implements AutoCloseable {
+    /** The kinds of job; each has its own latest generation. */
+    enum Kind { CURVE, TUNING, FLAGS }
+
+    /** A finished job: its value, or the failure that ended it. */
+    record Done(Kind kind, long generation, Object value, Throwable failure) {
+    }
+
+    /** Posted when a running job's progress moved on, so the header can be redrawn. */
+    static final Object TICK = new Object();
+
+    private final ExecutorService curveLane;
+    private final ExecutorService longLane;
+    private final BlockingQueue<Object> events;
+    private final long[] latest = new long[Kind.values().length];
+    private final Control[] running = new Control[Kind.values().length];
+    private int outstanding;
+    private final int[] outstandingOf = new int[Kind.values().length];
+
+    Jobs(BlockingQueue<Object> events) {
+        this.events = events;
+        this.curveLane = Executors.newSingleThreadExecutor(r -> daemon(r, "nearfit-curve"));
+        this.longLane = Executors.newSingleThreadExecutor(r -> daemon(r, "nearfit-leave-one-out"));
+    }
+
+    private static Thread daemon(Runnable r, String name) {
+        Thread t = new Thread(r, name);
+        t.setDaemon(true);
+        return t;
+    }
+
+    /** Cancels the running job of this kind and starts {@code work} for generation {@code generation}. */
+    <T> void start(Kind kind, long generation, Function<JobControl, T> work) {
+        Control old = running[kind.ordinal()];
+        if (old != null) {
+            old.cancelled = true;
+        }
+        Control c = new Control();
+        running[kind.ordinal()] = c;
+        latest[kind.ordinal()] = generation;
+        synchronized (this) {
+            outstanding++;
+            outstandingOf[kind.ordinal()]++;
+        }
+        (kind == Kind.CURVE ? curveLane : longLane).execute(() -> run(kind, generation, c, work));
+    }
+
+    private <T> void run(Kind kind, long generation, Control c, Function<JobControl, T> work) {
+        try {
+            if (!c.cancelled) {
+                T value = work.apply(c);
+                if (!c.cancelled) {
+                    events.add(new Done(kind, generation, value, null));
+                }
+            }
+        } catch (CancellationException e) {
+            // A newer setting asked for this work again; nothing to report.
+        } catch (RuntimeException | Error e) {
+            events.add(new Done(kind, generation, null, e));
+        } finally {
+            c.finished = true;
+            synchronized (this) {
+                outstanding--;
+                outstandingOf[kind.ordinal()]--;
+                notifyAll();
+            }
+        }
+    }
+
+    /** Whether a finished job is the latest of its kind. */
+    boolean isCurrent(Done d) {
+        return d.generation() == latest[d.kind().ordinal()];
+    }
+
+    /** Progress of the running job of a kind, NaN when none is running. */
+    double progress(Kind kind) {
+        Control c = running[kind.ordinal()];
+        return c == null || c.finished ? Double.NaN : c.fraction;
+    }
+
+    /** Waits until no job is running or queued; for tests and benchmarks. */
+    synchronized void awaitIdle(long timeoutMillis) throws InterruptedException {
+        long end = System.currentTimeMillis() + timeoutMillis;
+        while (outstanding > 0) {
+            long left = end - System.currentTimeMillis();
+            if (left <= 0) {
+                throw new IllegalStateException("background work still running after " + timeoutMillis + " ms");
+            }
+            wait(left);
+        }
+    }
+
+    /** Waits until no job of one kind is running or queued; for benchmarks. */
+    synchronized void awaitIdle(Kind kind, long timeoutMillis) throws InterruptedException {
+        long end = System.currentTimeMillis() + timeoutMillis;
+        while (outstandingOf[kind.ordinal()] > 0) {
+            long left = end - System.currentTimeMillis();
+            if (left <= 0) {
+                throw new IllegalStateException(kind + " work still running after " + timeoutMillis + " ms");
+            }
+            wait(left);
+        }
+    }
+
+    @Override
+    public void close() {
+        for (Control c : running) {
+            if (c != null) {
+                c.cancelled = true;
+            }
+        }
+        curveLane.shutdownNow();
+        longLane.shutdownNow();
+        try {
+            curveLane.awaitTermination(2, TimeUnit.SECONDS);
+            longLane.awaitTermination(2, TimeUnit.SECONDS);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
+    }
+
+    /** A job's flags that also post a {@link #TICK} when its progress passes a percentage point. */
+    private final class Control extends JobFlags {
+        volatile boolean finished;
+        private int lastPercent = -1;
+
+        @Override
+        public void progress(double f) {
+            super.progress(f);
+            int percent = (int) (100 * f);
+            if (percent != lastPercent) {
+                lastPercent = percent;
+                events.offer(TICK);
+            }
+        }
+    }
+}

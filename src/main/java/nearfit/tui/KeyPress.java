@@ -1,0 +1,267 @@
+package nearfit.tui;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+import com.googlecode.lanterna.input.KeyStroke;
+import com.googlecode.lanterna.input.KeyType;
+
+/**
+ * The explorer's key map as a pure function: a state, a key and what the key may consult give the next state
+ * and any effect. Nothing here computes statistics or touches the terminal.
+ */
+public final class KeyPress {
+    /** Crosshair step of the left and right arrows, as a fraction of the view's width. */
+    static final double FINE_STEP = 0.01;
+    /** Crosshair step of the up and down arrows. */
+    static final double COARSE_STEP = 0.1;
+    /** Quantile step of {@code <} and {@code >}. */
+    static final double HELD_STEP = 0.05;
+
+    private KeyPress() {
+    }
+
+    /** The step for one key press. */
+    public static Step next(ViewState s, KeyStroke key, KeyContext cx) {
+        if (key.getKeyType() == KeyType.Character && key.isCtrlDown()
+                && Character.toLowerCase(key.getCharacter()) == 'c') {
+            return new Step(s, new Effect.Interrupt());
+        }
+        if (key.getKeyType() == KeyType.EOF) {
+            return Step.of(s.edit().quit(true).build());
+        }
+        ViewState fresh = s.message().isEmpty() ? s : s.edit().message("").build();
+        return switch (s.overlay()) {
+            case NONE -> plain(fresh, key, cx);
+            case HELP -> key.getKeyType() == KeyType.Character && key.getCharacter() == '?'
+                    ? Step.of(fresh.edit().close().build()) : panel(fresh, key, cx, KeyBinding.values().length);
+            case PICKER -> picker(fresh, key, cx);
+            case TUNING -> tuning(fresh, key, cx);
+            case FLAGS -> flagTable(fresh, key, cx);
+            case EXPORT -> exportMenu(fresh, key, cx);
+            case PROMPT -> Prompts.next(fresh, key);
+            case CONFIRM -> confirm(fresh, key);
+        };
+    }
+
+    /** Keys common to panels with a list: Esc, up, down, page keys; anything else acts as on the plot. */
+    private static Step panel(ViewState s, KeyStroke key, KeyContext cx, int lines) {
+        int page = 10;
+        switch (key.getKeyType()) {
+            case Escape:
+                return Step.of(s.edit().close().build());
+            case ArrowUp:
+                return Step.of(s.edit().cursor(Math.max(0, s.cursor() - 1)).build());
+            case ArrowDown:
+                return Step.of(s.edit().cursor(Math.max(0, Math.min(lines - 1, s.cursor() + 1))).build());
+            case PageUp:
+                return Step.of(s.edit().cursor(Math.max(0, s.cursor() - page)).build());
+            case PageDown:
+                return Step.of(s.edit().cursor(Math.max(0, Math.min(lines - 1, s.cursor() + page))).build());
+            default:
+                return plain(s, key, cx);
+        }
+    }
+
+    private static Step plain(ViewState s, KeyStroke key, KeyContext cx) {
+        switch (key.getKeyType()) {
+            case ArrowLeft: return Step.of(moveCrosshair(s, -FINE_STEP));
+            case ArrowRight: return Step.of(moveCrosshair(s, FINE_STEP));
+            case ArrowDown: return Step.of(moveCrosshair(s, -COARSE_STEP));
+            case ArrowUp: return Step.of(moveCrosshair(s, COARSE_STEP));
+            case Escape: return Step.of(s.edit().close().build());
+            case Character: return character(s, key.getCharacter(), cx);
+            default: return Step.of(s);
+        }
+    }
+
+    private static Step character(ViewState s, char c, KeyContext cx) {
+        ViewState.Builder b = s.edit();
+        switch (c) {
+            case '?': return Step.of(b.open(Overlay.HELP, Ask.NOTHING).build());
+            case 'q': return Step.of(b.quit(true).build());
+            case 'x': return Step.of(b.open(Overlay.PICKER, Ask.DISPLAY_INPUT).build());
+            case 'y': return Step.of(b.open(Overlay.PICKER, Ask.RESPONSE).build());
+            case 'i': return Step.of(b.open(Overlay.PICKER, Ask.INPUTS).build());
+            case 'g': return Step.of(b.open(Overlay.PICKER, Ask.GROUP).build());
+            case 'v': return s.inputs().size() > 1 ? Step.of(b.open(Overlay.PICKER, Ask.HELD_INPUT).build())
+                    : Step.of(b.message("only one input: nothing is held").build());
+            case '+': return Step.of(b.k(KLadder.up(s.k(), Math.max(1, cx.results().rowsUsed() - 1))).build());
+            case '-': return Step.of(b.k(KLadder.down(s.k())).build());
+            case 'k': return Step.of(b.open(Overlay.PROMPT, Ask.K).build());
+            case '/': return Step.of(b.open(Overlay.PROMPT, Ask.CONDITION).typed(s.condition()).build());
+            case 't': return Step.of(b.open(Overlay.TUNING, Ask.NOTHING).cursor(tuningCursor(s, cx)).build());
+            case 'F': return Step.of(b.open(Overlay.FLAGS, Ask.NOTHING).build());
+            case 'e': return Step.of(b.open(Overlay.EXPORT, Ask.NOTHING).build());
+            case 'm': return Step.of(b.metric(cycle(Metric.values(), s.metric())).build());
+            case 'w': return Step.of(b.weighting(cycle(Weighting.values(), s.weighting())).build());
+            case 's': return Step.of(b.scaling(cycle(Scaling.values(), s.scaling())).build());
+            case 'b': return Step.of(b.band(cycle(BandKind.values(), s.band())).build());
+            case 'f': return Step.of(b.flagMarks(!s.flagMarks()).build());
+            case 'r': return Step.of(b.mode(s.mode() == PlotMode.RESIDUALS ? PlotMode.RESPONSE : PlotMode.RESIDUALS)
+                    .build());
+            case 'T': return cx.hasTime() ? Step.of(b.mode(s.mode() == PlotMode.RESIDUALS_OVER_TIME
+                    ? PlotMode.RESPONSE : PlotMode.RESIDUALS_OVER_TIME).build())
+                    : Step.of(b.message("no time column in this file").build());
+            case 'n': return Step.of(stepGroup(s, cx, 1));
+            case 'p': return Step.of(stepGroup(s, cx, -1));
+            case 'a': return Step.of(b.group(-1).compare(false).build());
+            case 'o': return s.group() < 0 ? Step.of(b.message("highlight a group first: g, then n or p").build())
+                    : Step.of(b.compare(!s.compare()).build());
+            case ']': return Step.of(zoom(s, cx, 0.5));
+            case '[': return Step.of(s.wholeRange() ? b.message("already showing the whole data").build()
+                    : zoom(s, cx, 2.0));
+            case '0': return Step.of(s.wholeRange() ? b.message("already showing the whole data").build()
+                    : b.zoom(Double.NaN, Double.NaN).build());
+            case '<': return Step.of(moveHeld(s, -HELD_STEP));
+            case '>': return Step.of(moveHeld(s, HELD_STEP));
+            case 'h': return s.inputs().size() > 1 ? Step.of(b.nearHeldOnly(!s.nearHeldOnly()).build())
+                    : Step.of(b.message("only one input: nothing is held").build());
+            default: return Step.of(s);
+        }
+    }
+
+    static <E extends Enum<E>> E cycle(E[] values, E current) {
+        return values[(current.ordinal() + 1) % values.length];
+    }
+
+    private static ViewState moveCrosshair(ViewState s, double by) {
+        return s.edit().crosshair(Math.max(0, Math.min(1, s.crosshair() + by))).build();
+    }
+
+    private static ViewState moveHeld(ViewState s, double by) {
+        if (s.heldInput() == null) {
+            return s.edit().message("only one input: nothing is held").build();
+        }
+        Map<String, Double> held = new HashMap<>(s.heldQuantile());
+        double q = held.getOrDefault(s.heldInput(), 0.5) + by;
+        // Round to the 5 % grid so repeated steps do not drift by floating-point error.
+        held.put(s.heldInput(), Math.max(0, Math.min(1, Math.round(q * 20) / 20.0)));
+        return s.edit().heldQuantile(held).build();
+    }
+
+    private static ViewState stepGroup(ViewState s, KeyContext cx, int by) {
+        if (s.groupColumn() != null && cx.groupCount() > 0) {
+            int n = cx.groupCount();
+            int g = s.group() < 0 ? (by > 0 ? 0 : n - 1) : Math.floorMod(s.group() + by, n);
+            return s.edit().group(g).build();
+        }
+        if (cx.classCount() > 0) {
+            return s.edit().responseClass(Math.floorMod(s.responseClass() + by, cx.classCount())).build();
+        }
+        return s.edit().message("no group column: choose one with g").build();
+    }
+
+    /** Halves or doubles the view's width keeping the crosshair's value at the same place on screen. */
+    private static ViewState zoom(ViewState s, KeyContext cx, double factor) {
+        double from = s.wholeRange() ? cx.dataFrom() : s.zoomFrom();
+        double to = s.wholeRange() ? cx.dataTo() : s.zoomTo();
+        double whole = cx.dataTo() - cx.dataFrom();
+        if (!(to > from) || !(whole > 0)) {
+            return s;
+        }
+        double x = from + s.crosshair() * (to - from);
+        double span = (to - from) * factor;
+        if (span >= whole) {
+            return s.edit().zoom(Double.NaN, Double.NaN).crosshair((x - cx.dataFrom()) / whole).build();
+        }
+        double newFrom = x - s.crosshair() * span;
+        return s.edit().zoom(newFrom, newFrom + span).build();
+    }
+
+    private static int tuningCursor(ViewState s, KeyContext cx) {
+        TuningResult t = cx.results().tuning();
+        if (t == null) {
+            return 0;
+        }
+        int i = t.indexOf(s.k());
+        return Math.max(0, i);
+    }
+
+    private static Step picker(ViewState s, KeyStroke key, KeyContext cx) {
+        List<String> options = Pickers.options(s.ask(), s, cx.columns());
+        boolean choose = key.getKeyType() == KeyType.Enter
+                || (key.getKeyType() == KeyType.Character && key.getCharacter() == ' ');
+        if (!choose) {
+            return panel(s, key, cx, options.size());
+        }
+        if (options.isEmpty()) {
+            return Step.of(s.edit().close().message("nothing to choose").build());
+        }
+        String chosen = options.get(Math.min(s.cursor(), options.size() - 1));
+        return Step.of(ColumnChoice.apply(s, s.ask(), chosen, cx));
+    }
+
+    private static Step tuning(ViewState s, KeyStroke key, KeyContext cx) {
+        TuningResult t = cx.results().tuning();
+        int lines = t == null ? 0 : t.k().length;
+        if (t != null && key.getKeyType() == KeyType.Enter) {
+            return Step.of(s.edit().k(t.k()[Math.min(s.cursor(), lines - 1)]).build());
+        }
+        if (t != null && key.getKeyType() == KeyType.Character && key.getCharacter() == '*') {
+            return Step.of(s.edit().k(t.bestK()).cursor(t.indexOf(t.bestK())).build());
+        }
+        if (t != null && key.getKeyType() == KeyType.Character && key.getCharacter() == '1') {
+            return Step.of(s.edit().k(t.oneSeK()).cursor(t.indexOf(t.oneSeK())).build());
+        }
+        if (key.getKeyType() == KeyType.Character && key.getCharacter() == 't') {
+            return Step.of(s.edit().close().build());
+        }
+        return panel(s, key, cx, lines);
+    }
+
+    private static Step flagTable(ViewState s, KeyStroke key, KeyContext cx) {
+        FlagResult f = cx.results().flags();
+        int lines = f == null ? 0 : f.flagged().size();
+        if (f != null && lines > 0 && key.getKeyType() == KeyType.Enter) {
+            FlaggedRow row = f.flagged().get(Math.min(s.cursor(), lines - 1));
+            double x = row.inputs().get(s.inputs().indexOf(s.displayInput()));
+            double whole = cx.dataTo() - cx.dataFrom();
+            double at = whole > 0 ? (x - cx.dataFrom()) / whole : 0.5;
+            return Step.of(s.edit().close().zoom(Double.NaN, Double.NaN).crosshair(Math.max(0, Math.min(1, at)))
+                    .markedRow(row.row()).message("line " + row.line() + " marked").build());
+        }
+        if (key.getKeyType() == KeyType.Character && key.getCharacter() == 'F') {
+            return Step.of(s.edit().close().build());
+        }
+        return panel(s, key, cx, lines);
+    }
+
+    private static Step exportMenu(ViewState s, KeyStroke key, KeyContext cx) {
+        ExportKind[] kinds = ExportKind.values();
+        int chosen = -1;
+        if (key.getKeyType() == KeyType.Enter) {
+            chosen = Math.min(s.cursor(), kinds.length - 1);
+        } else if (key.getKeyType() == KeyType.Character && key.getCharacter() >= '1'
+                && key.getCharacter() < '1' + kinds.length) {
+            chosen = key.getCharacter() - '1';
+        }
+        if (chosen < 0) {
+            return panel(s, key, cx, kinds.length);
+        }
+        ExportKind kind = kinds[chosen];
+        return Step.of(s.edit().open(Overlay.PROMPT, Ask.FILE).export(kind).typed(kind.defaultFile()).build());
+    }
+
+    private static Step confirm(ViewState s, KeyStroke key) {
+        if (key.getKeyType() == KeyType.Character && key.getCharacter() == 'y' && s.export() != null) {
+            return new Step(s.edit().close().build(), new Effect.Export(s.export(), s.typed(), true));
+        }
+        return Step.of(s.edit().close().message("not written").build());
+    }
+
+    /** The inputs with one added or removed; never empty. */
+    static List<String> toggle(List<String> inputs, String column) {
+        List<String> out = new ArrayList<>(inputs);
+        if (out.contains(column)) {
+            if (out.size() > 1) {
+                out.remove(column);
+            }
+        } else {
+            out.add(column);
+        }
+        return out;
+    }
+}

@@ -1,0 +1,79 @@
+package nearfit.tui;
+
+import nearfit.knn.Band;
+import nearfit.knn.FlagScale;
+import nearfit.knn.KnnSettings;
+
+/** The explorer's choices as the knn package's settings. */
+final class KnnChoices {
+    /** Worker threads for one curve or leave-one-out run; the machine's processors. */
+    static final int THREADS = Math.max(1, Runtime.getRuntime().availableProcessors());
+
+    private KnnChoices() {
+    }
+
+    /** Worker threads for leave-one-out runs: all processors but one, which stays with the curve and frame. */
+    static final int LONG_THREADS = Math.max(1, THREADS - 1);
+
+    static KnnSettings settings(ModelSettings m) {
+        return new KnnSettings(m.k(), metric(m.metric()), weighting(m.weighting()), scaling(m.scaling()),
+                band(m.band()), KnnSettings.DEFAULT_FLAG_THRESHOLD, FlagScale.GLOBAL_MAD, THREADS);
+    }
+
+    /** The settings for tuning and flags, on {@link #LONG_THREADS} threads. */
+    static KnnSettings longSettings(ModelSettings m) {
+        return settings(m).withThreads(LONG_THREADS);
+    }
+
+    static nearfit.knn.Metric metric(Metric m) {
+        return switch (m) {
+            case EUCLIDEAN -> nearfit.knn.Metric.EUCLIDEAN;
+            case MANHATTAN -> nearfit.knn.Metric.MANHATTAN;
+            case CHEBYSHEV -> nearfit.knn.Metric.CHEBYSHEV;
+            case MAHALANOBIS -> nearfit.knn.Metric.MAHALANOBIS;
+        };
+    }
+
+    static nearfit.knn.Weighting weighting(Weighting w) {
+        return switch (w) {
+            case EQUAL -> nearfit.knn.Weighting.UNIFORM;
+            case INVERSE -> nearfit.knn.Weighting.INVERSE;
+            case TRICUBE -> nearfit.knn.Weighting.TRICUBE;
+        };
+    }
+
+    static nearfit.knn.Scaling scaling(Scaling s) {
+        return switch (s) {
+            case STANDARD -> nearfit.knn.Scaling.Z;
+            case ROBUST -> nearfit.knn.Scaling.ROBUST;
+            case RANGE -> nearfit.knn.Scaling.RANGE;
+            case NONE -> nearfit.knn.Scaling.NONE;
+        };
+    }
+
+    static Band band(BandKind b) {
+        return switch (b) {
+            case QUANTILE_10_90 -> Band.Q10_Q90;
+            case QUANTILE_05_95 -> Band.Q05_Q95;
+            case TWO_SD -> Band.SD2;
+            case OFF -> Band.NONE;
+        };
+    }
+
+    /** A knn progress that reports to and is cancelled by an explorer job. */
+    static nearfit.knn.Progress progress(JobControl c) {
+        return new nearfit.knn.Progress() {
+            @Override
+            public void report(long done, long total) {
+                if (total > 0) {
+                    c.progress((double) done / total);
+                }
+            }
+
+            @Override
+            public boolean isCancelled() {
+                return c.cancelled();
+            }
+        };
+    }
+}

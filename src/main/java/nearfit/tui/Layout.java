@@ -1,0 +1,55 @@
+package nearfit.tui;
+
+/**
+ * Where each part of the screen goes for a terminal size: two header rows, the plot, one window-width row,
+ * the status row and the key row. Below {@link #MIN_WIDTH} by {@link #MIN_HEIGHT} only a message is drawn.
+ *
+ * @param width  terminal columns
+ * @param height terminal rows
+ */
+public record Layout(int width, int height) {
+    /** Fewest columns for the full screen; narrower shows a message. */
+    public static final int MIN_WIDTH = 60;
+    /** Fewest rows for the full screen. */
+    public static final int MIN_HEIGHT = 18;
+    /** Header rows above the plot. */
+    static final int HEADER_ROWS = 2;
+
+    /** Whether the terminal is big enough for the full screen. */
+    public boolean fits() {
+        return width >= MIN_WIDTH && height >= MIN_HEIGHT;
+    }
+
+    /** The first plot row. */
+    int plotTop() {
+        return HEADER_ROWS;
+    }
+
+    /** Plot rows. */
+    int plotHeight() {
+        return height - HEADER_ROWS - 3;
+    }
+
+    /** The window-width strip's row. */
+    int stripRow() {
+        return height - 3;
+    }
+
+    /** The status row. */
+    int statusRow() {
+        return height - 2;
+    }
+
+    /** The key row. */
+    int keyRow() {
+        return height - 1;
+    }
+
+    /**
+     * Points on the curve: one per terminal column. The plot joins them with lines, and halving the points
+     * of the braille grid's two dots per column halves the curve's cost after a key press.
+     */
+    int curveSteps() {
+        return Math.max(2, width);
+    }
+}

@@ -1,0 +1,20 @@
+package nearfit.tui;
+
+/**
+ * Everything the plot shows, handed to the plot package in one value.
+ *
+ * @param model        the model settings (response, inputs, rows)
+ * @param request      where the curve was asked for; its range is the plot's horizontal range
+ * @param curve        the latest curve for this request, or {@code null} while it is computed
+ * @param flags        the latest flags, or {@code null}
+ * @param mode         what the axes show
+ * @param flagMarks    whether flagged rows are marked
+ * @param crosshairX   the crosshair's display-input value, NaN for none
+ * @param heldQuantile the quantile level (0 to 1) of each held input's value
+ * @param nearHeldOnly whether only rows near the held values are drawn
+ * @param markedRow    a row to mark (jumped to from the flagged table), -1 for none
+ * @param ascii        whether to draw with plain ASCII instead of braille
+ */
+public record PlotScene(ModelSettings model, CurveRequest request, CurveResult curve, FlagResult flags,
+        PlotMode mode, boolean flagMarks, double crosshairX, java.util.Map<String, Double> heldQuantile, boolean nearHeldOnly, int markedRow, boolean ascii) {
+}

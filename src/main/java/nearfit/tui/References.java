@@ -1,0 +1,173 @@
+package nearfit.tui;
+
+import java.util.Arrays;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.ExecutionException;
+
+import nearfit.knn.KnnModel;
+import nearfit.knn.ReferenceData;
+import nearfit.table.CategoryColumn;
+import nearfit.table.Column;
+import nearfit.table.NumericColumn;
+import nearfit.table.Quantiles;
+import nearfit.table.RowSet;
+import nearfit.table.Table;
+
+/**
+ * What the workbench keeps between calls: the rows of recent row conditions, sorted values for quantiles,
+ * fitted models (one fit shared by the curve, tuning and flag jobs that ask for it at once, and reused with
+ * another k, weighting or band) and the latest leave-one-out flags. Safe for concurrent use.
+ */
+final class References {
+    /** Entries kept per cache; a few settings back is enough to step back and forth. */
+    private static final int KEEP = 4;
+
+    private final Table table;
+    private final Map<String, RowSet> rows = lru();
+    private final Map<List<Object>, double[]> sorted = lru();
+    private final Map<List<Object>, CompletableFuture<KnnModel>> models = lru();
+    private final Map<ModelSettings, nearfit.knn.FlagResult> flags = lru();
+
+    References(Table table) {
+        this.table = table;
+    }
+
+    private static <K, V> Map<K, V> lru() {
+        return new LinkedHashMap<>(16, 0.75f, true) {
+            @Override
+            protected boolean removeEldestEntry(Map.Entry<K, V> e) {
+                return size() > KEEP;
+            }
+        };
+    }
+
+    /** The rows of a condition (all rows when empty), checked by the table package's parser. */
+    RowSet rows(String condition) {
+        synchronized (rows) {
+            RowSet r = rows.get(condition);
+            if (r == null) {
+                r = condition.isBlank() ? table.allRows() : table.where(condition);
+                rows.put(condition, r);
+            }
+            return r;
+        }
+    }
+
+    /** A quantile of the present values, Hyndman and Fan's definition 7 as the table package computes it. */
+    double quantile(String column, String condition, double q) {
+        double[] values;
+        List<Object> key = List.of(column, condition);
+        synchronized (sorted) {
+            values = sorted.get(key);
+        }
+        if (values == null) {
+            values = presentSorted(table.numeric(column), rows(condition));
+            synchronized (sorted) {
+                sorted.put(key, values);
+            }
+        }
+        return Quantiles.type7(values, values.length, q);
+    }
+
+    private static double[] presentSorted(NumericColumn column, RowSet rows) {
+        double[] all = column.copyValues(rows);
+        int n = 0;
+        for (double v : all) {
+            if (!Double.isNaN(v)) {
+                all[n++] = v;
+            }
+        }
+        double[] out = Arrays.copyOf(all, n);
+        Arrays.sort(out);
+        return out;
+    }
+
+    /**
+     * The model for these settings, fitted once per rows, response, inputs, metric and scaling. With a
+     * group column, the rows of group {@code group} are left out (the curve of the other groups).
+     */
+    KnnModel model(ModelSettings m, String groupColumn, int group) {
+        List<Object> key = Arrays.asList(m.condition(), m.response(), m.inputs(), m.metric(), m.scaling(),
+                groupColumn, groupColumn == null ? -1 : group);
+        CompletableFuture<KnnModel> f;
+        boolean mine = false;
+        synchronized (models) {
+            f = models.get(key);
+            if (f == null) {
+                f = new CompletableFuture<>();
+                models.put(key, f);
+                mine = true;
+            }
+        }
+        if (mine) {
+            try {
+                f.complete(KnnModel.fit(data(m, groupColumn, group), KnnChoices.settings(m)));
+            } catch (RuntimeException e) {
+                f.completeExceptionally(e);
+                synchronized (models) {
+                    models.remove(key);
+                }
+            }
+        }
+        try {
+            return f.get().withSettings(KnnChoices.settings(m));
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new java.util.concurrent.CancellationException("interrupted");
+        } catch (ExecutionException e) {
+            throw e.getCause() instanceof RuntimeException re ? re : new IllegalStateException(e.getCause());
+        }
+    }
+
+    private ReferenceData data(ModelSettings m, String groupColumn, int group) {
+        RowSet used = rows(m.condition());
+        if (groupColumn != null && group >= 0) {
+            used = without(used, (CategoryColumn) table.column(groupColumn), group);
+        }
+        int d = m.inputs().size();
+        String[] names = m.inputs().toArray(new String[0]);
+        double[][] inputs = new double[d][];
+        for (int j = 0; j < d; j++) {
+            inputs[j] = table.numeric(names[j]).copyValues(used);
+        }
+        int[] ids = used.toArray();
+        Column response = table.column(m.response());
+        if (response instanceof CategoryColumn c) {
+            int[] codes = new int[ids.length];
+            for (int i = 0; i < ids.length; i++) {
+                codes[i] = c.code(ids[i]);
+            }
+            return ReferenceData.category(names, inputs, m.response(), codes, c.labels().size(), ids);
+        }
+        return ReferenceData.numeric(names, inputs, m.response(), table.numeric(m.response()).copyValues(used), ids);
+    }
+
+    /** The rows whose group code is not {@code group}. */
+    static RowSet without(RowSet rows, CategoryColumn groups, int group) {
+        int[] kept = new int[rows.size()];
+        int n = 0;
+        for (int i = 0; i < rows.size(); i++) {
+            int r = rows.row(i);
+            if (groups.code(r) != group) {
+                kept[n++] = r;
+            }
+        }
+        return RowSet.of(Arrays.copyOf(kept, n));
+    }
+
+    void keepFlags(ModelSettings m, nearfit.knn.FlagResult f) {
+        synchronized (flags) {
+            flags.put(m, f);
+        }
+    }
+
+    /** The leave-one-out flags computed for these settings, or {@code null}. */
+    nearfit.knn.FlagResult flags(ModelSettings m) {
+        synchronized (flags) {
+            return flags.get(m);
+        }
+    }
+}

@@ -1,0 +1,197 @@
+package nearfit.tui;
+
+import java.util.Arrays;
+import java.util.List;
+
+import nearfit.knn.ReferenceData;
+import nearfit.plot.Scene;
+import nearfit.table.CategoryColumn;
+import nearfit.table.Column;
+import nearfit.table.RowSet;
+import nearfit.table.Table;
+
+/**
+ * Turns the explorer's {@link PlotScene} into the plot package's {@link Scene}: the points of the used rows
+ * (or their leave-one-out residuals), the curve, the band, the flag marks and the crosshair. The point
+ * arrays of the latest scene are kept, so moving the crosshair or changing k does not copy columns again.
+ */
+final class ScenePoints {
+    /** Half-width of the "near the held values" window, as a quantile step (5 % either side). */
+    static final double NEAR = 0.05;
+
+    private final Table table;
+    private final References references;
+    private Object pointsKey;
+    private Points points;
+
+    /** Row ids and their coordinates and codes on the plot. Arrays never change once built. */
+    private record Points(int[] rows, double[] x, double[] y, int[] codes) {
+    }
+
+    ScenePoints(Table table, References references) {
+        this.table = table;
+        this.references = references;
+    }
+
+    synchronized Scene scene(PlotScene s) {
+        Points p = points(s);
+        boolean residuals = s.mode() != PlotMode.RESPONSE;
+        String xName = s.mode() == PlotMode.RESIDUALS_OVER_TIME ? timeName() : s.request().displayInput();
+        String yName = residuals ? "residual of " + s.model().response() : s.model().response();
+        Scene.Builder b = Scene.builder(p.x(), p.y()).labels("", xName, yName);
+        if (s.mode() == PlotMode.RESIDUALS_OVER_TIME) {
+            b.timeAxis();
+        } else {
+            b.xRange(s.request().from(), s.request().to());
+        }
+        boolean category = table.column(s.model().response()) instanceof CategoryColumn;
+        if (category && !residuals) {
+            b.classes(p.codes());
+        } else if (s.request().groupColumn() != null && s.request().group() >= 0) {
+            b.highlight(p.codes(), s.request().group());
+        }
+        CurveResult c = s.curve();
+        if (c != null && !residuals) {
+            b.curve(c.x(), c.fit());
+            if (!allNaN(c.bandLow())) {
+                b.band(c.x(), c.bandLow(), c.bandHigh(), Scene.BandStyle.LINES);
+            }
+        }
+        if (s.flagMarks() && s.flags() != null && !s.flags().flagged().isEmpty()) {
+            marks(b, s, residuals);
+        }
+        if (s.mode() != PlotMode.RESIDUALS_OVER_TIME && !Double.isNaN(s.crosshairX())) {
+            b.crosshair(s.crosshairX());
+        }
+        return b.build();
+    }
+
+    private void marks(Scene.Builder b, PlotScene s, boolean residuals) {
+        List<FlaggedRow> f = s.flags().flagged();
+        int display = s.model().inputs().indexOf(s.request().displayInput());
+        double[] fx = new double[f.size()];
+        double[] fy = new double[f.size()];
+        Column time = s.mode() == PlotMode.RESIDUALS_OVER_TIME ? table.column(timeName()) : null;
+        for (int i = 0; i < fx.length; i++) {
+            FlaggedRow r = f.get(i);
+            fx[i] = time != null ? ((nearfit.table.TimeColumn) time).asDouble(r.row()) : r.inputs().get(display);
+            fy[i] = residuals ? r.residual() : r.response();
+        }
+        b.flags(fx, fy);
+    }
+
+    private String timeName() {
+        for (Column c : table.columns()) {
+            if (c.type() == nearfit.table.ColumnType.TIME) {
+                return c.name();
+            }
+        }
+        throw new IllegalStateException("no time column");
+    }
+
+    private Points points(PlotScene s) {
+        nearfit.knn.FlagResult flags = s.mode() == PlotMode.RESPONSE ? null : references.flags(s.model());
+        Object key = Arrays.asList(s.model().condition(), s.model().response(), s.model().inputs(),
+                s.request().displayInput(), s.mode(), s.request().groupColumn(), s.nearHeldOnly(),
+                s.nearHeldOnly() ? s.request().held() : null, flags);
+        if (!key.equals(pointsKey)) {
+            points = s.mode() == PlotMode.RESPONSE ? responsePoints(s) : residualPoints(s, flags);
+            pointsKey = key;
+        }
+        return points;
+    }
+
+    private Points responsePoints(PlotScene s) {
+        RowSet used = references.rows(s.model().condition());
+        int[] rows = s.nearHeldOnly() ? nearHeld(s, used) : used.toArray();
+        RowSet r = RowSet.of(rows);
+        double[] x = table.numeric(s.request().displayInput()).copyValues(r);
+        Column response = table.column(s.model().response());
+        double[] y;
+        int[] codes;
+        if (response instanceof CategoryColumn c) {
+            // A category response is drawn as 1 for the highlighted class and 0 for the others, under the
+            // class's vote share; the colour tells the class.
+            codes = codes(c, rows);
+            y = new double[rows.length];
+            for (int i = 0; i < rows.length; i++) {
+                y[i] = codes[i] == s.request().responseClass() ? 1 : codes[i] < 0 ? Double.NaN : 0;
+            }
+        } else {
+            y = table.numeric(s.model().response()).copyValues(r);
+            codes = groupCodes(s, rows);
+        }
+        return new Points(rows, x, y, codes);
+    }
+
+    private Points residualPoints(PlotScene s, nearfit.knn.FlagResult f) {
+        if (f == null) {
+            return new Points(new int[0], new double[0], new double[0], new int[0]);
+        }
+        int[] rows = f.rowIds();
+        double[] x;
+        if (s.mode() == PlotMode.RESIDUALS_OVER_TIME) {
+            // The flags' row ids are in the knn package's canonical order, not ascending, so no RowSet.
+            nearfit.table.NumericColumn time = table.numeric(timeName());
+            x = new double[rows.length];
+            for (int i = 0; i < rows.length; i++) {
+                x[i] = time.asDouble(rows[i]);
+            }
+        } else {
+            ReferenceData data = references.model(s.model(), null, -1).data();
+            x = data.input(s.model().inputs().indexOf(s.request().displayInput()));
+        }
+        return new Points(rows, x, f.residual(), groupCodes(s, rows));
+    }
+
+    private int[] groupCodes(PlotScene s, int[] rows) {
+        String g = s.request().groupColumn();
+        return g == null ? null : codes((CategoryColumn) table.column(g), rows);
+    }
+
+    private static int[] codes(CategoryColumn c, int[] rows) {
+        int[] out = new int[rows.length];
+        for (int i = 0; i < rows.length; i++) {
+            out[i] = c.code(rows[i]);
+        }
+        return out;
+    }
+
+    /** The rows whose every held input lies within {@link #NEAR} quantile steps of its held value. */
+    private int[] nearHeld(PlotScene s, RowSet used) {
+        int[] kept = new int[used.size()];
+        int n = 0;
+        List<String> held = s.request().held().keySet().stream().sorted().toList();
+        double[] lo = new double[held.size()];
+        double[] hi = new double[held.size()];
+        nearfit.table.NumericColumn[] cols = new nearfit.table.NumericColumn[held.size()];
+        for (int j = 0; j < held.size(); j++) {
+            String name = held.get(j);
+            double q = s.heldQuantile().getOrDefault(name, 0.5);
+            lo[j] = references.quantile(name, s.model().condition(), Math.max(0, q - NEAR));
+            hi[j] = references.quantile(name, s.model().condition(), Math.min(1, q + NEAR));
+            cols[j] = table.numeric(name);
+        }
+        for (int i = 0; i < used.size(); i++) {
+            int r = used.row(i);
+            boolean near = true;
+            for (int j = 0; j < cols.length && near; j++) {
+                double v = cols[j].asDouble(r);
+                near = v >= lo[j] && v <= hi[j];
+            }
+            if (near) {
+                kept[n++] = r;
+            }
+        }
+        return Arrays.copyOf(kept, n);
+    }
+
+    private static boolean allNaN(double[] v) {
+        for (double d : v) {
+            if (!Double.isNaN(d)) {
+                return false;
+            }
+        }
+        return true;
+    }
+}

@@ -1,0 +1,171 @@
+package nearfit.tui;
+
+import java.util.Map;
+import java.util.TreeMap;
+
+/**
+ * Draws one frame from the state, the latest results and the table's facts. Everything numeric shown comes
+ * from the results; this class only lays text out.
+ */
+final class ScreenPainter {
+    private static final String KEYS = "? help  q quit  +/- k  t tuning  F flagged  f marks  x/y/i columns  "
+            + "g group  / condition  e export  arrows crosshair";
+
+    private ScreenPainter() {
+    }
+
+    static void paint(Pen pen, Layout layout, ViewState s, Results r, FrameInput in, Sketches sketches) {
+        pen.clear();
+        if (!layout.fits()) {
+            tooSmall(pen, layout);
+            return;
+        }
+        header(pen, layout, s, r, in);
+        if (in.request() != null) {
+            PlotScene scene = scene(s, r, in, pen.look());
+            PlotCells drawn = sketches.plot(scene, layout.width(), layout.plotHeight());
+            pen.cells(drawn.plot(), 0, layout.plotTop());
+            pen.cells(drawn.strip(), 0, layout.stripRow());
+        } else {
+            pen.text(2, layout.plotTop() + layout.plotHeight() / 2, "no rows to plot: change the row condition (/)",
+                    Ink.WARNING);
+        }
+        pen.text(0, layout.statusRow(), Figures.fit(status(s, r, in), layout.width(), pen.look().ascii()),
+                s.message().isEmpty() && r.failure().isEmpty() ? Ink.TEXT : Ink.WARNING);
+        pen.text(0, layout.keyRow(), Figures.fit(KEYS, layout.width(), pen.look().ascii()), Ink.LABEL);
+        Panels.paint(pen, layout, s, r, in, sketches);
+    }
+
+    /** The scene handed to the plot package. */
+    static PlotScene scene(ViewState s, Results r, FrameInput in, Look look) {
+        CurveRequest q = in.request();
+        double x = q.from() + s.crosshair() * (q.to() - q.from());
+        CurveResult curve = r.curve() != null && r.curve().size() == q.steps() ? r.curve() : null;
+        return new PlotScene(s.model(), q, curve, r.flags(), s.mode(), s.flagMarks(), x, s.heldQuantile(), s.nearHeldOnly(),
+                s.markedRow(), look.ascii());
+    }
+
+    private static void tooSmall(Pen pen, Layout layout) {
+        String[] lines = {
+            "nearfit needs a window of at least " + Layout.MIN_WIDTH + "x" + Layout.MIN_HEIGHT + ";",
+            "this one is " + layout.width() + "x" + layout.height() + ". Enlarge it, or press q to quit."
+        };
+        for (int i = 0; i < lines.length; i++) {
+            pen.text(0, layout.height() / 2 - 1 + i, lines[i], Ink.WARNING);
+        }
+    }
+
+    private static void header(Pen pen, Layout layout, ViewState s, Results r, FrameInput in) {
+        StringBuilder one = new StringBuilder("nearfit  ").append(in.source())
+                .append("  rows ").append(Figures.count(r.rowsUsed())).append(" of ").append(Figures.count(in.totalRows()));
+        if (!s.condition().isEmpty()) {
+            one.append("  where ").append(s.condition());
+        }
+        one.append("  |  ").append(tuningState(r));
+        if (!Double.isNaN(r.flagsProgress())) {
+            one.append("  |  flags ").append(Math.round(100 * r.flagsProgress())).append(" %");
+        }
+        if (!Double.isNaN(in.loading())) {
+            one.append("  loading ").append(Math.round(100 * in.loading())).append(" %");
+        }
+        pen.text(0, 0, Figures.fit(one.toString(), layout.width(), pen.look().ascii()), Ink.TITLE);
+        pen.text(0, 1, Figures.fit(model(s, r, in), layout.width(), pen.look().ascii()), Ink.TEXT);
+    }
+
+    static String tuningState(Results r) {
+        if (!Double.isNaN(r.tuningProgress())) {
+            return "tuning " + Math.round(100 * r.tuningProgress()) + " %";
+        }
+        if (r.tuning() != null) {
+            return "best k " + r.tuning().bestK() + ", one-SE k " + r.tuning().oneSeK();
+        }
+        return "tuning not run";
+    }
+
+    /** The model line: what is fitted and where it is held first, then the estimator's settings. */
+    private static String model(ViewState s, Results r, FrameInput in) {
+        StringBuilder sb = new StringBuilder();
+        sb.append(s.response()).append(" ~ ").append(String.join(" + ", s.inputs()));
+        if (!in.classLabels().isEmpty()) {
+            sb.append("  share of ").append(label(in.classLabels(), s.responseClass()));
+        }
+        sb.append("  k=").append(s.k());
+        Map<String, Double> held = new TreeMap<>(in.heldValues());
+        for (Map.Entry<String, Double> e : held.entrySet()) {
+            boolean moving = e.getKey().equals(s.heldInput());
+            sb.append(moving ? "  [" : "  ").append(e.getKey()).append('=').append(Figures.value(e.getValue()))
+                    .append(" q").append(Math.round(100 * s.heldQuantile().getOrDefault(e.getKey(), 0.5)))
+                    .append(moving ? "]" : "");
+        }
+        if (s.nearHeldOnly()) {
+            sb.append("  near held only");
+        }
+        if (s.groupColumn() != null) {
+            sb.append("  group ").append(s.groupColumn()).append(' ')
+                    .append(s.group() < 0 ? "all" : label(in.groupLabels(), s.group()))
+                    .append(s.compare() ? " vs others" : "");
+        }
+        if (s.mode() != PlotMode.RESPONSE) {
+            sb.append(s.mode() == PlotMode.RESIDUALS ? "  residuals" : "  residuals over time");
+        }
+        sb.append("  ").append(s.metric().label()).append(", weights ").append(s.weighting().label())
+                .append(", scaling ").append(s.scaling().label()).append(", band ").append(s.band().label());
+        return sb.toString();
+    }
+
+    /** The leave-one-out RMSE at k: from the flags when the core gives it, else from the tuning table. */
+    static double looRmse(ViewState s, Results r) {
+        if (r.flags() != null && !Double.isNaN(r.flags().looRmse())) {
+            return r.flags().looRmse();
+        }
+        if (r.tuning() != null) {
+            int i = r.tuning().indexOf(s.k());
+            return i < 0 ? Double.NaN : r.tuning().rmse()[i];
+        }
+        return Double.NaN;
+    }
+
+    static String label(java.util.List<String> labels, int code) {
+        return code >= 0 && code < labels.size() ? labels.get(code) : "#" + code;
+    }
+
+    static String status(ViewState s, Results r, FrameInput in) {
+        if (!s.message().isEmpty()) {
+            return s.message();
+        }
+        if (!r.failure().isEmpty()) {
+            return r.failure();
+        }
+        StringBuilder sb = new StringBuilder();
+        CurveResult c = r.curve();
+        CurveRequest q = in.request();
+        if (c != null && q != null && c.size() > 0) {
+            double x = q.from() + s.crosshair() * (q.to() - q.from());
+            int i = c.nearest(x);
+            sb.append(s.displayInput()).append(' ').append(Figures.value(c.x()[i]))
+                    .append(": fit ").append(Figures.value(c.fit()[i]));
+            if (!Double.isNaN(c.bandLow()[i])) {
+                sb.append("  band ").append(Figures.value(c.bandLow()[i])).append(" to ")
+                        .append(Figures.value(c.bandHigh()[i]));
+            }
+            sb.append("  width ").append(Figures.value(c.width()[i])).append("  n ").append(c.neighbours()[i]);
+        } else {
+            sb.append("fitting ...");
+        }
+        sb.append("  |  LOO RMSE ").append(Figures.value(looRmse(s, r)));
+        FlagResult f = r.flags();
+        if (f != null && f.rows() == 0) {
+            sb.append("  |  no flags for a category response");
+        } else if (f != null) {
+            sb.append("  |  flagged ").append(Figures.count(f.flaggedCount())).append(" (")
+                    .append(Figures.percent(f.share())).append(')');
+            if (!Double.isNaN(r.flagsProgress())) {
+                sb.append(" updating ").append(Math.round(100 * r.flagsProgress())).append(" %");
+            }
+        } else {
+            sb.append("  |  leave-one-out ").append(Double.isNaN(r.flagsProgress()) ? "waiting"
+                    : Math.round(100 * r.flagsProgress()) + " %");
+        }
+        return sb.toString();
+    }
+}

@@ -1,0 +1,133 @@
+package nearfit.tui;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.awt.image.BufferedImage;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+
+import javax.imageio.ImageIO;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import com.googlecode.lanterna.input.KeyType;
+
+import nearfit.plot.Palette;
+import nearfit.plot.Role;
+import nearfit.table.CsvLoader;
+import nearfit.table.LoadOptions;
+
+/** The explorer on the real core packages: a small generated log, keys on the virtual terminal, real files. */
+class CoreExplorerTest {
+    private static Workbench load(Path dir) throws Exception {
+        Path csv = dir.resolve("small-site.csv");
+        Files.writeString(csv, TmuxViewTest.smallLog(), StandardCharsets.UTF_8);
+        return CoreWorkbench.of(CsvLoader.load(csv, csv.toString(), LoadOptions.DEFAULT), csv.toString());
+    }
+
+    private static VirtualScreen open(Workbench wb) throws Exception {
+        return new VirtualScreen(wb, ViewState.initial("power_kw", List.of("wind_ms"), 20), 120, 40,
+                new Look(false, true));
+    }
+
+    @Test
+    void pngExportHasTheAskedSizeAndCurvePixels(@TempDir Path dir) throws Exception {
+        Workbench wb = load(dir);
+        Path png = dir.resolve("view.png");
+        try (VirtualScreen v = open(wb)) {
+            v.type("e3");
+            // Clear the offered name, then type the file and its size.
+            for (int i = 0; i < ExportKind.PNG.defaultFile().length(); i++) {
+                v.key(KeyType.Backspace);
+            }
+            v.type(png + " 640x400").key(KeyType.Enter);
+            assertTrue(v.row(38).contains("wrote"), v.row(38));
+        }
+        BufferedImage img = ImageIO.read(png.toFile());
+        assertEquals(640, img.getWidth());
+        assertEquals(400, img.getHeight());
+        int curve = Palette.paper().rgb(Role.CURVE) & 0xffffff;
+        int count = 0;
+        for (int y = 0; y < img.getHeight(); y++) {
+            for (int x = 0; x < img.getWidth(); x++) {
+                if ((img.getRGB(x, y) & 0xffffff) == curve) {
+                    count++;
+                }
+            }
+        }
+        assertTrue(count > 100, "curve pixels in the picture: " + count);
+    }
+
+    @Test
+    void anExistingFileIsReplacedOnlyAfterYes(@TempDir Path dir) throws Exception {
+        Workbench wb = load(dir);
+        Path out = dir.resolve("curve.csv");
+        Files.writeString(out, "keep me\n");
+        try (VirtualScreen v = open(wb)) {
+            v.type("e1");
+            for (int i = 0; i < ExportKind.CURVE_CSV.defaultFile().length(); i++) {
+                v.key(KeyType.Backspace);
+            }
+            v.type(out.toString()).key(KeyType.Enter);
+            assertTrue(v.text().contains("exists. Replace it?"), v.text());
+            v.type("n");
+            assertEquals("keep me\n", Files.readString(out));
+            v.type("e1");
+            for (int i = 0; i < ExportKind.CURVE_CSV.defaultFile().length(); i++) {
+                v.key(KeyType.Backspace);
+            }
+            v.type(out.toString()).key(KeyType.Enter).type("y");
+        }
+        List<String> lines = Files.readAllLines(out);
+        assertEquals("wind_ms,fit,band_low,band_high,window_width,neighbours", lines.get(0));
+        assertEquals(121, lines.size(), "one line per curve point, one per terminal column");
+    }
+
+    @Test
+    void flaggedRowsCarryTheirSourceLinesAndThePlantedOutliersComeFirst(@TempDir Path dir) throws Exception {
+        Workbench wb = load(dir);
+        try (VirtualScreen v = open(wb)) {
+            FlagResult f = v.explorer.results().flags();
+            assertTrue(f.flaggedCount() >= 2, "flags: " + f.flaggedCount());
+            // Rows 100 and 900 of smallLog() have power 5 kW where the curve is far higher; the header is line 1,
+            // so data row r sits on line r + 2.
+            List<Long> top = List.of(f.flagged().get(0).line(), f.flagged().get(1).line());
+            assertTrue(top.contains(102L) && top.contains(902L), "largest |z| lines: " + top);
+            v.type("F");
+            assertTrue(v.text().contains("flagged rows:"), v.text());
+        }
+    }
+
+    @Test
+    void aCategoryResponseDrawsTheVoteShareOfTheHighlightedClass(@TempDir Path dir) throws Exception {
+        Workbench wb = load(dir);
+        try (VirtualScreen v = new VirtualScreen(wb, ViewState.initial("turbine", List.of("wind_ms"), 20), 120, 40,
+                new Look(false, true))) {
+            CurveResult c = v.explorer.results().curve();
+            for (double share : c.fit()) {
+                assertTrue(share >= 0 && share <= 1, "a vote share: " + share);
+            }
+            assertTrue(v.row(1).contains("share of T01"), v.row(1));
+            v.type("n");
+            assertTrue(v.row(1).contains("share of T02"), v.row(1));
+        }
+    }
+
+    @Test
+    void residualsOverTimeUseTheTimeAxisAndGroupsCompareWithTheOthers(@TempDir Path dir) throws Exception {
+        Workbench wb = load(dir);
+        try (VirtualScreen v = open(wb)) {
+            v.type("T");
+            assertTrue(v.text().contains("residual of power_kw"), v.text());
+            assertTrue(v.text().contains("2026-03"), "time ticks on the axis: " + v.text());
+            v.type("T").type("g").key(KeyType.ArrowDown).key(KeyType.Enter).type("n").type("o");
+            assertTrue(v.row(1).contains("group turbine T01 vs others"), v.row(1));
+            assertTrue(v.explorer.results().failure().isEmpty(), v.explorer.results().failure());
+            assertEquals(120, v.explorer.results().curve().size());
+        }
+    }
+}

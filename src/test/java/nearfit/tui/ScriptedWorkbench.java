@@ -1,0 +1,145 @@
+package nearfit.tui;
+
+import java.io.IOException;
+import java.io.OutputStream;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.atomic.AtomicInteger;
+
+import nearfit.table.NearfitException;
+
+/**
+ * A test double of the core: fixed columns and answers that encode the settings they were asked for, so a
+ * screen test can see which request a frame shows (the fit is 100 + k, the window width is k / 1000).
+ * It computes nothing statistical; the real core is tested in its own packages.
+ */
+class ScriptedWorkbench implements Workbench {
+    final AtomicInteger curveCalls = new AtomicInteger();
+    final AtomicInteger tuneCalls = new AtomicInteger();
+    /** When set, a curve for this k waits for {@link #release} before answering. */
+    volatile int holdCurveForK = -1;
+    final CountDownLatch release = new CountDownLatch(1);
+
+    @Override
+    public String source() {
+        return "site-test.csv";
+    }
+
+    @Override
+    public long totalRows() {
+        return 1000;
+    }
+
+    @Override
+    public List<ColumnInfo> columns() {
+        return List.of(new ColumnInfo("time", ColumnKind.TIME, 0), new ColumnInfo("turbine", ColumnKind.CATEGORY, 0),
+                new ColumnInfo("wind_ms", ColumnKind.NUMBER, 0), new ColumnInfo("air_temp_c", ColumnKind.NUMBER, 0),
+                new ColumnInfo("power_kw", ColumnKind.NUMBER, 0));
+    }
+
+    @Override
+    public String timeColumn() {
+        return "time";
+    }
+
+    @Override
+    public int rowsUsed(String condition) {
+        if (condition.isEmpty()) {
+            return 1000;
+        }
+        if (condition.contains("nonsense")) {
+            throw new NearfitException("row condition: \"nonsense\" is not column op value");
+        }
+        return 400;
+    }
+
+    @Override
+    public double quantile(String column, String condition, double q) {
+        return column.equals("wind_ms") ? 25 * q : 10 + 20 * q;
+    }
+
+    @Override
+    public List<String> labels(String column) {
+        return List.of("T01", "T02", "T03");
+    }
+
+    @Override
+    public CurveResult curve(ModelSettings model, CurveRequest request, JobControl control) {
+        curveCalls.incrementAndGet();
+        if (model.k() == holdCurveForK) {
+            try {
+                release.await(10, TimeUnit.SECONDS);
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+            }
+        }
+        int n = request.steps();
+        double[] x = new double[n];
+        double[] fit = new double[n];
+        double[] lo = new double[n];
+        double[] hi = new double[n];
+        double[] w = new double[n];
+        int[] nb = new int[n];
+        for (int i = 0; i < n; i++) {
+            x[i] = request.at(i);
+            fit[i] = 100 + model.k();
+            lo[i] = fit[i] - 10;
+            hi[i] = fit[i] + 10;
+            w[i] = model.k() / 1000.0;
+            nb[i] = model.k();
+        }
+        return new CurveResult(x, fit, lo, hi, w, nb);
+    }
+
+    @Override
+    public TuningResult tune(ModelSettings model, JobControl control) {
+        tuneCalls.incrementAndGet();
+        control.progress(0.5);
+        return new TuningResult(new int[] {1, 2, 3, 5, 7, 10, 15, 20, 30, 50}, new double[] {9, 8, 7, 6, 5, 4.5, 4,
+            4.2, 4.4, 5}, new double[] {0.5, 0.5, 0.5, 0.5, 0.5, 0.5, 0.5, 0.5, 0.5, 0.5}, 15, 30);
+    }
+
+    @Override
+    public FlagResult flags(ModelSettings model, String groupColumn, JobControl control) {
+        List<FlaggedRow> rows = new ArrayList<>();
+        rows.add(new FlaggedRow(41, 43, "2026-03-02T10:10:00Z", "T02", List.of(12.5), 300, 1900, -1600, -7.5));
+        rows.add(new FlaggedRow(7, 9, "2026-03-01T01:10:00Z", "T01", List.of(5.0), 900, 400, 500, 4.1));
+        return new FlagResult(1000, rows.size(), 85.25, 3.5, rows);
+    }
+
+    @Override
+    public PlotCells plot(PlotScene scene, int width, int height) {
+        Cells strip = scene.curve() == null ? new TextCells(width, 1, "", ' ')
+                : new TextCells(width, 1, "width " + scene.curve().width()[0], scene.ascii() ? '=' : '\u2581');
+        return new PlotCells(new TextCells(width, height, "plot " + scene.model().response() + " vs " + scene.request().displayInput()
+                + (scene.curve() == null ? " (no curve)" : " curve fit " + scene.curve().fit()[0]), '\u28ff'), strip);
+    }
+
+    @Override
+    public Cells tuningChart(TuningResult tuning, int currentK, int width, int height, boolean ascii) {
+        return new TextCells(width, height, "chart best " + tuning.bestK(), '.');
+    }
+
+    @Override
+    public void writePng(PlotScene scene, int width, int height, OutputStream out) throws IOException {
+        out.write(("PNG " + width + "x" + height).getBytes(java.nio.charset.StandardCharsets.US_ASCII));
+    }
+
+    /** Cells with a label on the first row and a fill character on the last. */
+    record TextCells(int width, int height, String label, char fill) implements Cells {
+        @Override
+        public int codePoint(int col, int row) {
+            if (row == 0 && col < label.length()) {
+                return label.charAt(col);
+            }
+            return row == height - 1 ? fill : ' ';
+        }
+
+        @Override
+        public Ink ink(int col, int row) {
+            return row == height - 1 ? Ink.POINTS_3 : Ink.LABEL;
+        }
+    }
+}
