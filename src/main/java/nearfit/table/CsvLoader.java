@@ -63,6 +63,13 @@ public final class CsvLoader {
             throw NearfitException.inFile(name, "is a directory, not a CSV file");
         }
         try {
+            if (!Files.isRegularFile(path) && Files.exists(path)) {
+                // A pipe such as <(zcat log.gz) has no size and can be read once: read it as a stream
+                // (FileInputStream, since the channel stream of Files.newInputStream seeks, which pipes refuse).
+                try (InputStream in = new java.io.FileInputStream(path.toFile())) {
+                    return loadStream(in, name, -1, t0);
+                }
+            }
             long size = Files.size(path);
             if (isGzip(path)) {
                 try (InputStream in = Files.newInputStream(path)) {
