@@ -136,4 +136,37 @@ class LoaderRobustnessTest {
         assertTrue(gone.get());
         assertEquals(1_500_000, t.rowCount());
     }
+
+    /** Makes a named pipe and feeds it {@code bytes} from another thread, as {@code <(zcat log.gz)} would. */
+    private Path pipeFeeding(byte[] bytes) throws Exception {
+        Path fifo = dir.resolve("pipe");
+        Process mk = new ProcessBuilder("mkfifo", fifo.toString()).start();
+        org.junit.jupiter.api.Assumptions.assumeTrue(mk.waitFor() == 0, "mkfifo is not available");
+        Thread feeder = new Thread(() -> {
+            try (java.io.OutputStream out = new java.io.FileOutputStream(fifo.toFile())) {
+                out.write(bytes);
+            } catch (IOException ex) {
+                // The reader went away; the assertions below say what it saw.
+            }
+        });
+        feeder.setDaemon(true);
+        feeder.start();
+        return fifo;
+    }
+
+    @Test
+    void aNamedPipeIsReadOnceAsAStreamNotTakenForAnEmptyFile() throws Exception {
+        // Before the fix: "pipe: empty file: no header and no rows", since a pipe's size is 0.
+        Path fifo = pipeFeeding("wind_ms,power_kw\n3,20\n5,90\n7,300\n".getBytes(StandardCharsets.UTF_8));
+        Table t = assertTimeoutPreemptively(HANG, () -> CsvLoader.load(fifo, "pipe", LoadOptions.DEFAULT));
+        assertEquals(3, t.rowCount());
+        assertEquals(300.0, ((NumberColumn) t.column("power_kw")).get(2), 0);
+    }
+
+    @Test
+    void aNamedPipeCarryingGzipIsInflated() throws Exception {
+        Path fifo = pipeFeeding(CsvFiles.gzip("wind_ms,power_kw\n3,20\n5,90\n".getBytes(StandardCharsets.UTF_8)));
+        Table t = assertTimeoutPreemptively(HANG, () -> CsvLoader.load(fifo, "pipe", LoadOptions.DEFAULT));
+        assertEquals(2, t.rowCount());
+    }
 }
