@@ -49,7 +49,7 @@ public final class ModelFile {
      * The manifest fields of a model (ModelArchive adds format, format_version and entries):
      * tool_version, created (ISO 8601 UTC), source {name, size, sha256}, row_condition, rows,
      * columns {inputs, response, response_labels, group, group_labels}, scaling {method, center,
-     * spread}, metric, weights, k, band, flags {threshold, residual_median, residual_scale,
+     * spread, whitening}, metric, weights, k, band, flags {threshold, residual_median, residual_scale,
      * residual_scale_kind}, tuning (the tune JSON object, or null).
      */
     static Map<String, Object> manifestOf(ReferenceModel model) {
@@ -75,6 +75,7 @@ public final class ModelFile {
         scaling.put("method", model.settings().scaling());
         scaling.put("center", model.scaleCenter());
         scaling.put("spread", model.scaleSpread());
+        scaling.put("whitening", model.whitening());
         m.put("scaling", scaling);
         m.put("metric", model.settings().metric());
         m.put("weights", model.settings().weights());
@@ -134,6 +135,8 @@ public final class ModelFile {
         checkCodes(rows, columns);
         return new ReferenceModel(ManifestFields.text(m, "tool_version"), created(m), source, columns, settings,
                 ManifestFields.doubles(scaling, "center"), ManifestFields.doubles(scaling, "spread"),
+                ManifestFields.required(scaling, "whitening") == null ? null
+                        : ManifestFields.doubles(scaling, "whitening"),
                 residual, tuning, rows);
     }
 

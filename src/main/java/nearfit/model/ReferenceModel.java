@@ -17,12 +17,15 @@ import java.time.Instant;
  * @param settings      metric, weights, scaling, k, band and flag threshold
  * @param scaleCenter   per input, the value subtracted before scaling (input units)
  * @param scaleSpread   per input, the divisor after centring (input units); 1 for no scaling
+ * @param whitening     for the Mahalanobis metric, the d×d row-major lower-triangular matrix applied
+ *                      to the scaled inputs; {@code null} for the other metrics
  * @param residualScale the reference's leave-one-out residual centre and scale for z
  * @param tuning        the tuning table when k was tuned, or {@code null}
  * @param rows          the reference rows
  */
 public record ReferenceModel(String toolVersion, Instant created, SourceInfo source, ModelColumns columns,
                              ModelSettings settings, double[] scaleCenter, double[] scaleSpread,
+                             double[] whitening,
                              ResidualScale residualScale, TuningSummary tuning, ReferenceRows rows) {
     /** Checks that the parts agree with each other. */
     public ReferenceModel {
@@ -30,6 +33,9 @@ public record ReferenceModel(String toolVersion, Instant created, SourceInfo sou
         if (rows.inputs().length != inputs || scaleCenter.length != inputs || scaleSpread.length != inputs) {
             throw new IllegalArgumentException("the model has " + inputs
                     + " inputs but the rows or the scaling disagree");
+        }
+        if (whitening != null && whitening.length != inputs * inputs) {
+            throw new IllegalArgumentException("the whitening matrix needs " + inputs * inputs + " values");
         }
         if (columns.categoryResponse() != (rows.responseCodes() != null)) {
             throw new IllegalArgumentException("the response kind of the columns and of the rows differ");

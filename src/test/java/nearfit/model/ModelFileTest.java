@@ -39,7 +39,7 @@ class ModelFileTest {
         return new ReferenceModel("0.1.0", Instant.parse("2026-03-01T10:15:30Z"),
                 new SourceInfo("site-log.csv.gz", 1234, "ab".repeat(32), "turbine != T03"), columns,
                 new ModelSettings("manhattan", "tricube", "robust", 2, "sd2", 3.0),
-                new double[] {7.0, 10.5}, new double[] {2.0, 1.25},
+                new double[] {7.0, 10.5}, new double[] {2.0, 1.25}, new double[] {1, 0, 0.5, 2},
                 new ReferenceModel.ResidualScale(-0.5, 42.0), tuning, rows);
     }
 
@@ -59,6 +59,7 @@ class ModelFileTest {
         assertEquals(m.created(), back.created());
         assertEquals(m.residualScale(), back.residualScale());
         assertArrayEquals(m.scaleSpread(), back.scaleSpread());
+        assertArrayEquals(m.whitening(), back.whitening());
         assertArrayEquals(m.rows().inputs()[1], back.rows().inputs()[1]);
         assertArrayEquals(m.rows().response(), back.rows().response());
         assertArrayEquals(m.rows().groupCodes(), back.rows().groupCodes());
@@ -71,11 +72,12 @@ class ModelFileTest {
         ReferenceModel m = sample(false);
         ReferenceModel plain = new ReferenceModel(m.toolVersion(), m.created(),
                 new SourceInfo("-", -1, null, null), m.columns(), m.settings(), m.scaleCenter(),
-                m.scaleSpread(), m.residualScale(), null, m.rows());
+                m.scaleSpread(), null, m.residualScale(), null, m.rows());
         ReferenceModel back = ModelFile.read(saved(plain));
         assertNull(back.columns().group());
         assertNull(back.rows().groupCodes());
         assertNull(back.tuning());
+        assertNull(back.whitening());
         assertNull(back.source().sha256());
         assertEquals(-1, back.source().sizeBytes());
     }
