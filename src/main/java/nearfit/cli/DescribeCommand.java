@@ -1,15 +1,186 @@
 package nearfit.cli;
 
+import java.io.PrintWriter;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
 import java.util.concurrent.Callable;
 
-import nearfit.table.NearfitException;
+import nearfit.model.Json;
+import nearfit.table.BadCell;
+import nearfit.table.Column;
+import nearfit.table.ColumnSummary;
+import nearfit.table.ColumnType;
+import nearfit.table.CsvLoader;
+import nearfit.table.LoadOptions;
+import nearfit.table.LoadProgress;
+import nearfit.table.LoadReport;
+import nearfit.table.Table;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
 
-/** Placeholder until the command lands; fails with a clear message rather than pretending. */
-@Command(name = "describe", mixinStandardHelpOptions = true, description = "Not built yet.")
+/** {@code nearfit describe FILE}: what a file holds, column by column, and what loading it found. */
+@Command(name = "describe", mixinStandardHelpOptions = true,
+        description = "Summarise each column of a CSV file (plain, gzip or - for standard input) and report "
+                + "ragged rows and bad cells.")
 final class DescribeCommand implements Callable<Integer> {
+    /** Output formats. */
+    enum Format { TABLE, JSON }
+
+    @Parameters(index = "0", paramLabel = "FILE", description = "The CSV file, plain or gzip; - for standard input.")
+    String file;
+
+    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "table",
+            description = "table (default) or json.")
+    Format format;
+
+    @Option(names = "--quiet", description = "No progress on standard error.")
+    boolean quiet;
+
+    @Spec
+    CommandSpec spec;
+
     @Override
     public Integer call() {
-        throw new NearfitException("the describe command is not built yet");
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        boolean progress = !quiet && System.console() != null;
+        LoadOptions options = LoadOptions.builder().progress(progress ? progressTo(err) : LoadProgress.NONE).build();
+        Table table = CsvLoader.load(file, options);
+        if (progress) {
+            err.print("\r\033[K");
+            err.flush();
+        }
+        List<ColumnSummary> summaries = new ArrayList<>();
+        for (Column c : table.columns()) {
+            summaries.add(ColumnSummary.of(c));
+        }
+        out.print(format == Format.JSON ? json(table.report(), summaries) + "\n" : text(table.report(), summaries));
+        out.flush();
+        return 0;
+    }
+
+    private static LoadProgress progressTo(PrintWriter err) {
+        return (bytes, total, rows) -> {
+            synchronized (err) {
+                err.printf(Locale.ROOT, "\rloading: %,d rows, %.0f MB%s", rows, bytes / 1e6,
+                        total > 0 ? String.format(Locale.ROOT, " of %.0f MB", total / 1e6) : "");
+                err.flush();
+            }
+        };
+    }
+
+    /** The one JSON object of {@code --format json}; times in epoch milliseconds, absent values null. */
+    static String json(LoadReport report, List<ColumnSummary> summaries) {
+        Json.Writer w = new Json.Writer().beginObject();
+        w.key("rows").value(report.rows()).key("ragged_rows").value(report.raggedRows()).key("columns").beginArray();
+        for (ColumnSummary s : summaries) {
+            w.beginObject().key("name").value(s.name()).key("type").value(s.type().label())
+                    .key("count").value(s.count()).key("missing").value(s.missing()).key("bad").value(s.bad())
+                    .key("min").value(s.min()).key("max").value(s.max()).key("mean").value(s.mean())
+                    .key("sd").value(s.sd()).key("median").value(s.median()).endObject();
+        }
+        return w.endArray().endObject().toString();
+    }
+
+    private static final String[] HEAD = {"column", "type", "count", "missing", "bad", "min", "p01", "p25",
+        "median", "p75", "p99", "max", "mean", "sd"};
+
+    /** The human-readable report: one row per column, aligned, then the load report. */
+    static String text(LoadReport r, List<ColumnSummary> summaries) {
+        List<String[]> rows = new ArrayList<>();
+        rows.add(HEAD);
+        List<String> categories = new ArrayList<>();
+        for (ColumnSummary s : summaries) {
+            rows.add(cells(s));
+            if (s.type() == ColumnType.CATEGORY) {
+                StringBuilder sb = new StringBuilder("  " + s.name() + ": " + s.distinct() + " distinct; most frequent");
+                for (ColumnSummary.LabelCount lc : s.top()) {
+                    sb.append(' ').append(lc.label()).append(" (").append(lc.count()).append(')');
+                }
+                categories.add(sb.toString());
+            }
+        }
+        StringBuilder out = new StringBuilder();
+        out.append(String.format(Locale.ROOT, "%s: %d rows, %d columns, delimiter %s, %s%s%n", r.source(), r.rows(),
+                summaries.size(), delimiterName(r.delimiter()), r.headerPresent() ? "header row" : "no header row",
+                r.decimalComma() ? ", decimal comma" : ""));
+        out.append(align(rows));
+        for (String c : categories) {
+            out.append(c).append('\n');
+        }
+        appendReport(out, r);
+        return out.toString();
+    }
+
+    private static void appendReport(StringBuilder out, LoadReport r) {
+        out.append(String.format(Locale.ROOT, "ragged rows: %d (%d short, padded with missing; %d long, extra fields dropped)%n",
+                r.raggedRows(), r.shortRows(), r.longRows()));
+        for (BadCell c : r.raggedExamples()) {
+            out.append(String.format(Locale.ROOT, "  line %d: %s%n", c.line(), c.text()));
+        }
+        out.append(String.format(Locale.ROOT, "bad cells: %d (read as missing)%n", r.badCells()));
+        for (BadCell c : r.badExamples()) {
+            out.append(String.format(Locale.ROOT, "  line %d, column %s: \"%s\"%n", c.line(), c.column(), c.text()));
+        }
+        out.append(String.format(Locale.ROOT, "loaded %.1f MB in %.2f s (%.0f MB/s)%n", r.bytes() / 1e6, r.seconds(),
+                r.megabytesPerSecond()));
+    }
+
+    private static String[] cells(ColumnSummary s) {
+        double[] v = {s.min(), s.p01(), s.p25(), s.median(), s.p75(), s.p99(), s.max(), s.mean()};
+        String[] out = new String[HEAD.length];
+        out[0] = s.name();
+        out[1] = s.type().label();
+        out[2] = Long.toString(s.count());
+        out[3] = Long.toString(s.missing());
+        out[4] = Long.toString(s.bad());
+        for (int i = 0; i < v.length; i++) {
+            out[5 + i] = s.type() == ColumnType.TIME ? time(v[i]) : number(v[i]);
+        }
+        out[13] = s.type() == ColumnType.TIME && !Double.isNaN(s.sd())
+                ? number(s.sd() / 3_600_000.0) + " h" : number(s.sd());
+        return out;
+    }
+
+    private static String number(double d) {
+        return Double.isNaN(d) ? "-" : String.format(Locale.ROOT, "%.6g", d).replaceAll("\\.?0+(e|$)", "$1");
+    }
+
+    private static String time(double ms) {
+        return Double.isNaN(ms) ? "-" : Instant.ofEpochMilli(Math.round(ms)).toString();
+    }
+
+    private static String delimiterName(char d) {
+        return switch (d) {
+            case ',' -> "comma";
+            case ';' -> "semicolon";
+            case '\t' -> "tab";
+            case '|' -> "bar";
+            default -> "'" + d + "'";
+        };
+    }
+
+    private static String align(List<String[]> rows) {
+        int[] width = new int[HEAD.length];
+        for (String[] r : rows) {
+            for (int i = 0; i < r.length; i++) {
+                width[i] = Math.max(width[i], r[i].length());
+            }
+        }
+        StringBuilder sb = new StringBuilder();
+        for (String[] r : rows) {
+            for (int i = 0; i < r.length; i++) {
+                // Names and types to the left, numbers to the right.
+                String cell = i < 2 ? String.format("%-" + width[i] + "s", r[i]) : String.format("%" + width[i] + "s", r[i]);
+                sb.append(i == 0 ? "" : "  ").append(cell);
+            }
+            sb.append('\n');
+        }
+        return sb.toString().replaceAll(" +\n", "\n");
     }
 }

@@ -8,7 +8,7 @@ package nearfit.table;
  * {@code site-log.csv:1043: column power_kw: "12,5,3" is not a number}. Faces print
  * {@link #getMessage()} on one line and exit with status 2; stack traces only with {@code --debug}.
  */
-public final class NearfitException extends RuntimeException {
+public class NearfitException extends RuntimeException {
     private static final long serialVersionUID = 1L;
 
     /** Marks an unknown line number. */

@@ -1,0 +1,77 @@
+package nearfit.knn;
+
+import java.util.Arrays;
+import nearfit.table.NearfitException;
+
+/**
+ * Leave-one-out flags: every reference row's fit with itself left out, its residual e and a
+ * z-score. {@link FlagScale#GLOBAL_MAD} is the modified z-score of Iglewicz &amp; Hoaglin (1993),
+ * {@code (e - median(e)) / (1.4826 MAD(e))} (their 0.6745 is 1/1.4826); the local scales divide e
+ * by the neighbours' weighted SD or 1.4826 times their weighted MAD. A zero scale gives z = 0 for a
+ * zero residual and an infinite z otherwise (flagged), never NaN.
+ */
+public final class Flags {
+    private Flags() {
+    }
+
+    /** Flags with the model's k, weighting, threshold and flag scale, in parallel. */
+    public static FlagResult leaveOneOut(KnnModel model, Progress progress) {
+        ReferenceData data = model.data();
+        if (data.isCategory()) {
+            throw new NearfitException("flags need a numeric response; " + data.responseName() + " is a category");
+        }
+        int n = data.size();
+        KnnSettings s = model.settings();
+        int k = s.k();
+        if (k > n - 1) {
+            throw new NearfitException("k = " + k + " leaves too few rows for leave-one-out: choose k <= " + (n - 1));
+        }
+        int d = data.dimensions();
+        double[] y = data.response();
+        double[] fit = new double[n];
+        double[] res = new double[n];
+        double[] local = new double[n];
+        FlagScale scale = s.flagScale();
+        Workers.run(n, s.threads(), model::searcher, (sr, c, from, to) -> {
+            double[] q = new double[d];
+            for (int i = from; i < to; i++) {
+                System.arraycopy(model.coords(), i * d, q, 0, d);
+                sr.find(q, k, i);
+                LocalEstimator est = sr.estimator();
+                est.load(sr.list(), y);
+                est.prepare(s.weighting(), k);
+                fit[i] = est.fit(k);
+                res[i] = y[i] - fit[i];
+                if (scale == FlagScale.LOCAL_SD) {
+                    local[i] = est.sd(k, fit[i]);
+                } else if (scale == FlagScale.LOCAL_MAD) {
+                    local[i] = InputTransform.MAD_TO_SD * est.mad(k);
+                }
+            }
+        }, progress);
+        double[] sorted = res.clone();
+        Arrays.sort(sorted);
+        double median = Quantiles.sortedQuantile(sorted, n, 0.5);
+        for (int i = 0; i < n; i++) {
+            sorted[i] = Math.abs(res[i] - median);
+        }
+        Arrays.sort(sorted);
+        double mad = InputTransform.MAD_TO_SD * Quantiles.sortedQuantile(sorted, n, 0.5);
+        double[] z = new double[n];
+        boolean[] flagged = new boolean[n];
+        int count = 0;
+        for (int i = 0; i < n; i++) {
+            z[i] = scale == FlagScale.GLOBAL_MAD ? ratio(res[i] - median, mad) : ratio(res[i], local[i]);
+            flagged[i] = Math.abs(z[i]) > s.flagThreshold();
+            count += flagged[i] ? 1 : 0;
+        }
+        return new FlagResult(data.rowIds(), fit, res, z, flagged, count, median, mad, scale, s.flagThreshold());
+    }
+
+    private static double ratio(double e, double scale) {
+        if (scale > 0) {
+            return e / scale;
+        }
+        return e == 0 ? 0 : Math.copySign(Double.POSITIVE_INFINITY, e);
+    }
+}

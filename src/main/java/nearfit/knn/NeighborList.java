@@ -1,0 +1,234 @@
+package nearfit.knn;
+
+import java.util.Arrays;
+
+/**
+ * The neighbours of one query: reference positions and keys, ascending by (key, position), with
+ * every row tied with the k-th key included, so {@link #count()} can exceed k. Also the search's
+ * scratch space (a max-heap of the k best and a buffer of rows tied with the heap's top), reused
+ * from query to query: one list per thread, not thread-safe.
+ *
+ * <p>Keys are those of {@link Metric}: squared distances for Euclidean and Mahalanobis.
+ */
+public final class NeighborList {
+    private int k;
+    private int heapSize;
+    private double[] heapKey = new double[16];
+    private int[] heapPos = new int[16];
+    private int tieCount;
+    private double[] tieKey = new double[16];
+    private int[] tiePos = new int[16];
+
+    private int count;
+    private double[] keys = new double[16];
+    private int[] positions = new int[16];
+
+    /** Number of neighbours found, including every row tied with the k-th. */
+    public int count() {
+        return count;
+    }
+
+    /** The reference position (canonical order) of neighbour i. */
+    public int position(int i) {
+        return positions[i];
+    }
+
+    /** The key of neighbour i (squared distance for Euclidean and Mahalanobis). */
+    public double key(int i) {
+        return keys[i];
+    }
+
+    double[] keys() {
+        return keys;
+    }
+
+    int[] positions() {
+        return positions;
+    }
+
+    /** Starts a search for k neighbours. */
+    void reset(int newK) {
+        k = newK;
+        heapSize = 0;
+        tieCount = 0;
+        count = 0;
+        if (heapKey.length < newK) {
+            heapKey = new double[newK];
+            heapPos = new int[newK];
+        }
+    }
+
+    /** The key a candidate must not exceed to matter: the heap's top once k are held. */
+    double bound() {
+        return heapSize < k ? Double.POSITIVE_INFINITY : heapKey[0];
+    }
+
+    /** Offers a candidate; keeps the k best and every candidate tied with the k-th. */
+    void offer(double key, int pos) {
+        if (heapSize < k) {
+            push(key, pos);
+            return;
+        }
+        double top = heapKey[0];
+        if (key > top) {
+            return;
+        }
+        if (key == top) {
+            addTie(key, pos);
+            return;
+        }
+        int topPos = heapPos[0];
+        replaceTop(key, pos);
+        if (heapKey[0] == top) {
+            addTie(top, topPos);
+        } else {
+            tieCount = 0; // the buffered ties were at the old top, now beyond the k-th
+        }
+    }
+
+    private void push(double key, int pos) {
+        int i = heapSize++;
+        while (i > 0) {
+            int parent = (i - 1) >>> 1;
+            if (heapKey[parent] >= key) {
+                break;
+            }
+            heapKey[i] = heapKey[parent];
+            heapPos[i] = heapPos[parent];
+            i = parent;
+        }
+        heapKey[i] = key;
+        heapPos[i] = pos;
+    }
+
+    private void replaceTop(double key, int pos) {
+        int i = 0;
+        int n = heapSize;
+        while (true) {
+            int c = 2 * i + 1;
+            if (c >= n) {
+                break;
+            }
+            if (c + 1 < n && heapKey[c + 1] > heapKey[c]) {
+                c++;
+            }
+            if (heapKey[c] <= key) {
+                break;
+            }
+            heapKey[i] = heapKey[c];
+            heapPos[i] = heapPos[c];
+            i = c;
+        }
+        heapKey[i] = key;
+        heapPos[i] = pos;
+    }
+
+    private void addTie(double key, int pos) {
+        if (tieCount == tieKey.length) {
+            tieKey = Arrays.copyOf(tieKey, tieCount * 2);
+            tiePos = Arrays.copyOf(tiePos, tieCount * 2);
+        }
+        tieKey[tieCount] = key;
+        tiePos[tieCount++] = pos;
+    }
+
+    /** Ends the search: moves heap and ties to the output, sorted by (key, position). */
+    void finish() {
+        int n = heapSize + tieCount;
+        ensureOutput(n);
+        System.arraycopy(heapKey, 0, keys, 0, heapSize);
+        System.arraycopy(heapPos, 0, positions, 0, heapSize);
+        System.arraycopy(tieKey, 0, keys, heapSize, tieCount);
+        System.arraycopy(tiePos, 0, positions, heapSize, tieCount);
+        count = n;
+        sortByKeyThenPosition(keys, positions, 0, n);
+    }
+
+    /** Makes room for n outputs (for indexes that write the output directly). */
+    void ensureOutput(int n) {
+        if (keys.length < n) {
+            int len = Math.max(n, keys.length * 2);
+            keys = Arrays.copyOf(keys, len);
+            positions = Arrays.copyOf(positions, len);
+        }
+    }
+
+    /** Sets the output directly; the caller then calls {@link #sortOutput()}. */
+    void setOutput(int i, double key, int pos) {
+        keys[i] = key;
+        positions[i] = pos;
+    }
+
+    void setCount(int n) {
+        count = n;
+    }
+
+    void sortOutput() {
+        sortByKeyThenPosition(keys, positions, 0, count);
+    }
+
+    /** Quicksort with insertion sort below 24; pairs are distinct since positions are. */
+    static void sortByKeyThenPosition(double[] key, int[] pos, int from, int to) {
+        while (to - from > 24) {
+            int mid = (from + to) >>> 1;
+            int p = median3(key, pos, from, mid, to - 1);
+            double pk = key[p];
+            int pp = pos[p];
+            int i = from;
+            int j = to - 1;
+            while (i <= j) {
+                while (less(key[i], pos[i], pk, pp)) {
+                    i++;
+                }
+                while (less(pk, pp, key[j], pos[j])) {
+                    j--;
+                }
+                if (i <= j) {
+                    swap(key, pos, i++, j--);
+                }
+            }
+            if (j - from < to - i) {
+                sortByKeyThenPosition(key, pos, from, j + 1);
+                from = i;
+            } else {
+                sortByKeyThenPosition(key, pos, i, to);
+                to = j + 1;
+            }
+        }
+        for (int i = from + 1; i < to; i++) {
+            double k = key[i];
+            int p = pos[i];
+            int j = i - 1;
+            while (j >= from && less(k, p, key[j], pos[j])) {
+                key[j + 1] = key[j];
+                pos[j + 1] = pos[j];
+                j--;
+            }
+            key[j + 1] = k;
+            pos[j + 1] = p;
+        }
+    }
+
+    private static boolean less(double ka, int pa, double kb, int pb) {
+        return ka < kb || (ka == kb && pa < pb);
+    }
+
+    private static int median3(double[] key, int[] pos, int a, int b, int c) {
+        boolean ab = less(key[a], pos[a], key[b], pos[b]);
+        boolean bc = less(key[b], pos[b], key[c], pos[c]);
+        boolean ac = less(key[a], pos[a], key[c], pos[c]);
+        if (ab == bc) {
+            return b;
+        }
+        return ab == ac ? c : a;
+    }
+
+    private static void swap(double[] key, int[] pos, int i, int j) {
+        double k = key[i];
+        key[i] = key[j];
+        key[j] = k;
+        int p = pos[i];
+        pos[i] = pos[j];
+        pos[j] = p;
+    }
+}

@@ -1,0 +1,266 @@
+package nearfit.knn;
+
+import it.unimi.dsi.fastutil.doubles.DoubleArrays;
+import it.unimi.dsi.fastutil.ints.IntArrays;
+import it.unimi.dsi.fastutil.ints.IntComparator;
+import java.util.Arrays;
+import nearfit.table.NearfitException;
+
+/**
+ * The reference rows a model is fitted on: the kept rows' inputs, response and row ids, and how
+ * many rows were left out for a missing value.
+ *
+ * <p>A row is kept when every input and the response are present: not NaN for numbers, a code
+ * {@code >= 0} for a category. Kept rows are stored in a <em>canonical order</em> (ascending by
+ * input 0, then input 1, ..., then the response, then the row id), so every sum the engine takes runs in an order
+ * that does not depend on the order the rows arrived in: shuffling the rows changes no result,
+ * bit for bit. Arrays handed out are the stored ones; callers must not change them.
+ */
+public final class ReferenceData {
+    private final String[] inputNames;
+    private final String responseName;
+    private final double[][] inputs;
+    private final double[] response;
+    private final int[] classes;
+    private final int classCount;
+    private final int[] rowIds;
+    private final int[] droppedPerColumn;
+    private final int droppedRows;
+
+    private ReferenceData(String[] inputNames, String responseName, double[][] inputs, double[] response,
+                          int[] classes, int classCount, int[] rowIds, int[] droppedPerColumn, int droppedRows) {
+        this.inputNames = inputNames;
+        this.responseName = responseName;
+        this.inputs = inputs;
+        this.response = response;
+        this.classes = classes;
+        this.classCount = classCount;
+        this.rowIds = rowIds;
+        this.droppedPerColumn = droppedPerColumn;
+        this.droppedRows = droppedRows;
+    }
+
+    /**
+     * Reference rows with a numeric response.
+     *
+     * @param inputNames   one name per input, for messages
+     * @param inputs       one column per input, all of one length n (times as epoch ms)
+     * @param responseName the response's name
+     * @param response     the response column, length n
+     * @param rowIds       the table's row index of each row, or {@code null} for 0..n-1
+     */
+    public static ReferenceData numeric(String[] inputNames, double[][] inputs, String responseName,
+                                        double[] response, int[] rowIds) {
+        int n = checkShape(inputNames, inputs, response.length, rowIds);
+        return build(inputNames, inputs, responseName, response, null, 0, rowIds, n);
+    }
+
+    /**
+     * Reference rows with a category response: codes {@code 0 .. classCount-1}, a negative code
+     * for a missing value.
+     */
+    public static ReferenceData category(String[] inputNames, double[][] inputs, String responseName,
+                                         int[] codes, int classCount, int[] rowIds) {
+        int n = checkShape(inputNames, inputs, codes.length, rowIds);
+        if (classCount < 1) {
+            throw NearfitException.inColumn(responseName, "a category response needs at least one class");
+        }
+        for (int c : codes) {
+            if (c >= classCount) {
+                throw NearfitException.inColumn(responseName, "category code " + c + " is not below the class count " + classCount);
+            }
+        }
+        return build(inputNames, inputs, responseName, null, codes, classCount, rowIds, n);
+    }
+
+    private static int checkShape(String[] names, double[][] inputs, int n, int[] rowIds) {
+        if (inputs.length == 0 || names.length != inputs.length) {
+            throw new NearfitException("a model needs at least one input and a name for each");
+        }
+        for (int j = 0; j < inputs.length; j++) {
+            if (inputs[j].length != n) {
+                throw NearfitException.inColumn(names[j], "has " + inputs[j].length + " values, the response " + n);
+            }
+        }
+        if (rowIds != null && rowIds.length != n) {
+            throw new NearfitException("row ids: " + rowIds.length + " for " + n + " rows");
+        }
+        return n;
+    }
+
+    private static ReferenceData build(String[] names, double[][] in, String responseName, double[] y,
+                                       int[] codes, int classCount, int[] rowIds, int n) {
+        int d = in.length;
+        int[] dropped = new int[d + 1];
+        int[] kept = new int[n];
+        int m = 0;
+        for (int i = 0; i < n; i++) {
+            boolean ok = true;
+            for (int j = 0; j < d; j++) {
+                if (Double.isNaN(in[j][i])) {
+                    dropped[j]++;
+                    ok = false;
+                }
+            }
+            if (y != null ? Double.isNaN(y[i]) : codes[i] < 0) {
+                dropped[d]++;
+                ok = false;
+            }
+            if (ok) {
+                kept[m++] = i;
+            }
+        }
+        kept = Arrays.copyOf(kept, m);
+        canonicalOrder(kept, in, y, codes, rowIds);
+        double[][] keptIn = new double[d][m];
+        for (int j = 0; j < d; j++) {
+            double[] src = in[j];
+            double[] dst = keptIn[j];
+            for (int i = 0; i < m; i++) {
+                dst[i] = src[kept[i]];
+            }
+        }
+        double[] keptY = y == null ? null : new double[m];
+        int[] keptC = codes == null ? null : new int[m];
+        int[] ids = new int[m];
+        for (int i = 0; i < m; i++) {
+            int r = kept[i];
+            if (keptY != null) {
+                keptY[i] = y[r];
+            } else {
+                keptC[i] = codes[r];
+            }
+            ids[i] = rowIds == null ? r : rowIds[r];
+        }
+        return new ReferenceData(names.clone(), responseName, keptIn, keptY, keptC, classCount, ids, dropped, n - m);
+    }
+
+    /**
+     * Sorts the kept row indexes lexicographically by input 0, ..., input d-1, response, row id:
+     * one radix pass on input 0, then a comparison sort inside each run of equal input-0 values
+     * (runs are short for measured data, long for coarse data; both stay O(n log n)).
+     */
+    private static void canonicalOrder(int[] kept, double[][] in, double[] y, int[] codes, int[] rowIds) {
+        int m = kept.length;
+        int[] perm = new int[m];
+        double[] key = new double[m];
+        double[] x0 = in[0];
+        for (int i = 0; i < m; i++) {
+            key[i] = x0[kept[i]] + 0.0; // +0.0 turns -0.0 into 0.0: equal values sort as equal
+            perm[i] = i;
+        }
+        DoubleArrays.radixSortIndirect(perm, key, false);
+        int[] order = new int[m];
+        for (int i = 0; i < m; i++) {
+            order[i] = kept[perm[i]];
+        }
+        IntComparator rest = (a, b) -> {
+            for (int j = 1; j < in.length; j++) {
+                int c = Double.compare(in[j][a] + 0.0, in[j][b] + 0.0);
+                if (c != 0) {
+                    return c;
+                }
+            }
+            int c = y != null ? Double.compare(y[a] + 0.0, y[b] + 0.0) : Integer.compare(codes[a], codes[b]);
+            if (c != 0) {
+                return c;
+            }
+            return rowIds == null ? Integer.compare(a, b) : Integer.compare(rowIds[a], rowIds[b]);
+        };
+        int from = 0;
+        for (int i = 1; i <= m; i++) {
+            if (i == m || x0[order[i]] + 0.0 != x0[order[from]] + 0.0) {
+                if (i - from > 1) {
+                    IntArrays.quickSort(order, from, i, rest);
+                }
+                from = i;
+            }
+        }
+        System.arraycopy(order, 0, kept, 0, m);
+    }
+
+    /** Number of kept rows. */
+    public int size() {
+        return rowIds.length;
+    }
+
+    /** Number of inputs. */
+    public int dimensions() {
+        return inputs.length;
+    }
+
+    /** The input names. */
+    public String[] inputNames() {
+        return inputNames.clone();
+    }
+
+    /** The response's name. */
+    public String responseName() {
+        return responseName;
+    }
+
+    /** The kept values of input j, in canonical order. */
+    public double[] input(int j) {
+        return inputs[j];
+    }
+
+    /** The kept numeric responses, or {@code null} for a category response. */
+    public double[] response() {
+        return response;
+    }
+
+    /** Whether the response is a category. */
+    public boolean isCategory() {
+        return classes != null;
+    }
+
+    /** The kept category codes, or {@code null} for a numeric response. */
+    public int[] classes() {
+        return classes;
+    }
+
+    /** The number of classes of a category response, 0 for a numeric one. */
+    public int classCount() {
+        return classCount;
+    }
+
+    /** The table row index of each kept row, in canonical order. */
+    public int[] rowIds() {
+        return rowIds;
+    }
+
+    /** Rows left out for a missing value in each input (0..d-1) and in the response (index d). */
+    public int[] droppedPerColumn() {
+        return droppedPerColumn.clone();
+    }
+
+    /** Rows left out for any missing value (a row missing two values counts once). */
+    public int droppedRows() {
+        return droppedRows;
+    }
+
+    /** The subset at the given canonical positions (ascending), keeping names. */
+    ReferenceData subset(int[] positions) {
+        int d = inputs.length;
+        int m = positions.length;
+        double[][] in = new double[d][m];
+        for (int j = 0; j < d; j++) {
+            for (int i = 0; i < m; i++) {
+                in[j][i] = inputs[j][positions[i]];
+            }
+        }
+        int[] ids = new int[m];
+        double[] y = response == null ? null : new double[m];
+        int[] c = classes == null ? null : new int[m];
+        for (int i = 0; i < m; i++) {
+            int p = positions[i];
+            ids[i] = rowIds[p];
+            if (y != null) {
+                y[i] = response[p];
+            } else {
+                c[i] = classes[p];
+            }
+        }
+        return new ReferenceData(inputNames, responseName, in, y, c, classCount, ids, new int[d + 1], 0);
+    }
+}

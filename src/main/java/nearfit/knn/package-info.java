@@ -1,0 +1,57 @@
+/**
+ * The k-nearest-neighbour engine: scaling, metrics, exact neighbour indexes, estimates with the
+ * tie rule, bands, window widths, tuning (choosing k) and leave-one-out flags. No I/O and no UI:
+ * it works on primitive arrays that the faces copy out of a table.
+ *
+ * <h2>Data flow</h2>
+ * <pre>
+ * double[] per input + response + row ids ─▶ {@link nearfit.knn.ReferenceData} (NaN rows left out, counted; canonical order)
+ *   ─▶ {@link nearfit.knn.InputTransform} (z / robust / range / none; whitening for Mahalanobis)
+ *   ─▶ packed coordinates ─▶ {@link nearfit.knn.NeighborIndex} (sorted for 1 input, k-d tree for 2..16, else brute force)
+ *   ─▶ {@link nearfit.knn.KnnModel}: estimates, curves, votes ─▶ {@link nearfit.knn.Tuning}, {@link nearfit.knn.Flags}
+ * </pre>
+ *
+ * <h2>Usage</h2>
+ * <pre>{@code
+ * ReferenceData ref = ReferenceData.numeric(
+ *         new String[] {"wind_speed", "air_density"}, new double[][] {windSpeed, density},
+ *         "power_kw", power, rowIds);                 // ref.droppedPerColumn(): rows left out
+ * KnnSettings settings = KnnSettings.defaults().withK(25).withWeighting(Weighting.TRICUBE);
+ * KnnModel model = KnnModel.fit(ref, settings);       // NearfitException names a bad column
+ *
+ * Estimate e = model.estimate(9.5, 1.22);             // fit, band, local SD, window width, count
+ * Curve c = model.curve(0, new double[] {0, 1.22}, grid, Progress.NONE);  // along wind_speed
+ *
+ * TuningTable t = Tuning.leaveOneOut(model, 100, progress);   // all k in 1..100, one pass
+ * KnnModel tuned = model.withSettings(settings.withK(t.oneSeK()));  // keeps the index
+ *
+ * FlagResult flags = Flags.leaveOneOut(tuned, progress);      // per row: fit, residual, z, flagged
+ *
+ * // saving: settings(), transform() (center, scale, whitening), data() (inputs, response, row ids);
+ * // loading: KnnModel.restore(ReferenceData.numeric(...stored rows...), settings, transform)
+ * }</pre>
+ *
+ * <h2>Rules every result follows</h2>
+ * <ul>
+ * <li><b>Tie rule.</b> With D the k-th smallest distance, rows closer than D count fully and the
+ *     rows at exactly D share the remaining k - n&lt; places equally, for every weighting; indexes
+ *     return every row tied with the k-th for that reason. "Exactly" means equal keys (squared
+ *     distances for Euclidean and Mahalanobis) as computed in floating point.</li>
+ * <li><b>Determinism.</b> Reference rows are kept in a canonical order (by inputs, then response)
+ *     and all sums run in orders fixed by the data, so shuffling the rows or changing the thread
+ *     count changes no result, bit for bit.</li>
+ * <li><b>Units.</b> Window width is in the input's own units with one input and in scaled units
+ *     with several. Distances in {@link nearfit.knn.NeighborList} are keys (squared for Euclidean).</li>
+ * <li><b>Threads.</b> Models and indexes are immutable and shared; a {@link nearfit.knn.Searcher}
+ *     holds one thread's scratch. Batch work ({@code estimateAll}, {@code curve}, tuning, flags)
+ *     runs on {@link nearfit.knn.KnnSettings#threads()} threads in chunks of 1024 rows, checking
+ *     {@link nearfit.knn.Progress#isCancelled()} per chunk and throwing
+ *     {@link nearfit.knn.CancelledException}.</li>
+ * <li><b>Errors.</b> k above the usable rows, a constant input, a zero MAD under robust scaling and
+ *     a singular covariance under Mahalanobis throw {@link nearfit.table.NearfitException} naming
+ *     the columns.</li>
+ * <li><b>Tuning size.</b> {@link nearfit.knn.Tuning#leaveOneOut(KnnModel, int, Progress)} samples
+ *     100,000 seeded rows above 200,000 reference rows (neighbours still searched among all rows).</li>
+ * </ul>
+ */
+package nearfit.knn;

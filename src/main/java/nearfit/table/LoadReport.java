@@ -1,0 +1,46 @@
+package nearfit.table;
+
+import java.util.List;
+
+/**
+ * What a load found, for the user: sizes, ragged rows, examples of bad cells, and the time taken.
+ *
+ * @param source         the file as the user named it ("-" for standard input)
+ * @param rows           data rows loaded
+ * @param bytes          input bytes read (decompressed for gzip)
+ * @param delimiter      the field delimiter used
+ * @param headerPresent  whether the first row was read as a header
+ * @param decimalComma   whether numbers were read with a decimal comma
+ * @param shortRows      rows with fewer fields than the header, padded with missing values
+ * @param longRows       rows with more fields than the header, whose extra fields were dropped
+ * @param raggedExamples the first ragged rows (line and what was wrong)
+ * @param badCells       total cells that did not parse in number or time columns
+ * @param badExamples    the first bad cells (line, column, text)
+ * @param nanos          wall-clock time of the load in nanoseconds
+ */
+public record LoadReport(String source, int rows, long bytes, char delimiter, boolean headerPresent,
+        boolean decimalComma, long shortRows, long longRows, List<BadCell> raggedExamples, long badCells,
+        List<BadCell> badExamples, long nanos) {
+    /** How many examples of each kind a report keeps. */
+    public static final int EXAMPLES = 10;
+
+    public LoadReport {
+        raggedExamples = List.copyOf(raggedExamples);
+        badExamples = List.copyOf(badExamples);
+    }
+
+    /** Rows with the wrong number of fields, short and long together. */
+    public long raggedRows() {
+        return shortRows + longRows;
+    }
+
+    /** Load time in seconds. */
+    public double seconds() {
+        return nanos / 1e9;
+    }
+
+    /** Throughput in MB (10^6 bytes) per second; 0 when the time is 0. */
+    public double megabytesPerSecond() {
+        return nanos == 0 ? 0 : bytes / 1e6 / seconds();
+    }
+}

@@ -1,0 +1,102 @@
+package nearfit.knn;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import java.util.Arrays;
+import java.util.Random;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.constraints.IntRange;
+
+/** Every index returns exactly what the brute-force scan returns, ties included (property tests). */
+class NeighborIndexPropertiesTest {
+
+    /** Packed coordinates with values from a small set, so duplicates and tied distances abound. */
+    static double[] coarseCoords(long seed, int n, int d) {
+        Random r = new Random(seed);
+        double[] c = new double[n * d];
+        for (int i = 0; i < c.length; i++) {
+            c[i] = r.nextInt(5) * 0.5;
+        }
+        return c;
+    }
+
+    private static void assertSameNeighbours(NeighborIndex index, NeighborIndex brute, double[] q, int k, int exclude) {
+        NeighborList a = new NeighborList();
+        NeighborList b = new NeighborList();
+        index.search(q, k, exclude, a);
+        brute.search(q, k, exclude, b);
+        assertEquals(b.count(), a.count(), "count");
+        assertArrayEquals(Arrays.copyOf(b.positions(), b.count()), Arrays.copyOf(a.positions(), a.count()), "positions");
+        assertArrayEquals(Arrays.copyOf(b.keys(), b.count()), Arrays.copyOf(a.keys(), a.count()), "keys");
+    }
+
+    @Property(tries = 60)
+    void kdTreeEqualsBruteForceWithTies(@ForAll long seed, @ForAll @IntRange(min = 2, max = 8) int d,
+                                        @ForAll @IntRange(min = 1, max = 400) int n,
+                                        @ForAll @IntRange(min = 1, max = 12) int k) {
+        double[] c = coarseCoords(seed, n, d);
+        Random r = new Random(seed + 1);
+        for (Metric m : new Metric[] {Metric.EUCLIDEAN, Metric.MANHATTAN, Metric.CHEBYSHEV}) {
+            KdTree tree = KdTree.build(c, d, m, 2);
+            BruteForce brute = new BruteForce(c, d, m);
+            for (int t = 0; t < 5; t++) {
+                double[] q = new double[d];
+                for (int j = 0; j < d; j++) {
+                    q[j] = r.nextInt(7) * 0.5 - 0.5;
+                }
+                int exclude = t % 2 == 0 ? -1 : r.nextInt(n);
+                int kk = Math.min(k, n - (exclude >= 0 ? 1 : 0));
+                if (kk >= 1) {
+                    assertSameNeighbours(tree, brute, q, kk, exclude);
+                }
+            }
+        }
+    }
+
+    @Property(tries = 60)
+    void sortedIndexEqualsBruteForceWithTies(@ForAll long seed, @ForAll @IntRange(min = 2, max = 300) int n,
+                                             @ForAll @IntRange(min = 1, max = 12) int k) {
+        double[] c = coarseCoords(seed, n, 1);
+        Arrays.sort(c);
+        Random r = new Random(seed + 2);
+        for (Metric m : new Metric[] {Metric.EUCLIDEAN, Metric.MANHATTAN, Metric.CHEBYSHEV}) {
+            SortedIndex sorted = new SortedIndex(c, m);
+            BruteForce brute = new BruteForce(c, 1, m);
+            for (int t = 0; t < 6; t++) {
+                double[] q = {r.nextInt(9) * 0.25 - 0.25};
+                int exclude = t % 2 == 0 ? -1 : r.nextInt(n);
+                int kk = Math.min(k, n - (exclude >= 0 ? 1 : 0));
+                assertSameNeighbours(sorted, brute, q, kk, exclude);
+            }
+        }
+    }
+
+    @Property(tries = 30)
+    void chosenIndexEqualsBruteForceForEveryMetricThroughTheModel(@ForAll long seed,
+                                                                   @ForAll @IntRange(min = 1, max = 8) int d,
+                                                                   @ForAll @IntRange(min = 70, max = 300) int n) {
+        double[][] x = new double[d][n];
+        Random r = new Random(seed);
+        String[] names = new String[d];
+        for (int j = 0; j < d; j++) {
+            names[j] = "x" + j;
+            for (int i = 0; i < n; i++) {
+                x[j][i] = r.nextInt(6) + (j == 0 ? 0 : 0.001 * r.nextInt(3) * j); // independent enough for Mahalanobis
+            }
+        }
+        double[] y = new double[n];
+        for (int i = 0; i < n; i++) {
+            y[i] = r.nextInt(4);
+        }
+        for (Metric m : Metric.values()) {
+            KnnModel model = KnnModel.fit(ReferenceData.numeric(names, x, "y", y, null), KnnSettings.defaults().withK(5).withMetric(m));
+            BruteForce brute = new BruteForce(model.coords(), d, m.base());
+            for (int i = 0; i < 5; i++) {
+                double[] q = Arrays.copyOfRange(model.coords(), i * d, i * d + d);
+                assertSameNeighbours(model.index(), brute, q, 5, i);
+            }
+        }
+    }
+}

@@ -1,0 +1,170 @@
+package nearfit.knn.bench;
+
+import java.io.IOException;
+import java.nio.ByteBuffer;
+import java.nio.ByteOrder;
+import java.nio.channels.FileChannel;
+import java.nio.file.Path;
+import java.nio.file.StandardOpenOption;
+import java.util.Arrays;
+import java.util.SplittableRandom;
+import nearfit.knn.KnnModel;
+import nearfit.knn.KnnSettings;
+import nearfit.knn.NeighborIndex;
+import nearfit.knn.NeighborTable;
+import nearfit.knn.Progress;
+import nearfit.knn.ReferenceData;
+import nearfit.knn.Scaling;
+import nearfit.knn.Tuning;
+import nearfit.knn.TuningTable;
+
+/**
+ * The nearfit side of scripts/bench-knn. {@code generate DIR} writes the seeded data as raw
+ * little-endian doubles for both sides; {@code run DIR REPS} times each case (after warm-up) and
+ * prints "case median_seconds" lines. Not a test: run by the script only.
+ */
+public final class KnnBench {
+    static final int N = 1_000_000;
+    static final int Q = 200_000;
+    static final int LOO_N = 200_000;
+    static final int K = 10;
+    static final int KMAX = 50;
+
+    private KnnBench() {
+    }
+
+    public static void main(String[] args) throws Exception {
+        Path dir = Path.of(args[1]);
+        if (args[0].equals("generate")) {
+            generate(dir);
+        } else {
+            run(dir, Integer.parseInt(args[2]));
+        }
+    }
+
+    /** A wind-site flavoured sample: wind speed, air density, yaw error; power with noise. */
+    static void generate(Path dir) throws IOException {
+        SplittableRandom r = new SplittableRandom(20261201);
+        double[] x3 = new double[N * 3];
+        double[] y = new double[N];
+        for (int i = 0; i < N; i++) {
+            double ws = 12 * Math.pow(-Math.log(1 - r.nextDouble()), 1 / 2.0); // Weibull(k=2)
+            double rho = 1.225 + 0.05 * gauss(r);
+            double yaw = 8 * gauss(r);
+            x3[3 * i] = ws;
+            x3[3 * i + 1] = rho;
+            x3[3 * i + 2] = yaw;
+            double p = Math.min(3000, 0.5 * rho * 5000 * Math.pow(Math.min(ws, 13), 3) / 1000 * Math.cos(Math.toRadians(yaw)));
+            y[i] = p + 40 * gauss(r);
+        }
+        double[] q3 = new double[Q * 3];
+        for (int i = 0; i < Q; i++) {
+            q3[3 * i] = 25 * r.nextDouble();
+            q3[3 * i + 1] = 1.225 + 0.05 * gauss(r);
+            q3[3 * i + 2] = 8 * gauss(r);
+        }
+        write(dir.resolve("x3.bin"), x3);
+        write(dir.resolve("y.bin"), y);
+        write(dir.resolve("q3.bin"), q3);
+    }
+
+    private static double gauss(SplittableRandom r) {
+        return Math.sqrt(-2 * Math.log(1 - r.nextDouble())) * Math.cos(2 * Math.PI * r.nextDouble());
+    }
+
+    static void write(Path p, double[] v) throws IOException {
+        ByteBuffer b = ByteBuffer.allocate(v.length * 8).order(ByteOrder.LITTLE_ENDIAN);
+        b.asDoubleBuffer().put(v);
+        try (FileChannel c = FileChannel.open(p, StandardOpenOption.CREATE, StandardOpenOption.WRITE, StandardOpenOption.TRUNCATE_EXISTING)) {
+            c.write(b);
+        }
+    }
+
+    static double[] read(Path p) throws IOException {
+        try (FileChannel c = FileChannel.open(p)) {
+            ByteBuffer b = ByteBuffer.allocate((int) c.size()).order(ByteOrder.LITTLE_ENDIAN);
+            while (b.hasRemaining() && c.read(b) >= 0) {
+                // read all
+            }
+            b.flip();
+            double[] v = new double[b.remaining() / 8];
+            b.asDoubleBuffer().get(v);
+            return v;
+        }
+    }
+
+    static double[][] columns(double[] packed, int d, int n) {
+        double[][] c = new double[d][n];
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < d; j++) {
+                c[j][i] = packed[i * d + j];
+            }
+        }
+        return c;
+    }
+
+    interface Case {
+        double run() throws Exception;
+    }
+
+    static void time(String name, int reps, Case c) throws Exception {
+        double sink = c.run(); // warm-up
+        sink += c.run();
+        double[] t = new double[reps];
+        for (int i = 0; i < reps; i++) {
+            long t0 = System.nanoTime();
+            sink += c.run();
+            t[i] = (System.nanoTime() - t0) / 1e9;
+        }
+        Arrays.sort(t);
+        System.out.printf("%s %.4f%n", name, t[reps / 2]);
+        if (sink == 42.4242) {
+            System.out.println("unlikely");
+        }
+    }
+
+    static void run(Path dir, int reps) throws Exception {
+        double[] x3 = read(dir.resolve("x3.bin"));
+        double[] y = read(dir.resolve("y.bin"));
+        double[] q3 = read(dir.resolve("q3.bin"));
+        double[][] c3 = columns(x3, 3, N);
+        double[][] c1 = {c3[0]};
+        double[][] qc3 = columns(q3, 3, Q);
+        double[][] qc1 = {qc3[0]};
+        int threads = Runtime.getRuntime().availableProcessors();
+        KnnSettings s = KnnSettings.defaults().withK(K).withScaling(Scaling.Z).withThreads(threads);
+        String[] n1 = {"wind_speed"};
+        String[] n3 = {"wind_speed", "air_density", "yaw_error"};
+
+        KnnModel m1 = KnnModel.fit(ReferenceData.numeric(n1, c1, "power_kw", y, null), s);
+        KnnModel m3 = KnnModel.fit(ReferenceData.numeric(n3, c3, "power_kw", y, null), s);
+        time("fit_1d", reps, () -> KnnModel.fit(ReferenceData.numeric(n1, c1, "power_kw", y, null), s).index().size());
+        time("fit_3d", reps, () -> KnnModel.fit(ReferenceData.numeric(n3, c3, "power_kw", y, null), s).index().size());
+        double[] packed3 = packed(m3);
+        time("index_3d", reps, () -> NeighborIndex.build(packed3, 3, s.metric(), threads).size());
+        time("query_1d", reps, () -> queries(m1, qc1, threads));
+        time("query_3d", reps, () -> queries(m3, qc3, threads));
+        double[][] l3 = new double[3][];
+        for (int j = 0; j < 3; j++) {
+            l3[j] = Arrays.copyOf(c3[j], LOO_N);
+        }
+        KnnModel loo = KnnModel.fit(ReferenceData.numeric(n3, l3, "power_kw", Arrays.copyOf(y, LOO_N), null), s);
+        time("loo_allk_3d", reps, () -> {
+            TuningTable t = Tuning.leaveOneOut(loo, KMAX, LOO_N, 1, Progress.NONE);
+            return t.rmse()[KMAX - 1];
+        });
+        TuningTable t = Tuning.leaveOneOut(loo, KMAX, LOO_N, 1, Progress.NONE);
+        System.out.printf("check_loo_rmse_k10 %.6f%n", t.rmse()[9]);
+    }
+
+    /** The scaled coordinates of the model, packed (through the public transform). */
+    static double[] packed(KnnModel m) {
+        return m.transform().pack(m.data());
+    }
+
+    /** k = 10 neighbours (rows and distances) for every query, on all threads. */
+    static double queries(KnnModel m, double[][] q, int threads) {
+        NeighborTable t = m.neighborsAll(q, Progress.NONE);
+        return t.distances()[t.distances().length - 1] + t.rowIds()[0];
+    }
+}
