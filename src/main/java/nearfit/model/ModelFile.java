@@ -50,7 +50,7 @@ public final class ModelFile {
      * tool_version, created (ISO 8601 UTC), source {name, size, sha256}, row_condition, rows,
      * columns {inputs, response, response_labels, group, group_labels}, scaling {method, center,
      * spread, whitening}, metric, weights, k, band, flags {threshold, residual_median, residual_scale,
-     * residual_scale_kind}, tuning (the tune JSON object, or null).
+     * z_scale}, tuning (the tune JSON object, or null).
      */
     static Map<String, Object> manifestOf(ReferenceModel model) {
         Map<String, Object> m = new LinkedHashMap<>();
@@ -85,7 +85,7 @@ public final class ModelFile {
         flags.put("threshold", model.settings().flagThreshold());
         flags.put("residual_median", model.residualScale().median());
         flags.put("residual_scale", model.residualScale().scale());
-        flags.put("residual_scale_kind", "loo-median-mad");
+        flags.put("z_scale", model.settings().zScale());
         m.put("flags", flags);
         m.put("tuning", model.tuning() == null ? null : model.tuning().toJson());
         return m;
@@ -123,7 +123,7 @@ public final class ModelFile {
         ModelSettings settings = new ModelSettings(ManifestFields.text(m, "metric"),
                 ManifestFields.text(m, "weights"), ManifestFields.text(scaling, "method"),
                 (int) ManifestFields.whole(m, "k"), ManifestFields.text(m, "band"),
-                ManifestFields.number(flags, "threshold"));
+                ManifestFields.number(flags, "threshold"), ManifestFields.text(flags, "z_scale"));
         ReferenceModel.ResidualScale residual = new ReferenceModel.ResidualScale(
                 numberOrNaN(flags, "residual_median"), numberOrNaN(flags, "residual_scale"));
         Object tuningField = ManifestFields.required(m, "tuning");

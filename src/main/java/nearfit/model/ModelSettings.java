@@ -15,9 +15,12 @@ import java.util.List;
  * @param k             neighbours per estimate, at least 1
  * @param band          band: q10-q90, q05-q95, sd2 or none
  * @param flagThreshold |z| above which a row is flagged, greater than 0
+ * @param zScale        what divides a residual to make z: {@code local} (the weighted SD of the k
+ *                      neighbours' responses at the row) or {@code reference} (1.4826·MAD of the
+ *                      reference's leave-one-out residuals, after subtracting their median)
  */
 public record ModelSettings(String metric, String weights, String scaling, int k, String band,
-                            double flagThreshold) {
+                            double flagThreshold, String zScale) {
     /** The metric words accepted. */
     public static final List<String> METRICS = List.of("euclidean", "manhattan", "chebyshev", "mahalanobis");
     /** The weight words accepted. */
@@ -26,6 +29,8 @@ public record ModelSettings(String metric, String weights, String scaling, int k
     public static final List<String> SCALINGS = List.of("z", "robust", "range", "none");
     /** The band words accepted. */
     public static final List<String> BANDS = List.of("q10-q90", "q05-q95", "sd2", "none");
+    /** The z scale words accepted. */
+    public static final List<String> Z_SCALES = List.of("local", "reference");
     /** The flag threshold by default: the modified z-score cut-off of Iglewicz and Hoaglin (1993). */
     public static final double DEFAULT_FLAG_THRESHOLD = 3.5;
 
@@ -35,6 +40,7 @@ public record ModelSettings(String metric, String weights, String scaling, int k
         requireOneOf("weights", weights, WEIGHTS);
         requireOneOf("scaling", scaling, SCALINGS);
         requireOneOf("band", band, BANDS);
+        requireOneOf("z scale", zScale, Z_SCALES);
         if (k < 1) {
             throw new IllegalArgumentException("k must be at least 1, not " + k);
         }
@@ -43,14 +49,14 @@ public record ModelSettings(String metric, String weights, String scaling, int k
         }
     }
 
-    /** The defaults: euclidean, uniform, z, q05-q95, threshold 3.5, with the given k. */
+    /** The defaults: euclidean, uniform, z, q05-q95, threshold 3.5, local z scale, with the given k. */
     public static ModelSettings defaults(int k) {
-        return new ModelSettings("euclidean", "uniform", "z", k, "q05-q95", DEFAULT_FLAG_THRESHOLD);
+        return new ModelSettings("euclidean", "uniform", "z", k, "q05-q95", DEFAULT_FLAG_THRESHOLD, "local");
     }
 
     /** A copy with another k. */
     public ModelSettings withK(int newK) {
-        return new ModelSettings(metric, weights, scaling, newK, band, flagThreshold);
+        return new ModelSettings(metric, weights, scaling, newK, band, flagThreshold, zScale);
     }
 
     private static void requireOneOf(String field, String value, List<String> allowed) {

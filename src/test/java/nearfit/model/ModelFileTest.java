@@ -38,7 +38,7 @@ class ModelFileTest {
                 null, null, 2, 2, -1);
         return new ReferenceModel("0.1.0", Instant.parse("2026-03-01T10:15:30Z"),
                 new SourceInfo("site-log.csv.gz", 1234, "ab".repeat(32), "turbine != T03"), columns,
-                new ModelSettings("manhattan", "tricube", "robust", 2, "sd2", 3.0),
+                new ModelSettings("manhattan", "tricube", "robust", 2, "sd2", 3.0, "reference"),
                 new double[] {7.0, 10.5}, new double[] {2.0, 1.25}, new double[] {1, 0, 0.5, 2},
                 new ReferenceModel.ResidualScale(-0.5, 42.0), tuning, rows);
     }
