@@ -8,11 +8,8 @@ import java.util.concurrent.Callable;
 import nearfit.knn.FlagResult;
 import nearfit.knn.Flags;
 import nearfit.knn.KnnModel;
-import nearfit.knn.KnnSettings;
 import nearfit.knn.TuningTable;
-import nearfit.model.EngineSettings;
 import nearfit.model.ModelFile;
-import nearfit.model.ModelSettings;
 import nearfit.model.ReferenceCapture;
 import nearfit.model.ReferenceModel;
 import nearfit.model.SafeOutput;
@@ -64,14 +61,10 @@ final class FitCommand implements Callable<Integer> {
         SafeOutput.checkTarget(output, model.force, inputs);
         PrintWriter err = spec.commandLine().getErr();
         ReferenceInput input = ReferenceInput.load(file, columns, model, err);
-        ModelSettings words = model.settings(chosenK == OptionValues.K_AUTO ? 1 : chosenK, z);
-        KnnSettings settings = EngineSettings.of(words, model.threads());
-        KnnModel engine = KnnModel.fit(input.data(), settings);
-        TuningOptions.Result tuned = null;
-        if (chosenK == OptionValues.K_AUTO) {
-            tuned = tuning.run(engine, TerminalProgress.of(err, "tuning", model.quiet));
-            engine = engine.withSettings(settings.withK(tuned.table().oneSeK()));
-        }
+        TuningOptions.Fitted fitted = tuning.fit(input.data(), model.settings(1, z), chosenK, model.threads(), err,
+                model.quiet);
+        KnnModel engine = fitted.engine();
+        TuningOptions.Result tuned = fitted.tuned();
         FlagResult loo = null;
         if (!input.data().isCategory()) {
             TerminalProgress progress = TerminalProgress.of(err, "leave-one-out", model.quiet);

@@ -12,9 +12,7 @@ import nearfit.knn.Curve;
 import nearfit.knn.FlagResult;
 import nearfit.knn.Flags;
 import nearfit.knn.KnnModel;
-import nearfit.knn.KnnSettings;
 import nearfit.knn.ReferenceData;
-import nearfit.model.EngineSettings;
 import nearfit.model.ModelSettings;
 import nearfit.model.SafeOutput;
 import nearfit.plot.CanvasKind;
@@ -90,7 +88,8 @@ final class PlotCommand implements Callable<Integer> {
         }
         PrintWriter err = spec.commandLine().getErr();
         ReferenceInput input = ReferenceInput.load(file, columns, model, err);
-        Scene scene = scene(input, fitted(input, chosenK, err));
+        Scene scene = scene(input, tuning.fit(input.data(), model.settings(1, ModelSettings.DEFAULT_FLAG_THRESHOLD),
+                chosenK, model.threads(), err, model.quiet).engine());
         if (png != null) {
             SafeOutput.write(png, model.force, inputs, out -> {
                 if (!ImageIO.write(PngRenderer.render(scene, dims[0], dims[1]), "png", out)) {
@@ -106,18 +105,6 @@ final class PlotCommand implements Callable<Integer> {
                 : TextRenderer.plain(plot.grid()));
         out.flush();
         return 0;
-    }
-
-    private KnnModel fitted(ReferenceInput input, int chosenK, PrintWriter err) {
-        ModelSettings words = model.settings(chosenK == OptionValues.K_AUTO ? 1 : chosenK,
-                ModelSettings.DEFAULT_FLAG_THRESHOLD);
-        KnnSettings settings = EngineSettings.of(words, model.threads());
-        KnnModel engine = KnnModel.fit(input.data(), settings);
-        if (chosenK == OptionValues.K_AUTO) {
-            TuningOptions.Result tuned = tuning.run(engine, TerminalProgress.of(err, "tuning", model.quiet));
-            engine = engine.withSettings(settings.withK(tuned.table().oneSeK()));
-        }
-        return engine;
     }
 
     private Scene scene(ReferenceInput input, KnnModel engine) {

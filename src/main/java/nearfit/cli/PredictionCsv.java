@@ -13,7 +13,6 @@ import java.util.List;
 
 import nearfit.model.CsvCells;
 import nearfit.model.SafeOutput;
-import nearfit.table.CategoryColumn;
 import nearfit.table.NearfitException;
 import nearfit.table.NumericColumn;
 import nearfit.table.TimeColumn;

@@ -71,6 +71,26 @@ final class TuningOptions {
         return new Result(t, sampled);
     }
 
+    /**
+     * Fits the engine with the given k, or with {@code k = auto} ({@link OptionValues#K_AUTO}) tunes
+     * and refits with the one-SE k; {@code words} carries every other setting.
+     */
+    Fitted fit(nearfit.knn.ReferenceData data, nearfit.model.ModelSettings words, int chosenK, int threads,
+               java.io.PrintWriter err, boolean quiet) {
+        boolean auto = chosenK == OptionValues.K_AUTO;
+        nearfit.knn.KnnSettings settings = nearfit.model.EngineSettings.of(words.withK(auto ? 1 : chosenK), threads);
+        KnnModel engine = KnnModel.fit(data, settings);
+        if (!auto) {
+            return new Fitted(engine, null);
+        }
+        Result tuned = run(engine, TerminalProgress.of(err, "tuning", quiet));
+        return new Fitted(engine.withSettings(settings.withK(tuned.table().oneSeK())), tuned);
+    }
+
+    /** A fitted engine and its tuning, {@code null} when k was given. */
+    record Fitted(KnnModel engine, Result tuned) {
+    }
+
     /** A tuning table and the sample size (-1 when every row was evaluated). */
     record Result(TuningTable table, long sampled) {
     }
