@@ -45,6 +45,9 @@ public final class KnnModel {
      *                          Mahalanobis covariance is singular
      */
     public static KnnModel fit(ReferenceData data, KnnSettings settings) {
+        if (data.size() == 0) {
+            throw new NearfitException("no usable reference rows: " + whatIsMissing(data));
+        }
         checkK(settings.k(), data.size());
         InputTransform t = InputTransform.fit(data, settings.scaling(), settings.metric());
         return restore(data, settings, t);
@@ -59,6 +62,24 @@ public final class KnnModel {
         double[] coords = transform.pack(data);
         NeighborIndex index = NeighborIndex.build(coords, data.dimensions(), settings.metric(), settings.threads());
         return new KnnModel(data, settings, transform, coords, index);
+    }
+
+    /** Which columns left the rows out, e.g. {@code power_kw is missing in all 30 rows}. */
+    private static String whatIsMissing(ReferenceData data) {
+        int rows = data.droppedRows();
+        if (rows == 0) {
+            return "there are no rows";
+        }
+        StringBuilder sb = new StringBuilder();
+        int[] dropped = data.droppedPerColumn();
+        for (int j = 0; j < dropped.length; j++) {
+            if (dropped[j] > 0) {
+                String name = j < data.dimensions() ? data.inputNames()[j] : data.responseName();
+                sb.append(sb.length() == 0 ? "" : "; ").append(name).append(" is missing in ")
+                        .append(dropped[j] == rows ? "all " + rows : dropped[j] + " of " + rows).append(" rows");
+            }
+        }
+        return sb.toString();
     }
 
     static void checkK(int k, int rows) {
