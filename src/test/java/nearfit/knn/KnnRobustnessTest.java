@@ -151,6 +151,18 @@ class KnnRobustnessTest {
         assertTrue(Double.isFinite(m.estimate(3.0).fit()));
     }
 
+    @Test
+    void aReferenceWithNoUsableRowSaysWhichColumnIsMissing() {
+        // Before the fix: "k = 1 is more than the 0 usable reference rows; choose k <= 0".
+        double nan = Double.NaN;
+        ReferenceData data = ReferenceData.numeric(new String[] {"wind_ms"}, new double[][] {{3, 5, nan}},
+                "power_kw", new double[] {nan, nan, nan}, null);
+        NearfitException ex = org.junit.jupiter.api.Assertions.assertThrows(NearfitException.class,
+                () -> KnnModel.fit(data, KnnSettings.defaults().withK(1)));
+        assertEquals("no usable reference rows: wind_ms is missing in 1 of 3 rows; power_kw is missing in all 3 rows",
+                ex.getMessage());
+    }
+
     @TempDir
     java.nio.file.Path dir;
 
