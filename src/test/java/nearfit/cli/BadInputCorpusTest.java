@@ -59,6 +59,65 @@ class BadInputCorpusTest {
                 new Case("good.csv", 0, "bad cells: 0 (read as missing)"));
     }
 
+    /**
+     * What {@code plot}, {@code tune} and {@code fit} (response power_kw, inputs wind_ms and air_temp_c)
+     * must do with each corpus file: the loader's message when it refuses the file, the engine's when no
+     * model can be made, else status 0 with output and nothing on standard error.
+     */
+    static List<Case> modelCorpus() {
+        List<Case> out = new java.util.ArrayList<>();
+        for (Case c : corpus()) {
+            out.add(switch (c.file()) {
+                case "all-missing-power.csv" -> new Case(c.file(), 2,
+                        "nearfit: no usable reference rows: power_kw is missing in all 30 rows");
+                case "constant-input.csv" -> new Case(c.file(), 2, "nearfit: column air_temp_c: is constant (7.5) in "
+                        + "the reference rows, so it cannot be scaled; leave it out");
+                default -> c.status() == 2 ? c : new Case(c.file(), 0, "");
+            });
+        }
+        return out;
+    }
+
+    static List<org.junit.jupiter.params.provider.Arguments> modelRuns() {
+        List<org.junit.jupiter.params.provider.Arguments> runs = new java.util.ArrayList<>();
+        for (String command : List.of("plot", "tune", "fit")) {
+            for (Case c : modelCorpus()) {
+                runs.add(org.junit.jupiter.params.provider.Arguments.of(command, c));
+            }
+        }
+        return runs;
+    }
+
+    private String[] modelArgs(String command, Path file) {
+        List<String> a = new java.util.ArrayList<>(List.of(command, file.toString(), "-x", "wind_ms,air_temp_c",
+                "-y", "power_kw", "--quiet"));
+        switch (command) {
+            case "plot" -> a.addAll(List.of("--ascii", "--size", "60x20"));
+            case "fit" -> a.addAll(List.of("-o", dir.resolve(file.getFileName() + ".nfm").toString()));
+            default -> { }
+        }
+        return a.toArray(new String[0]);
+    }
+
+    @ParameterizedTest(name = "{0} {1}")
+    @MethodSource("modelRuns")
+    void plotTuneAndFitEndEachBadInputWithItsStatusAndOneLine(String command, Case c) throws IOException {
+        Path file = copy(c.file());
+        Result r = run(modelArgs(command, file));
+        assertEquals(c.status(), r.status(), () -> command + " " + c.file() + ": " + r);
+        assertFalse(r.err().contains("\tat ") || r.err().contains("Exception"), () -> "a stack trace: " + r.err());
+        if (c.status() == 2) {
+            assertEquals(c.message().replace("FILE", file.toString()) + "\n", r.err());
+        } else {
+            assertEquals("", r.err());
+            if (command.equals("fit")) {
+                assertTrue(Files.size(dir.resolve(c.file() + ".nfm")) > 0, "the model file is written");
+            } else {
+                assertFalse(r.out().isBlank(), "the " + command + " output");
+            }
+        }
+    }
+
     record Result(int status, String out, String err) {
     }
 
