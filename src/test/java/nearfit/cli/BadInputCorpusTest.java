@@ -7,8 +7,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.BufferedWriter;
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -103,7 +101,7 @@ class BadInputCorpusTest {
     @MethodSource("modelRuns")
     void plotTuneAndFitEndEachBadInputWithItsStatusAndOneLine(String command, Case c) throws IOException {
         Path file = copy(c.file());
-        Result r = run(modelArgs(command, file));
+        CliRun.Result r = run(modelArgs(command, file));
         assertEquals(c.status(), r.status(), () -> command + " " + c.file() + ": " + r);
         assertFalse(r.err().contains("\tat ") || r.err().contains("Exception"), () -> "a stack trace: " + r.err());
         if (c.status() == 2) {
@@ -118,14 +116,8 @@ class BadInputCorpusTest {
         }
     }
 
-    record Result(int status, String out, String err) {
-    }
-
-    static Result run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int status = Main.run(args, new PrintWriter(out), new PrintWriter(err));
-        return new Result(status, out.toString(), err.toString());
+    private static CliRun.Result run(String... args) {
+        return CliRun.inProcess(args);
     }
 
     private Path copy(String name) throws IOException {
@@ -137,7 +129,7 @@ class BadInputCorpusTest {
     }
 
     /** Status 2 with exactly one line and no trace; or status 0 with the expected line in the report. */
-    static void assertOutcome(Case c, Path file, Result r) {
+    static void assertOutcome(Case c, Path file, CliRun.Result r) {
         assertEquals(c.status(), r.status(), () -> c.file() + ": " + r);
         assertFalse(r.err().contains("\tat ") || r.err().contains("Exception"), () -> "a stack trace: " + r.err());
         if (c.status() == 2) {
@@ -156,7 +148,7 @@ class BadInputCorpusTest {
 
     @Test
     void describeReportsBytesThatAreNotUtf8AsReplacementCharactersInTheirLabels() throws IOException {
-        Result r = run("describe", "--quiet", copy("latin1-bytes.csv").toString());
+        CliRun.Result r = run("describe", "--quiet", copy("latin1-bytes.csv").toString());
         assertEquals(0, r.status());
         assertTrue(r.out().contains("turbine: 11 distinct"), r.out());
     }
@@ -169,7 +161,7 @@ class BadInputCorpusTest {
             w.write("x".repeat(6 << 20));
             w.write("\"\n3,ok\n");
         }
-        Result r = run("describe", "--quiet", p.toString());
+        CliRun.Result r = run("describe", "--quiet", p.toString());
         assertEquals(2, r.status(), r.toString());
         assertEquals("nearfit: " + p + ":3: line over 1 MB (a quote never closed, or not a CSV file?)\n", r.err());
     }
@@ -186,7 +178,7 @@ class BadInputCorpusTest {
                 w.write("7.5,offline\n");
             }
         }
-        Result r = run("describe", "--quiet", p.toString());
+        CliRun.Result r = run("describe", "--quiet", p.toString());
         assertEquals(0, r.status(), r.toString());
         assertTrue(r.out().contains("bad cells: 40 (read as missing)\n  line 1000002, column power_kw: \"offline\"\n"), r.out());
     }

@@ -61,4 +61,38 @@ class CommandRobustnessTest {
         assertTrue(r[1].matches("nearfit: out of memory after loading \\(heap \\d+ MB\\); give Java more heap "
                 + "\\(for example NEARFIT_JAVA_OPTS=-Xmx16g\\)\n"), r[1]);
     }
+
+    @Test
+    void aFitKilledWhileWritingItsModelLeavesThePreviousModelIntact() throws Exception {
+        Path log = dir.resolve("site.csv");
+        try (BufferedWriter w = Files.newBufferedWriter(log, StandardCharsets.UTF_8)) {
+            w.write("wind_ms,air_temp_c,power_kw\n");
+            java.util.Random r = new java.util.Random(8);
+            for (int i = 0; i < 1_000_000; i++) {
+                double wind = 25 * r.nextDouble();
+                w.write(String.format(java.util.Locale.ROOT, "%.2f,%.1f,%.1f%n", wind, 10 * r.nextGaussian(),
+                        Math.min(2000, 1.1 * wind * wind * wind) + 20 * r.nextGaussian()));
+            }
+        }
+        Path model = dir.resolve("reference.nfm");
+        byte[] previous = "the previous model file\n".getBytes(StandardCharsets.UTF_8);
+        Files.write(model, previous);
+        String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
+        String cp = System.getProperty("surefire.test.class.path", System.getProperty("java.class.path"));
+        Process p = new ProcessBuilder(java, "-cp", cp, "nearfit.cli.Main", "fit", log.toString(), "-x",
+                "wind_ms,air_temp_c", "-y", "power_kw", "--k", "10", "-o", model.toString(), "--force", "--quiet")
+                .redirectOutput(ProcessBuilder.Redirect.DISCARD).redirectError(ProcessBuilder.Redirect.DISCARD).start();
+        boolean sawPart = false;
+        long end = System.currentTimeMillis() + 120_000;
+        while (!sawPart && p.isAlive() && System.currentTimeMillis() < end) {
+            try (java.util.stream.Stream<Path> files = Files.list(dir)) {
+                sawPart = files.anyMatch(f -> f.getFileName().toString().endsWith(".part"));
+            }
+            Thread.sleep(sawPart ? 0 : 20);
+        }
+        p.destroyForcibly(); // SIGKILL, mid-write when the part file was seen
+        assertTrue(p.waitFor(60, TimeUnit.SECONDS));
+        assertTrue(sawPart, "the fit began writing its model before it was killed");
+        assertEquals(new String(previous, StandardCharsets.UTF_8), Files.readString(model, StandardCharsets.UTF_8));
+    }
 }

@@ -79,30 +79,31 @@ class ExplorerSignalTest {
     private static final String STALLED_PIPE = "rm -f slow.csv; mkfifo slow.csv\n"
             + "(printf 'wind_ms,power_kw\\n3,20\\n5,90\\n'; sleep 300) > slow.csv &";
 
-    @Test
-    void ctrlCDuringALoadExits130AndRestoresTheTerminal() throws Exception {
+    /** Starts the explorer, waits until {@code busy} shows, then sends Ctrl-C or SIGTERM and expects the status. */
+    private void interrupt(String before, String file, Predicate<String> busy, boolean ctrlC) throws Exception {
         try {
             open();
-            view(STALLED_PIPE, "slow.csv");
-            waitFor(s -> s.contains("loading slow.csv"), "the load screen");
-            tmux("send-keys", "-t", session, "C-c");
-            expectExit(130);
+            view(before, file);
+            waitFor(busy, "the explorer at work");
+            if (ctrlC) {
+                tmux("send-keys", "-t", session, "C-c");
+            } else {
+                terminate();
+            }
+            expectExit(ctrlC ? 130 : 143);
         } finally {
             close();
         }
     }
 
     @Test
+    void ctrlCDuringALoadExits130AndRestoresTheTerminal() throws Exception {
+        interrupt(STALLED_PIPE, "slow.csv", s -> s.contains("loading slow.csv"), true);
+    }
+
+    @Test
     void sigtermDuringALoadExits143AndRestoresTheTerminal() throws Exception {
-        try {
-            open();
-            view(STALLED_PIPE, "slow.csv");
-            waitFor(s -> s.contains("loading slow.csv"), "the load screen");
-            terminate();
-            expectExit(143);
-        } finally {
-            close();
-        }
+        interrupt(STALLED_PIPE, "slow.csv", s -> s.contains("loading slow.csv"), false);
     }
 
     /** A log big enough that tuning runs for several seconds after the first frame (200 000 rows, 2 inputs). */
@@ -120,27 +121,27 @@ class ExplorerSignalTest {
 
     @Test
     void ctrlCDuringTuningExits130AndRestoresTheTerminal() throws Exception {
-        try {
-            open();
-            writeTuningLog();
-            view("", "site.csv");
-            waitFor(s -> s.matches("(?s).*tuning \\d+ %.*"), "tuning under way");
-            tmux("send-keys", "-t", session, "C-c");
-            expectExit(130);
-        } finally {
-            close();
-        }
+        writeTuningLog();
+        interrupt("", "site.csv", s -> s.matches("(?s).*tuning \\d+ %.*"), true);
     }
 
     @Test
     void sigtermDuringTuningExits143AndRestoresTheTerminal() throws Exception {
+        writeTuningLog();
+        interrupt("", "site.csv", s -> s.matches("(?s).*tuning \\d+ %.*"), false);
+    }
+
+    /** Opens the small log, opens an overlay with {@code key}, waits for {@code shown}, then Ctrl-C. */
+    private void ctrlCInOverlay(String key, String shown) throws Exception {
         try {
             open();
-            writeTuningLog();
-            view("", "site.csv");
-            waitFor(s -> s.matches("(?s).*tuning \\d+ %.*"), "tuning under way");
-            terminate();
-            expectExit(143);
+            Files.writeString(dir.resolve("small-site.csv"), TmuxViewTest.smallLog(), StandardCharsets.UTF_8);
+            view("", "small-site.csv");
+            waitFor(s -> s.contains("k=20") && hasBraille(s), "first frame");
+            tmux("send-keys", "-t", session, key);
+            waitFor(s -> s.contains(shown), "the overlay of " + key);
+            tmux("send-keys", "-t", session, "C-c");
+            expectExit(130);
         } finally {
             close();
         }
@@ -148,34 +149,12 @@ class ExplorerSignalTest {
 
     @Test
     void ctrlCWithTheHelpOverlayOpenExits130AndRestoresTheTerminal() throws Exception {
-        try {
-            open();
-            Files.writeString(dir.resolve("small-site.csv"), TmuxViewTest.smallLog(), StandardCharsets.UTF_8);
-            view("", "small-site.csv");
-            waitFor(s -> s.contains("k=20") && hasBraille(s), "first frame");
-            tmux("send-keys", "-t", session, "?");
-            waitFor(s -> s.contains(KeyBinding.FLAG_MARKS.meaning()), "help overlay");
-            tmux("send-keys", "-t", session, "C-c");
-            expectExit(130);
-        } finally {
-            close();
-        }
+        ctrlCInOverlay("?", KeyBinding.FLAG_MARKS.meaning());
     }
 
     @Test
     void ctrlCWithTheFlaggedTableOpenExits130AndRestoresTheTerminal() throws Exception {
-        try {
-            open();
-            Files.writeString(dir.resolve("small-site.csv"), TmuxViewTest.smallLog(), StandardCharsets.UTF_8);
-            view("", "small-site.csv");
-            waitFor(s -> s.contains("k=20") && hasBraille(s), "first frame");
-            tmux("send-keys", "-t", session, "F");
-            waitFor(s -> s.contains("flagged rows:"), "flagged table");
-            tmux("send-keys", "-t", session, "C-c");
-            expectExit(130);
-        } finally {
-            close();
-        }
+        ctrlCInOverlay("F", "flagged rows:");
     }
 
     /** The thread dump of the child JVM (jstack), to say where a child that did not exit is stuck. */
