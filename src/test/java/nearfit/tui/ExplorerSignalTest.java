@@ -125,12 +125,6 @@ class ExplorerSignalTest {
         interrupt("", "site.csv", s -> s.matches("(?s).*tuning \\d+ %.*"), true);
     }
 
-    @Test
-    void sigtermDuringTuningExits143AndRestoresTheTerminal() throws Exception {
-        writeTuningLog();
-        interrupt("", "site.csv", s -> s.matches("(?s).*tuning \\d+ %.*"), false);
-    }
-
     /** Opens the small log, opens an overlay with {@code key}, waits for {@code shown}, then Ctrl-C. */
     private void ctrlCInOverlay(String key, String shown) throws Exception {
         try {
