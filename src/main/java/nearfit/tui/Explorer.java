@@ -27,6 +27,8 @@ import nearfit.table.NearfitException;
 public final class Explorer implements AutoCloseable {
     /** Exit status after Ctrl-C, as a shell reports a process ended by SIGINT. */
     public static final int EXIT_INTERRUPTED = 130;
+    /** How long after a resize frames are sent whole: a few frames of the 250 ms loop. */
+    private static final long RESIZE_SETTLE_NANOS = 600_000_000L;
 
     private final TerminalScreen screen;
     private final Workbench workbench;
@@ -45,6 +47,10 @@ public final class Explorer implements AutoCloseable {
     private Object curveKey;
     private Object tuningKey;
     private Object flagsKey;
+    /** Whether a curve job has finished: tuning and flags wait for it, so the first curve has the cores. */
+    private boolean curveSeen;
+    /** Frames are sent whole until this {@link System#nanoTime} after a resize. */
+    private long completeUntil = System.nanoTime();
     private int exitStatus;
     private long framesDrawn;
 
@@ -80,10 +86,13 @@ public final class Explorer implements AutoCloseable {
         return framesDrawn;
     }
 
-    /** Starts the jobs the first state needs and draws the first frame. */
+    /**
+     * Draws the first frame (the points, as soon as the table is in) and then starts the curve; tuning and
+     * flags start once the first curve is in.
+     */
     public void start() throws IOException {
-        submit();
         draw();
+        submit();
     }
 
     /** Handles one key: the next state, its effect, the jobs it needs and a frame. */
@@ -97,8 +106,11 @@ public final class Explorer implements AutoCloseable {
 
     /** Waits until the background work of the current state is done, applies its results and draws. */
     public void settle() throws IOException, InterruptedException {
-        jobs.awaitIdle(120_000);
-        drainEvents();
+        // A finished curve starts tuning and flags, so wait again until draining starts nothing new.
+        do {
+            jobs.awaitIdle(120_000);
+            drainEvents();
+        } while (jobs.busy());
         draw();
     }
 
@@ -111,6 +123,9 @@ public final class Explorer implements AutoCloseable {
 
     /** Waits until one kind of background work is done ("curve", "tuning" or "flags"), then draws. */
     public void settle(String kind) throws IOException, InterruptedException {
+        // Tuning and flags are started by the first curve, so that comes first.
+        jobs.awaitIdle(Jobs.Kind.CURVE, 600_000);
+        drainEvents();
         jobs.awaitIdle(Jobs.Kind.valueOf(kind.toUpperCase(java.util.Locale.ROOT)), 600_000);
         drainEvents();
         draw();
@@ -147,6 +162,10 @@ public final class Explorer implements AutoCloseable {
             submit();
         } else if (e instanceof Jobs.Done d) {
             apply(d);
+            if (d.kind() == Jobs.Kind.CURVE && !curveSeen && jobs.isCurrent(d)) {
+                curveSeen = true;
+                submit();
+            }
         }
     }
 
@@ -239,13 +258,10 @@ public final class Explorer implements AutoCloseable {
             results = results.withCurve(results.curve(), 0);
             jobs.start(Jobs.Kind.CURVE, generation, c -> workbench.curve(model, request, c));
         }
-        ModelSettings anyK = model.withK(1);
-        if (!anyK.equals(tuningKey)) {
-            tuningKey = anyK;
-            generation++;
-            results = results.withTuning(null, 0);
-            jobs.start(Jobs.Kind.TUNING, generation, c -> workbench.tune(model, c));
+        if (!curveSeen) {
+            return;
         }
+        // Flags first: they are drawn on the plot, tuning only in its panel and the header; both share a lane.
         List<Object> fk = java.util.Arrays.asList(model, state.groupColumn());
         if (!fk.equals(flagsKey)) {
             flagsKey = fk;
@@ -255,6 +271,13 @@ public final class Explorer implements AutoCloseable {
             results = results.withFlags(results.flags(), 0);
             String group = state.groupColumn();
             jobs.start(Jobs.Kind.FLAGS, generation, c -> workbench.flags(model, group, c));
+        }
+        ModelSettings anyK = model.withK(1);
+        if (!anyK.equals(tuningKey)) {
+            tuningKey = anyK;
+            generation++;
+            results = results.withTuning(null, 0);
+            jobs.start(Jobs.Kind.TUNING, generation, c -> workbench.tune(model, c));
         }
     }
 
@@ -319,8 +342,10 @@ public final class Explorer implements AutoCloseable {
     /** Draws a frame, first taking in a new terminal size (which may ask for a new curve). */
     void draw() throws IOException {
         TerminalSize resized = screen.doResizeIfNecessary();
+        long now = System.nanoTime();
         if (resized != null) {
             layout = layoutOf(resized);
+            completeUntil = now + RESIZE_SETTLE_NANOS;
             submit();
         }
         results = new Results(results.curve(), jobs.progress(Jobs.Kind.CURVE), results.tuning(),
@@ -329,9 +354,10 @@ public final class Explorer implements AutoCloseable {
         Pen pen = new Pen(screen.newTextGraphics(), look, layout.width(), layout.height(), characters);
         ScreenPainter.paint(pen, layout, state, results, frameInput(), sketches);
         screen.setCursorPosition(null);
-        // After a resize the terminal may have reflowed or cleared its cells, so the frame is sent whole;
+        // After a resize the terminal may reflow or clear its cells, even after the first frame at the new size
+        // (a multiplexer over SSH may apply its reflow late), so frames are sent whole for a short while;
         // otherwise only the cells that changed.
-        screen.refresh(resized != null ? Screen.RefreshType.COMPLETE : Screen.RefreshType.DELTA);
+        screen.refresh(now - completeUntil < 0 ? Screen.RefreshType.COMPLETE : Screen.RefreshType.DELTA);
         framesDrawn++;
     }
 

@@ -10,8 +10,8 @@ import java.util.function.Function;
 /**
  * The explorer's background work: one executor with two lanes, at most one live job per kind, each job
  * tagged with the generation of the state that asked for it. The curve has a lane of its own, so a k change
- * never waits behind leave-one-out work; flags and tuning share the other lane, one after the other, so
- * that on a two-core machine one core stays free for the curve and the frame. Starting a job cancels the older one of its kind, and a result
+ * never waits behind leave-one-out work; flags and tuning share the other lane, one after the other (each
+ * job itself runs on all cores, so they would only compete if run side by side). Starting a job cancels the older one of its kind, and a result
  * whose generation is no longer the latest of its kind is dropped by {@link #isCurrent}.
  *
  * <p>Finished jobs post a {@link Done} to the explorer's event queue; progress posts {@link #TICK} at most
@@ -108,6 +108,11 @@ final class Jobs implements AutoCloseable {
             }
             wait(left);
         }
+    }
+
+    /** Whether any job is running or queued. */
+    synchronized boolean busy() {
+        return outstanding > 0;
     }
 
     /** Waits until no job of one kind is running or queued; for benchmarks. */

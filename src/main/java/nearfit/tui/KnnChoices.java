@@ -12,17 +12,18 @@ final class KnnChoices {
     private KnnChoices() {
     }
 
-    /** Worker threads for leave-one-out runs: all processors but one, which stays with the curve and frame. */
-    static final int LONG_THREADS = Math.max(1, THREADS - 1);
-
     static KnnSettings settings(ModelSettings m) {
         return new KnnSettings(m.k(), metric(m.metric()), weighting(m.weighting()), scaling(m.scaling()),
                 band(m.band()), KnnSettings.DEFAULT_FLAG_THRESHOLD, FlagScale.GLOBAL_MAD, THREADS);
     }
 
-    /** The settings for tuning and flags, on {@link #LONG_THREADS} threads. */
+    /**
+     * The settings for tuning and flags: the engine's batch leave-one-out on all {@link #THREADS}. Leaving a
+     * core to the curve halved the flags' speed on two cores, and a frame no longer needs one: a k change
+     * redraws over points binned once.
+     */
     static KnnSettings longSettings(ModelSettings m) {
-        return settings(m).withThreads(LONG_THREADS);
+        return settings(m);
     }
 
     static nearfit.knn.Metric metric(Metric m) {
