@@ -1,15 +1,183 @@
 package nearfit.cli;
 
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.Arrays;
+import java.util.List;
 import java.util.concurrent.Callable;
 
-import nearfit.table.NearfitException;
-import picocli.CommandLine.Command;
+import javax.imageio.ImageIO;
 
-/** Placeholder until the command lands; fails with a clear message rather than pretending. */
-@Command(name = "plot", mixinStandardHelpOptions = true, description = "Not built yet.")
+import nearfit.knn.Curve;
+import nearfit.knn.FlagResult;
+import nearfit.knn.Flags;
+import nearfit.knn.KnnModel;
+import nearfit.knn.ReferenceData;
+import nearfit.model.ModelSettings;
+import nearfit.model.SafeOutput;
+import nearfit.plot.CanvasKind;
+import nearfit.plot.ComposedPlot;
+import nearfit.plot.Palette;
+import nearfit.plot.PngRenderer;
+import nearfit.plot.ScatterComposer;
+import nearfit.plot.Scene;
+import nearfit.plot.TextRenderer;
+import nearfit.table.NearfitException;
+import nearfit.table.Quantiles;
+import nearfit.table.TimeColumn;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code nearfit plot}: the response against the display input with the fitted curve, the band and
+ * the flagged rows, as braille (or ASCII) text on standard output or as a PNG picture. With several
+ * inputs the curve is drawn along the display input with the others held at their medians.
+ */
+@Command(name = "plot", mixinStandardHelpOptions = true, sortOptions = false,
+        description = "Plot the response against the first -x input with the k-nearest-neighbour curve, its band "
+                + "and the flagged rows: text on standard output (braille; plain when not a terminal) or --png.")
 final class PlotCommand implements Callable<Integer> {
+    /** Default text size in cells and picture size in pixels. */
+    static final int[] TEXT_SIZE = {100, 30};
+    static final int[] PNG_SIZE = {1200, 800};
+    /** Curve points across the display input's range. */
+    static final int CURVE_POINTS = 400;
+
+    @Parameters(index = "0", paramLabel = "FILE", description = "CSV file, plain or gzip; - for standard input.")
+    String file;
+
+    @Mixin
+    ColumnOptions columns;
+
+    @Option(names = "--k", paramLabel = "K|auto", defaultValue = "auto",
+            description = "Neighbours per estimate, or auto for the one-SE k of tuning (default: ${DEFAULT-VALUE}).")
+    String k;
+
+    @Option(names = "--size", paramLabel = "WxH",
+            description = "Text: cells (default 100x30); PNG: pixels (default 1200x800).")
+    String size;
+
+    @Option(names = "--ascii", description = "ASCII characters instead of braille.")
+    boolean ascii;
+
+    @Option(names = "--png", paramLabel = "OUT.png", description = "Write a PNG picture instead of text.")
+    Path png;
+
+    @Mixin
+    TuningOptions tuning;
+
+    @Mixin
+    ModelOptions model;
+
+    @Spec
+    CommandSpec spec;
+
     @Override
     public Integer call() {
-        throw new NearfitException("the plot command is not built yet");
+        int chosenK = OptionValues.k("--k", k);
+        int[] dims = size == null ? (png == null ? TEXT_SIZE : PNG_SIZE)
+                : png == null ? OptionValues.size("--size", size, 20, 1000) : OptionValues.size("--size", size, 120, 8000);
+        tuning.validate();
+        List<Path> inputs = "-".equals(file) ? List.of() : List.of(Path.of(file));
+        if (png != null) {
+            SafeOutput.checkTarget(png, model.force, inputs);
+        }
+        PrintWriter err = spec.commandLine().getErr();
+        ReferenceInput input = ReferenceInput.load(file, columns, model, err);
+        Scene scene = scene(input, tuning.fit(input.data(), model.settings(1, ModelSettings.DEFAULT_FLAG_THRESHOLD),
+                chosenK, model.threads(), err, model.quiet).engine());
+        if (png != null) {
+            SafeOutput.write(png, model.force, inputs, out -> {
+                if (!ImageIO.write(PngRenderer.render(scene, dims[0], dims[1]), "png", out)) {
+                    throw new java.io.IOException("no PNG writer in this Java runtime");
+                }
+            });
+            return 0;
+        }
+        ComposedPlot plot = ScatterComposer.compose(scene, dims[0], dims[1], ascii ? CanvasKind.ASCII : CanvasKind.BRAILLE);
+        PrintWriter out = spec.commandLine().getOut();
+        // Escape codes only for a terminal; a pipe or a file gets plain text.
+        out.print(System.console() != null ? TextRenderer.ansi(plot.grid(), Palette.night())
+                : TextRenderer.plain(plot.grid()));
+        out.flush();
+        return 0;
+    }
+
+    private Scene scene(ReferenceInput input, KnnModel engine) {
+        ReferenceData data = engine.data();
+        double[] x = data.input(0);
+        Scene.Builder b = Scene.builder(x, data.isCategory() ? classesAsNumbers(data) : data.response());
+        String title = "k = " + engine.settings().k() + ", " + data.size() + " rows"
+                + (model.where == null ? "" : ", " + model.where.trim());
+        b.labels(title, data.inputNames()[0], data.responseName());
+        if (input.source().table().column(data.inputNames()[0]) instanceof TimeColumn) {
+            b.timeAxis();
+        }
+        if (data.isCategory()) {
+            return b.classes(data.classes()).build();
+        }
+        Curve curve = engine.curve(0, heldAtMedians(data), grid(x), nearfit.knn.Progress.NONE);
+        b.curve(curve.x(), curve.estimates().fit());
+        if (!"none".equals(model.band())) {
+            b.band(curve.x(), curve.estimates().bandLow(), curve.estimates().bandHigh(), Scene.BandStyle.SHADED);
+        }
+        if (data.size() > engine.settings().k() + 1) {
+            FlagResult flags = Flags.leaveOneOut(engine, TerminalProgress.of(spec.commandLine().getErr(),
+                    "flags", model.quiet));
+            b.flags(flaggedOf(x, flags), flaggedOf(data.response(), flags));
+        }
+        return b.build();
+    }
+
+    /** The other inputs held at their medians (Hyndman and Fan definition 7); the display slot is unused. */
+    private static double[] heldAtMedians(ReferenceData data) {
+        double[] held = new double[data.dimensions()];
+        for (int j = 1; j < held.length; j++) {
+            double[] sorted = data.input(j).clone();
+            Arrays.sort(sorted);
+            held[j] = Quantiles.type7(sorted, sorted.length, 0.5);
+        }
+        return held;
+    }
+
+    /** Evenly spaced points over the display input's range. */
+    private static double[] grid(double[] x) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        for (double v : x) {
+            lo = Math.min(lo, v);
+            hi = Math.max(hi, v);
+        }
+        if (!(lo <= hi)) {
+            throw new NearfitException("-x: no rows to plot");
+        }
+        double[] g = new double[CURVE_POINTS];
+        for (int i = 0; i < g.length; i++) {
+            g[i] = lo + (hi - lo) * i / (g.length - 1);
+        }
+        return g;
+    }
+
+    private static double[] flaggedOf(double[] values, FlagResult flags) {
+        double[] out = new double[flags.flaggedCount()];
+        int at = 0;
+        for (int i = 0; i < values.length; i++) {
+            if (flags.flagged()[i]) {
+                out[at++] = values[i];
+            }
+        }
+        return out;
+    }
+
+    private static double[] classesAsNumbers(ReferenceData data) {
+        double[] y = new double[data.size()];
+        for (int i = 0; i < y.length; i++) {
+            y[i] = data.classes()[i];
+        }
+        return y;
     }
 }

@@ -1,15 +1,68 @@
 package nearfit.cli;
 
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.concurrent.Callable;
 
-import nearfit.table.NearfitException;
+import nearfit.model.ModelFile;
+import nearfit.model.ReferenceModel;
+import nearfit.model.RestoredModel;
+import nearfit.model.SafeOutput;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
 
-/** Placeholder until the command lands; fails with a clear message rather than pretending. */
-@Command(name = "predict", mixinStandardHelpOptions = true, description = "Not built yet.")
+/** {@code nearfit predict}: the model's fit and band at every row of a file, as CSV. */
+@Command(name = "predict", mixinStandardHelpOptions = true, sortOptions = false,
+        description = "Write every row of FILE with the model's fit, band_lo and band_hi, and where FILE has the "
+                + "response, resid and z (a category response: the predicted class and its vote share), as CSV "
+                + "keeping the source line number.")
 final class PredictCommand implements Callable<Integer> {
+    @Parameters(index = "0", paramLabel = "MODEL", description = "A model file written by fit.")
+    Path modelFile;
+
+    @Parameters(index = "1", paramLabel = "FILE", description = "CSV file, plain or gzip; - for standard input.")
+    String file;
+
+    @Option(names = "-o", paramLabel = "OUT", description = "Write the CSV here instead of standard output.")
+    Path output;
+
+    @Option(names = "--loo", description = "FILE is the model's own reference file: write leave-one-out "
+            + "predictions of the reference rows instead (band cells empty).")
+    boolean loo;
+
+    @Mixin
+    ModelOptions model;
+
+    @Spec
+    CommandSpec spec;
+
     @Override
     public Integer call() {
-        throw new NearfitException("the predict command is not built yet");
+        model.validate();
+        List<Path> inputs = new ArrayList<>(List.of(modelFile));
+        if (!"-".equals(file)) {
+            inputs.add(Path.of(file));
+        }
+        if (output != null) {
+            SafeOutput.checkTarget(output, model.force, inputs);
+        }
+        ReferenceModel stored = ModelFile.read(modelFile);
+        RestoredModel restored = RestoredModel.of(stored, model.over(stored.settings()), model.threads());
+        PrintWriter out = spec.commandLine().getOut();
+        if (loo) {
+            LeaveOneOutCsv.write(restored, file, output, model.force, inputs, out);
+        } else {
+            ScoredRows scored = ScoredRows.score(restored, file, model, spec.commandLine().getErr());
+            PredictionCsv.write(scored, restored.stored().columns().response(),
+                    restored.stored().columns().responseLabels(), output, model.force, inputs, out, i -> true);
+        }
+        out.flush();
+        return 0;
     }
 }

@@ -1,15 +1,55 @@
 package nearfit.cli;
 
+import java.io.PrintWriter;
 import java.util.concurrent.Callable;
 
-import nearfit.table.NearfitException;
+import nearfit.knn.KnnModel;
+import nearfit.model.EngineSettings;
+import nearfit.model.ReferenceCapture;
+import nearfit.model.TuningSummary;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
 
-/** Placeholder until the command lands; fails with a clear message rather than pretending. */
-@Command(name = "tune", mixinStandardHelpOptions = true, description = "Not built yet.")
+/** {@code nearfit tune}: RMSE and MAE with standard errors for every k, the lowest-RMSE k and the one-SE k. */
+@Command(name = "tune", mixinStandardHelpOptions = true, sortOptions = false,
+        description = "Choose k by cross-validation: error figures for every k from 1 to --kmax, "
+                + "the lowest-RMSE k and the one-SE k (the largest k within one standard error of the best).")
 final class TuneCommand implements Callable<Integer> {
+    @Parameters(index = "0", paramLabel = "FILE", description = "CSV file, plain or gzip; - for standard input.")
+    String file;
+
+    @Mixin
+    ColumnOptions columns;
+
+    @Mixin
+    TuningOptions tuning;
+
+    @Option(names = "--format", paramLabel = "table|csv|json", defaultValue = "table",
+            description = "Output format (default: ${DEFAULT-VALUE}).")
+    String format;
+
+    @Mixin
+    ModelOptions model;
+
+    @Spec
+    CommandSpec spec;
+
     @Override
     public Integer call() {
-        throw new NearfitException("the tune command is not built yet");
+        TuneReport.Format f = TuneReport.Format.valueOf(OptionValues.oneOf("--format", format,
+                java.util.List.of("table", "csv", "json")).toUpperCase(java.util.Locale.ROOT));
+        tuning.validate();
+        PrintWriter err = spec.commandLine().getErr();
+        ReferenceInput input = ReferenceInput.load(file, columns, model, err);
+        KnnModel engine = KnnModel.fit(input.data(), EngineSettings.of(model.settings(1,
+                nearfit.model.ModelSettings.DEFAULT_FLAG_THRESHOLD), model.threads()));
+        TuningOptions.Result r = tuning.run(engine, TerminalProgress.of(err, "tuning", model.quiet));
+        TuningSummary summary = ReferenceCapture.summary(r.table(), r.sampled());
+        TuneReport.write(summary, f, spec.commandLine().getOut());
+        return 0;
     }
 }

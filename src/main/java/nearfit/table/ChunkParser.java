@@ -43,6 +43,7 @@ final class ChunkParser {
     ChunkResult parse(InputStream in, long start, long stopAt, long firstLine) {
         ChunkResult r = new ChunkResult(layout, firstLine);
         RowTokenizer tok = new RowTokenizer(layout.delimiter());
+        PlainRowReader plain = new PlainRowReader(layout);
         byte[] buf = new byte[BUFFER_BYTES];
         long bufOffset = start;
         int pos = 0;
@@ -79,6 +80,13 @@ final class ChunkParser {
             while (true) {
                 if (bufOffset + pos >= stopAt) {
                     return r.end(bufOffset + pos, line);
+                }
+                int fast = plain.read(buf, pos, limit);
+                if (fast >= 0) {
+                    r.plainRow(buf, plain, line);
+                    line++;
+                    pos = fast;
+                    continue;
                 }
                 int next = tok.next(buf, pos, limit, eof);
                 if (next == RowTokenizer.END) {

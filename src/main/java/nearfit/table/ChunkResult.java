@@ -94,6 +94,26 @@ final class ChunkResult {
         lines.add(line);
     }
 
+    /** Adds the row {@code reader} just accepted, which starts on {@code line}. */
+    void plainRow(byte[] b, PlainRowReader reader, long line) {
+        for (int j = 0; j < columns.length; j++) {
+            ColumnBuilder c = columns[j];
+            if (layout.types()[j] == ColumnType.NUMBER) {
+                c.addNumber(reader.values[j]);
+                continue;
+            }
+            int s = reader.starts[j];
+            int e = reader.ends[j];
+            if (e - s > scratch.length) {
+                scratch = new byte[Math.max(e - s, 2 * scratch.length)];
+            }
+            if (!c.add(b, s, e, layout.decimalComma(), scratch, false)) {
+                keepBad(line, j, b, s, e);
+            }
+        }
+        lines.add(line);
+    }
+
     private void ragged(int n, int width, long line) {
         if (n < width) {
             shortRows++;

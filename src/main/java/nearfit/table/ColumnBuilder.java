@@ -39,6 +39,12 @@ final class ColumnBuilder {
         }
     }
 
+    /** Adds a number already read (by {@link PlainRowReader}); only for a number column. */
+    void addNumber(double v) {
+        size++;
+        numbers.add(v);
+    }
+
     /**
      * Adds the cell {@code b[s..e)}.
      *

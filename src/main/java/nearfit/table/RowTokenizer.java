@@ -64,13 +64,7 @@ final class RowTokenizer {
                 quoteEnd = q + 1;
                 p = quoteEnd;
             }
-            while (p < limit) {
-                byte c = b[p];
-                if (c == d || c == '\n') {
-                    break;
-                }
-                p++;
-            }
+            p = FieldScan.next(b, p, limit, d);
             if (p >= limit && !eof) {
                 return NEED_MORE;
             }
@@ -98,7 +92,7 @@ final class RowTokenizer {
      * quote is the last byte available (closing at the end of input, or the first of a doubled pair).
      */
     private int closingQuote(byte[] b, int p, int limit) {
-        while (p < limit) {
+        while ((p = FieldScan.nextQuoteOrNewline(b, p, limit)) < limit) {
             byte c = b[p];
             if (c == '"') {
                 if (p + 1 >= limit) {

@@ -8,12 +8,19 @@ import nearfit.table.Table;
 
 /**
  * The nearfit side of scripts/bench-load: loads one file {@code warmup + reps} times and prints the
- * median seconds of the timed repetitions, the row count and the threads used.
+ * median seconds of the timed repetitions, the row count, the threads used and the median process CPU
+ * seconds per load (all threads, GC included; steadier than wall time on a busy machine).
  *
  * <p>Usage: {@code LoadBench FILE [REPS [WARMUP [THREADS]]]}.
  */
 public final class LoadBench {
     private LoadBench() {
+    }
+
+    private static double median(double[] v) {
+        Arrays.sort(v);
+        int n = v.length;
+        return n % 2 == 1 ? v[n / 2] : (v[n / 2 - 1] + v[n / 2]) / 2;
     }
 
     public static void main(String[] args) {
@@ -26,18 +33,23 @@ public final class LoadBench {
         }
         LoadOptions options = b.build();
         double[] secs = new double[reps];
+        double[] cpu = new double[reps];
+        com.sun.management.OperatingSystemMXBean os = (com.sun.management.OperatingSystemMXBean)
+                java.lang.management.ManagementFactory.getOperatingSystemMXBean();
         int rows = 0;
         for (int i = -warmup; i < reps; i++) {
+            long c0 = os.getProcessCpuTime();
             long t0 = System.nanoTime();
             Table t = CsvLoader.load(file, options);
             long t1 = System.nanoTime();
+            long c1 = os.getProcessCpuTime();
             rows = t.rowCount();
             if (i >= 0) {
                 secs[i] = (t1 - t0) / 1e9;
+                cpu[i] = (c1 - c0) / 1e9;
             }
         }
-        Arrays.sort(secs);
-        double median = reps % 2 == 1 ? secs[reps / 2] : (secs[reps / 2 - 1] + secs[reps / 2]) / 2;
-        System.out.printf("median_s=%.4f rows=%d threads=%d reps=%d%n", median, rows, options.threads(), reps);
+        System.out.printf("median_s=%.4f rows=%d threads=%d reps=%d cpu_s=%.4f%n", median(secs), rows,
+                options.threads(), reps, median(cpu));
     }
 }

@@ -1,0 +1,158 @@
+package nearfit.cli;
+
+import java.io.PrintWriter;
+import java.util.ArrayList;
+import java.util.List;
+
+import nearfit.knn.ClassVote;
+import nearfit.knn.Estimates;
+import nearfit.knn.KnnModel;
+import nearfit.knn.Searcher;
+import nearfit.model.ModelColumns;
+import nearfit.model.ReferenceModel;
+import nearfit.model.RestoredModel;
+import nearfit.table.CategoryColumn;
+import nearfit.table.Column;
+import nearfit.table.NearfitException;
+import nearfit.table.NumericColumn;
+import nearfit.table.RowSet;
+
+/**
+ * New rows scored against a model: the rows of a file that meet the row condition, the engine's
+ * estimates at them, and where the file has the response, residuals and z.
+ *
+ * <p>z of a new row depends on the model's z scale. {@code local} (the default):
+ * {@code resid / s} with s the weighted SD of the k neighbours' responses at the row, so a row is
+ * judged by the spread of the reference where it lies (power residuals are near zero below cut-in
+ * and at rated power, and large in between). {@code reference}: {@code (resid - median) / scale}
+ * with the median and 1.4826·MAD of the reference's leave-one-out residuals stored in the model (the
+ * modified z-score of Iglewicz and Hoaglin 1993, on the reference's scale). A zero scale gives z = 0
+ * for a zero (centred) residual and an infinite z otherwise, as the engine's flags do. Rows with a
+ * missing input or response get NaN.
+ *
+ * @param source      the file scored
+ * @param rows        the table rows scored, ascending
+ * @param inputs      the model's input columns in the file
+ * @param response    the response values, or {@code null} when the file lacks the response column
+ *                    or the response is a category
+ * @param estimates   fit and band at each row (number response), or {@code null}
+ * @param classes     the predicted class code at each row (category response), or {@code null}
+ * @param shares      the vote share of the predicted class (category response), or {@code null}
+ * @param actualClass the file's class code mapped to the model's dictionary (-1 unknown), or {@code null}
+ * @param z           z at each row, or {@code null} without a number response
+ * @param group       the model's group column in the file, or {@code null}
+ */
+record ScoredRows(SourceTable source, RowSet rows, List<NumericColumn> inputs, double[] response,
+                  Estimates estimates, int[] classes, double[] shares, int[] actualClass, double[] z,
+                  CategoryColumn group) {
+
+    /** Loads {@code file} and scores its rows (those meeting {@code where}) against {@code model}. */
+    static ScoredRows score(RestoredModel model, String file, ModelOptions options, PrintWriter err) {
+        ReferenceModel stored = model.stored();
+        ModelColumns columns = stored.columns();
+        // Every column is kept: the response and the group may be absent, and --where may name any column.
+        SourceTable source = SourceTable.load(file, List.of(), options.threads(), options.quiet, err);
+        RowSet rows = source.rows(options.where);
+        List<NumericColumn> inputs = new ArrayList<>();
+        double[][] x = new double[columns.inputs().size()][];
+        for (int j = 0; j < x.length; j++) {
+            String name = columns.inputs().get(j);
+            if (!source.table().hasColumn(name)) {
+                throw NearfitException.inFile(file, "has no column \"" + name + "\", an input of the model (columns: "
+                        + String.join(", ", source.table().names()) + ")");
+            }
+            inputs.add(source.numeric("model input", name));
+            x[j] = SourceTable.values(inputs.get(j), rows);
+        }
+        CategoryColumn group = groupColumn(source, columns.group());
+        boolean hasResponse = source.table().hasColumn(columns.response());
+        if (columns.categoryResponse()) {
+            return classify(model, source, rows, inputs, x, hasResponse, group);
+        }
+        double[] y = hasResponse ? SourceTable.values(source.numeric("model response", columns.response()), rows)
+                : null;
+        TerminalProgress progress = TerminalProgress.of(err, "scoring", options.quiet);
+        Estimates est = model.engine().estimateAll(x, progress);
+        progress.done();
+        double[] z = y == null ? null : "local".equals(model.settings().zScale())
+                ? localZ(y, est.fit(), est.localSd()) : zScores(y, est.fit(), stored.residualScale());
+        return new ScoredRows(source, rows, inputs, y, est, null, null, null, z, group);
+    }
+
+    /** z of each residual on the stored scale; NaN where the response or the fit is missing. */
+    static double[] zScores(double[] y, double[] fit, ReferenceModel.ResidualScale scale) {
+        double[] z = new double[y.length];
+        double median = scale.median();
+        double s = scale.scale();
+        for (int i = 0; i < y.length; i++) {
+            z[i] = scaled(y[i] - fit[i] - median, s);
+        }
+        return z;
+    }
+
+    /** z of each residual on the neighbours' SD at its row; NaN where the response or the fit is missing. */
+    static double[] localZ(double[] y, double[] fit, double[] localSd) {
+        double[] z = new double[y.length];
+        for (int i = 0; i < y.length; i++) {
+            z[i] = scaled(y[i] - fit[i], localSd[i]);
+        }
+        return z;
+    }
+
+    private static double scaled(double e, double s) {
+        if (Double.isNaN(e)) {
+            return Double.NaN;
+        }
+        if (s > 0) {
+            return e / s;
+        }
+        return e == 0 ? 0 : Math.copySign(Double.POSITIVE_INFINITY, e);
+    }
+
+    private static ScoredRows classify(RestoredModel model, SourceTable source, RowSet rows,
+                                       List<NumericColumn> inputs, double[][] x, boolean hasResponse,
+                                       CategoryColumn group) {
+        KnnModel engine = model.engine();
+        Searcher searcher = engine.searcher();
+        int n = rows.size();
+        int[] classes = new int[n];
+        double[] shares = new double[n];
+        double[] point = new double[x.length];
+        for (int i = 0; i < n; i++) {
+            boolean missing = false;
+            for (int j = 0; j < x.length; j++) {
+                point[j] = x[j][i];
+                missing |= Double.isNaN(point[j]);
+            }
+            if (missing) {
+                classes[i] = -1;
+                shares[i] = Double.NaN;
+                continue;
+            }
+            ClassVote vote = searcher.vote(point);
+            classes[i] = vote.winner();
+            shares[i] = vote.shares()[vote.winner()];
+        }
+        int[] actual = hasResponse ? actualClasses(model, source, rows) : null;
+        return new ScoredRows(source, rows, inputs, null, null, classes, shares, actual, null, group);
+    }
+
+    private static int[] actualClasses(RestoredModel model, SourceTable source, RowSet rows) {
+        ModelColumns columns = model.stored().columns();
+        CategoryColumn c = source.category("model response", columns.response());
+        int[] out = new int[rows.size()];
+        for (int i = 0; i < out.length; i++) {
+            int row = rows.row(i);
+            out[i] = c.code(row) < 0 ? -1 : columns.responseLabels().indexOf(c.label(row));
+        }
+        return out;
+    }
+
+    private static CategoryColumn groupColumn(SourceTable source, String group) {
+        if (group == null || !source.table().hasColumn(group)) {
+            return null;
+        }
+        Column c = source.table().column(group);
+        return c instanceof CategoryColumn cat ? cat : null;
+    }
+}

@@ -1,0 +1,188 @@
+package nearfit.cli;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.HexFormat;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
+
+import nearfit.table.CategoryColumn;
+import nearfit.table.Column;
+import nearfit.table.CsvLoader;
+import nearfit.table.LoadOptions;
+import nearfit.table.NearfitException;
+import nearfit.table.NumericColumn;
+import nearfit.table.RowSet;
+import nearfit.table.Table;
+
+/**
+ * A CSV source as a command reads it: the loaded table, the file's size and its SHA-256 (computed on
+ * another thread while the table loads; none for standard input), and column look-ups whose
+ * messages name the option, the column and the file, listing the columns there are.
+ */
+final class SourceTable {
+    private final String name;
+    private final Table table;
+    private final long sizeBytes;
+    private final CompletableFuture<String> sha256;
+
+    private SourceTable(String name, Table table, long sizeBytes, CompletableFuture<String> sha256) {
+        this.name = name;
+        this.table = table;
+        this.sizeBytes = sizeBytes;
+        this.sha256 = sha256;
+    }
+
+    /**
+     * Loads {@code name} ({@code -} for standard input). {@code keep} lists the columns needed, or is
+     * empty to keep every column (needed when a row condition may name any column).
+     */
+    static SourceTable load(String name, List<String> keep, int threads, boolean quiet, PrintWriter err) {
+        return load(name, keep, column -> "column", threads, quiet, err);
+    }
+
+    /**
+     * As {@link #load(String, List, int, boolean, PrintWriter)}; {@code optionOf} names the option
+     * that asked for a kept column, for the message when the file lacks it.
+     */
+    static SourceTable load(String name, List<String> keep, java.util.function.UnaryOperator<String> optionOf,
+                            int threads, boolean quiet, PrintWriter err) {
+        boolean stdin = "-".equals(name);
+        Path path = stdin ? null : Path.of(name);
+        if (!stdin && !Files.isRegularFile(path)) {
+            throw NearfitException.inFile(name, Files.isDirectory(path) ? "is a folder, not a CSV file" : "no such file");
+        }
+        CompletableFuture<String> sha = stdin ? CompletableFuture.completedFuture(null)
+                : CompletableFuture.supplyAsync(() -> sha256Of(path, name));
+        LoadOptions options = LoadOptions.builder().threads(threads).keepColumns(keep).build();
+        long start = System.nanoTime();
+        Table table;
+        try {
+            table = CsvLoader.load(name, options);
+        } catch (NearfitException e) {
+            throw unknownKeptColumn(e, name, keep, optionOf);
+        }
+        long size = stdin ? -1 : sizeOf(path, name);
+        if (!quiet) {
+            err.printf(Locale.ROOT, "nearfit: read %d rows from %s in %.1f s%n", table.rowCount(), name,
+                    (System.nanoTime() - start) / 1e9);
+            err.flush();
+        }
+        return new SourceTable(name, table, size, sha);
+    }
+
+    /**
+     * The loader refuses a kept column the file lacks, naming the column and listing the others;
+     * restates that in the commands' form, naming the option.
+     */
+    private static NearfitException unknownKeptColumn(NearfitException e, String name, List<String> keep,
+                                                      java.util.function.UnaryOperator<String> optionOf) {
+        String marker = "the columns are ";
+        int at = e.detail().indexOf(marker);
+        if (e.column() == null || !keep.contains(e.column()) || at < 0) {
+            return e;
+        }
+        return new NearfitException(optionOf.apply(e.column()) + ": no column \"" + e.column() + "\" in " + name
+                + " (columns: " + e.detail().substring(at + marker.length()) + ")");
+    }
+
+    String name() {
+        return name;
+    }
+
+    Table table() {
+        return table;
+    }
+
+    /** The file's size in bytes, or -1 for standard input. */
+    long sizeBytes() {
+        return sizeBytes;
+    }
+
+    /** The file's SHA-256 in lower-case hex, or {@code null} for standard input; waits for it. */
+    String sha256() {
+        try {
+            return sha256.join();
+        } catch (CompletionException e) {
+            throw e.getCause() instanceof NearfitException ne ? ne : e;
+        }
+    }
+
+    /** The rows meeting the row condition, or every row when it is {@code null}. */
+    RowSet rows(String where) {
+        if (where == null || where.isBlank()) {
+            return table.allRows();
+        }
+        try {
+            return table.where(where);
+        } catch (NearfitException e) {
+            throw new NearfitException("--where: " + e.getMessage());
+        }
+    }
+
+    /** The column named by {@code option}, failing with the file's column list when there is none. */
+    Column column(String option, String column) {
+        if (!table.hasColumn(column)) {
+            throw new NearfitException(option + ": no column \"" + column + "\" in " + name + " (columns: "
+                    + String.join(", ", table.names()) + ")");
+        }
+        return table.column(column);
+    }
+
+    /** A number or time column. */
+    NumericColumn numeric(String option, String column) {
+        Column c = column(option, column);
+        if (!(c instanceof NumericColumn n)) {
+            throw new NearfitException(option + ": column \"" + column + "\" in " + name + " is a "
+                    + c.type().label() + " column, not a number or time");
+        }
+        return n;
+    }
+
+    /** A category column. */
+    CategoryColumn category(String option, String column) {
+        Column c = column(option, column);
+        if (!(c instanceof CategoryColumn cat)) {
+            throw new NearfitException(option + ": column \"" + column + "\" in " + name + " is a "
+                    + c.type().label() + " column, not a category");
+        }
+        return cat;
+    }
+
+    /** The values of a numeric column at the given rows, as a new array (times as epoch ms). */
+    static double[] values(NumericColumn column, RowSet rows) {
+        double[] out = new double[rows.size()];
+        column.copyValues(rows, out, 0);
+        return out;
+    }
+
+    private static long sizeOf(Path path, String name) {
+        try {
+            return Files.size(path);
+        } catch (IOException e) {
+            throw NearfitException.inFile(name, "cannot read: " + e.getMessage(), e);
+        }
+    }
+
+    static String sha256Of(Path path, String name) {
+        try (InputStream in = Files.newInputStream(path)) {
+            MessageDigest digest = MessageDigest.getInstance("SHA-256");
+            byte[] buffer = new byte[1 << 16];
+            for (int n = in.read(buffer); n >= 0; n = in.read(buffer)) {
+                digest.update(buffer, 0, n);
+            }
+            return HexFormat.of().formatHex(digest.digest());
+        } catch (IOException e) {
+            throw NearfitException.inFile(name, "cannot read: " + e.getMessage(), e);
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("every Java runtime has SHA-256", e);
+        }
+    }
+}

@@ -1,0 +1,93 @@
+package nearfit.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.util.Locale;
+
+import nearfit.model.CsvCells;
+import nearfit.model.Json;
+import nearfit.model.TuningSummary;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVPrinter;
+
+/** Writes a tuning table as an aligned text table, CSV or JSON. */
+final class TuneReport {
+    /** The output formats of {@code tune --format}. */
+    enum Format { TABLE, CSV, JSON }
+
+    private TuneReport() {
+    }
+
+    static void write(TuningSummary t, Format format, PrintWriter out) {
+        switch (format) {
+            case JSON -> out.println(Json.write(t.toJson()));
+            case CSV -> writeCsv(t, out);
+            default -> writeTable(t, out);
+        }
+        out.flush();
+    }
+
+    private static String[] header(TuningSummary t) {
+        return t.forCategories() ? new String[] {"k", "error_rate", "error_rate_se"}
+                : new String[] {"k", "rmse", "rmse_se", "mae", "press", "r2_pred"};
+    }
+
+    private static double[] row(TuningSummary t, int i) {
+        return t.forCategories() ? new double[] {t.errorRate()[i], t.errorRateSe()[i]}
+                : new double[] {t.rmse()[i], t.rmseSe()[i], t.mae()[i], t.press()[i], t.r2Pred()[i]};
+    }
+
+    private static void writeCsv(TuningSummary t, PrintWriter out) {
+        try {
+            CSVPrinter csv = new CSVPrinter(out, CSVFormat.RFC4180);
+            csv.printRecord((Object[]) header(t));
+            String[] cells = new String[header(t).length];
+            for (int i = 0; i < t.k().length; i++) {
+                cells[0] = Integer.toString(t.k()[i]);
+                double[] v = row(t, i);
+                for (int j = 0; j < v.length; j++) {
+                    cells[j + 1] = CsvCells.number(v[j]);
+                }
+                csv.printRecord((Object[]) cells);
+            }
+            csv.flush();
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+    }
+
+    private static void writeTable(TuningSummary t, PrintWriter out) {
+        String[] names = t.forCategories() ? new String[] {"k", "error rate", "SE"}
+                : new String[] {"k", "RMSE", "RMSE SE", "MAE", "PRESS", "pred R2"};
+        StringBuilder line = new StringBuilder();
+        for (String name : names) {
+            line.append(String.format(Locale.ROOT, "%12s", name));
+        }
+        out.println(line.toString().stripTrailing());
+        for (int i = 0; i < t.k().length; i++) {
+            line.setLength(0);
+            line.append(String.format(Locale.ROOT, "%12d", t.k()[i]));
+            for (double v : row(t, i)) {
+                line.append(String.format(Locale.ROOT, "%12s", significant(v)));
+            }
+            String mark = (t.k()[i] == t.bestK() ? " best" : "") + (t.k()[i] == t.oneSeK() ? " one-SE" : "");
+            out.println(line + mark);
+        }
+        out.printf(Locale.ROOT, "rows %d%s; lowest %s at k = %d; one-SE k = %d%n", t.rows(),
+                t.sampled() < 0 ? "" : " (leave-one-out on a sample of " + t.sampled() + ")",
+                t.forCategories() ? "error rate" : "RMSE", t.bestK(), t.oneSeK());
+    }
+
+    /** Five significant digits, no exponent for ordinary magnitudes; NaN as a dash. */
+    static String significant(double v) {
+        if (!Double.isFinite(v)) {
+            return "-";
+        }
+        double a = Math.abs(v);
+        if (a != 0 && (a >= 1e7 || a < 1e-4)) {
+            return String.format(Locale.ROOT, "%.4e", v);
+        }
+        return new java.math.BigDecimal(v).round(new java.math.MathContext(5)).stripTrailingZeros()
+                .toPlainString();
+    }
+}

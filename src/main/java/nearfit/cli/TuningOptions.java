@@ -1,0 +1,97 @@
+package nearfit.cli;
+
+import nearfit.knn.KnnModel;
+import nearfit.knn.Tuning;
+import nearfit.knn.TuningTable;
+import nearfit.table.NearfitException;
+import picocli.CommandLine.Option;
+
+/** How k is tuned: {@code --kmax}, {@code --cv loo|FOLDS}, {@code --sample M} (a picocli mixin). */
+final class TuningOptions {
+    /** The largest k tried by default (fewer when the reference has fewer rows). */
+    static final int DEFAULT_KMAX = 50;
+
+    @Option(names = "--kmax", paramLabel = "N", description = "Largest k tried (default: 50, at most rows - 1).")
+    String kmax;
+
+    @Option(names = "--cv", paramLabel = "loo|FOLDS", defaultValue = "loo",
+            description = "Cross-validation: loo (leave-one-out) or a number of folds (default: ${DEFAULT-VALUE}).")
+    String cv;
+
+    @Option(names = "--sample", paramLabel = "M",
+            description = "Leave-one-out on M rows chosen at random (seeded); by default "
+                    + Tuning.DEFAULT_SAMPLE + " rows above " + Tuning.SAMPLE_ABOVE + ".")
+    String sample;
+
+    /** The folds of k-fold cross-validation, or 0 for leave-one-out. */
+    int folds() {
+        if (cv.trim().equalsIgnoreCase("loo")) {
+            return 0;
+        }
+        int folds = OptionValues.positive("--cv", cv, "loo or a number of folds of at least 2");
+        if (folds < 2) {
+            throw new NearfitException("--cv: \"" + cv + "\" is not loo or a number of folds of at least 2");
+        }
+        return folds;
+    }
+
+    /** Checks the values before any file is read. */
+    void validate() {
+        folds();
+        if (kmax != null) {
+            OptionValues.positive("--kmax", kmax, "a whole number of at least 1");
+        }
+        if (sample != null) {
+            OptionValues.positive("--sample", sample, "a whole number of at least 1");
+            if (folds() > 0) {
+                throw new NearfitException("--sample: applies to leave-one-out, not to --cv " + cv);
+            }
+        }
+    }
+
+    /** The tuning table over the model's reference rows, and the rows sampled (or -1). */
+    Result run(KnnModel model, TerminalProgress progress) {
+        int n = model.data().size();
+        if (n < 2) {
+            throw new NearfitException("tuning needs at least 2 reference rows, not " + n);
+        }
+        int max = Math.min(kmax == null ? DEFAULT_KMAX : OptionValues.positive("--kmax", kmax, ""), n - 1);
+        int folds = folds();
+        TuningTable t;
+        if (folds > 0) {
+            t = Tuning.kFold(model, max, folds, Tuning.DEFAULT_SEED, progress);
+        } else if (sample != null) {
+            int m = OptionValues.positive("--sample", sample, "");
+            t = Tuning.leaveOneOut(model, max, m, Tuning.DEFAULT_SEED, progress);
+        } else {
+            t = Tuning.leaveOneOut(model, max, progress);
+        }
+        progress.done();
+        long sampled = t.evaluatedRows() < t.referenceRows() ? t.evaluatedRows() : -1;
+        return new Result(t, sampled);
+    }
+
+    /**
+     * Fits the engine with the given k, or with {@code k = auto} ({@link OptionValues#K_AUTO}) tunes
+     * and refits with the one-SE k; {@code words} carries every other setting.
+     */
+    Fitted fit(nearfit.knn.ReferenceData data, nearfit.model.ModelSettings words, int chosenK, int threads,
+               java.io.PrintWriter err, boolean quiet) {
+        boolean auto = chosenK == OptionValues.K_AUTO;
+        nearfit.knn.KnnSettings settings = nearfit.model.EngineSettings.of(words.withK(auto ? 1 : chosenK), threads);
+        KnnModel engine = KnnModel.fit(data, settings);
+        if (!auto) {
+            return new Fitted(engine, null);
+        }
+        Result tuned = run(engine, TerminalProgress.of(err, "tuning", quiet));
+        return new Fitted(engine.withSettings(settings.withK(tuned.table().oneSeK())), tuned);
+    }
+
+    /** A fitted engine and its tuning, {@code null} when k was given. */
+    record Fitted(KnnModel engine, Result tuned) {
+    }
+
+    /** A tuning table and the sample size (-1 when every row was evaluated). */
+    record Result(TuningTable table, long sampled) {
+    }
+}

@@ -1,0 +1,80 @@
+package nearfit.model;
+
+import java.time.Instant;
+import java.util.List;
+import java.util.function.IntToLongFunction;
+import java.util.function.IntUnaryOperator;
+
+import nearfit.knn.FlagResult;
+import nearfit.knn.InputTransform;
+import nearfit.knn.KnnModel;
+import nearfit.knn.ReferenceData;
+import nearfit.knn.TuningTable;
+
+/**
+ * Turns a fitted engine model into the {@link ReferenceModel} a model file stores: the engine's kept
+ * reference rows in its canonical order, with each row's source line and group code looked up by its
+ * table row id.
+ */
+public final class ReferenceCapture {
+    private ReferenceCapture() {
+    }
+
+    /**
+     * @param engine         the fitted model
+     * @param loo            its leave-one-out flags (for the residual scale), or {@code null} for a
+     *                       category response
+     * @param tuning         the tuning table when k was tuned, or {@code null}
+     * @param sampled        rows in a sampled leave-one-out, or -1
+     * @param responseLabels the class labels of a category response, or empty
+     * @param group          the group column name, or {@code null}
+     * @param groupLabels    its labels, or empty
+     * @param groupOfRow     table row id to group code (-1 missing); unused without a group
+     * @param lineOfRow      table row id to 1-based source line
+     */
+    public static ReferenceModel capture(String toolVersion, SourceInfo source, KnnModel engine, FlagResult loo,
+                                         TuningTable tuning, long sampled, List<String> responseLabels,
+                                         String group, List<String> groupLabels, IntUnaryOperator groupOfRow,
+                                         IntToLongFunction lineOfRow) {
+        ReferenceData data = engine.data();
+        int n = data.size();
+        int[] ids = data.rowIds();
+        long[] lines = new long[n];
+        int[] groups = group == null ? null : new int[n];
+        for (int i = 0; i < n; i++) {
+            lines[i] = lineOfRow.applyAsLong(ids[i]);
+            if (groups != null) {
+                groups[i] = groupOfRow.applyAsInt(ids[i]);
+            }
+        }
+        double[][] inputs = new double[data.dimensions()][];
+        for (int j = 0; j < inputs.length; j++) {
+            inputs[j] = data.input(j);
+        }
+        ReferenceRows rows = new ReferenceRows(inputs, data.isCategory() ? null : data.response(),
+                data.isCategory() ? data.classes() : null, groups, lines);
+        ModelColumns columns = new ModelColumns(List.of(data.inputNames()), data.responseName(), responseLabels,
+                group, groupLabels);
+        InputTransform t = engine.transform();
+        ReferenceModel.ResidualScale residual = loo == null
+                ? new ReferenceModel.ResidualScale(Double.NaN, Double.NaN)
+                : new ReferenceModel.ResidualScale(loo.median(), loo.mad());
+        return new ReferenceModel(toolVersion, Instant.now(), source, columns, EngineSettings.words(engine.settings()),
+                t.center(), t.scale(), t.whitening(), residual,
+                tuning == null ? null : summary(tuning, sampled), rows);
+    }
+
+    /** The tune command's table of an engine tuning result; k runs from 1 to kmax. */
+    public static TuningSummary summary(TuningTable t, long sampled) {
+        int[] k = new int[t.kmax()];
+        for (int i = 0; i < k.length; i++) {
+            k[i] = i + 1;
+        }
+        boolean categories = !Double.isNaN(t.errorRate()[0]);
+        return new TuningSummary(t.referenceRows(), k,
+                categories ? null : t.rmse(), categories ? null : t.rmseSe(), categories ? null : t.mae(),
+                categories ? null : t.press(), categories ? null : t.predictedR2(),
+                categories ? t.errorRate() : null, categories ? t.errorRateSe() : null,
+                t.bestK(), t.oneSeK(), sampled);
+    }
+}

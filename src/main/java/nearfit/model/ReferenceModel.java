@@ -1,0 +1,62 @@
+package nearfit.model;
+
+import java.time.Instant;
+
+/**
+ * Everything a model file holds: where the reference came from, its columns and settings, the
+ * scaling and residual scale fitted on it, the tuning table when k was tuned, and the reference rows.
+ *
+ * <p>The stored rows are the full reference, so {@code predict} and {@code check} rebuild the index
+ * from them and get exactly the estimates of the model that was saved; the scaling parameters and the
+ * residual scale are stored too so that they need not be recomputed and can be read by people.
+ *
+ * @param toolVersion   the nearfit version that wrote the file
+ * @param created       when the model was fitted (written in ISO 8601, UTC)
+ * @param source        the source file and the row condition
+ * @param columns       input, response and group columns
+ * @param settings      metric, weights, scaling, k, band and flag threshold
+ * @param scaleCenter   per input, the value subtracted before scaling (input units)
+ * @param scaleSpread   per input, the divisor after centring (input units); 1 for no scaling
+ * @param whitening     for the Mahalanobis metric, the d×d row-major lower-triangular matrix applied
+ *                      to the scaled inputs; {@code null} for the other metrics
+ * @param residualScale the reference's leave-one-out residual centre and scale for z
+ * @param tuning        the tuning table when k was tuned, or {@code null}
+ * @param rows          the reference rows
+ */
+public record ReferenceModel(String toolVersion, Instant created, SourceInfo source, ModelColumns columns,
+                             ModelSettings settings, double[] scaleCenter, double[] scaleSpread,
+                             double[] whitening,
+                             ResidualScale residualScale, TuningSummary tuning, ReferenceRows rows) {
+    /** Checks that the parts agree with each other. */
+    public ReferenceModel {
+        int inputs = columns.inputs().size();
+        if (rows.inputs().length != inputs || scaleCenter.length != inputs || scaleSpread.length != inputs) {
+            throw new IllegalArgumentException("the model has " + inputs
+                    + " inputs but the rows or the scaling disagree");
+        }
+        if (whitening != null && whitening.length != inputs * inputs) {
+            throw new IllegalArgumentException("the whitening matrix needs " + inputs * inputs + " values");
+        }
+        if (columns.categoryResponse() != (rows.responseCodes() != null)) {
+            throw new IllegalArgumentException("the response kind of the columns and of the rows differ");
+        }
+        if ((columns.group() == null) != (rows.groupCodes() == null)) {
+            throw new IllegalArgumentException("a group column needs group codes, and only then");
+        }
+        if (settings.k() > rows.size()) {
+            throw new IllegalArgumentException("k = " + settings.k() + " is more than the "
+                    + rows.size() + " reference rows");
+        }
+    }
+
+    /**
+     * The centre and scale of the reference's leave-one-out residuals: median and 1.4826·MAD (the
+     * MAD scaled to estimate a normal distribution's standard deviation; Iglewicz and Hoaglin 1993).
+     * For a category response both are NaN.
+     *
+     * @param median the median leave-one-out residual (response units)
+     * @param scale  1.4826 times the median absolute deviation (response units)
+     */
+    public record ResidualScale(double median, double scale) {
+    }
+}

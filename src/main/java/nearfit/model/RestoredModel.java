@@ -1,0 +1,52 @@
+package nearfit.model;
+
+import nearfit.knn.InputTransform;
+import nearfit.knn.KnnModel;
+import nearfit.knn.ReferenceData;
+import nearfit.knn.Scaling;
+
+/**
+ * A model file's contents with the engine model rebuilt from its stored rows, scaling and settings,
+ * ready to estimate at new rows. The engine's row ids are positions in the stored rows, so
+ * {@code stored.rows().sourceLines()[engine.data().rowIds()[i]]} is the line of engine row i.
+ *
+ * @param stored the model file's contents
+ * @param engine the engine model
+ */
+public record RestoredModel(ReferenceModel stored, KnnModel engine) {
+    /**
+     * As {@link #of(ReferenceModel, int)}, then with other settings: a change of k, weights, band or
+     * z scale keeps the index; a change of metric or scaling refits them on the stored rows.
+     */
+    public static RestoredModel of(ReferenceModel stored, ModelSettings settings, int threads) {
+        RestoredModel r = of(stored, threads);
+        if (settings.equals(stored.settings())) {
+            return r;
+        }
+        return new RestoredModel(stored, r.engine().withSettings(EngineSettings.of(settings, threads)));
+    }
+
+    /** The settings in effect, in words. */
+    public ModelSettings settings() {
+        return EngineSettings.words(engine.settings());
+    }
+
+    /** Rebuilds the index from the stored rows, with the stored scaling (not refitted). */
+    public static RestoredModel of(ReferenceModel stored, int threads) {
+        ReferenceRows rows = stored.rows();
+        String[] names = stored.columns().inputs().toArray(new String[0]);
+        int[] positions = new int[rows.size()];
+        for (int i = 0; i < positions.length; i++) {
+            positions[i] = i;
+        }
+        ReferenceData data = rows.response() != null
+                ? ReferenceData.numeric(names, rows.inputs(), stored.columns().response(), rows.response(), positions)
+                : ReferenceData.category(names, rows.inputs(), stored.columns().response(), rows.responseCodes(),
+                        stored.columns().responseLabels().size(), positions);
+        InputTransform transform = new InputTransform(Scaling.valueOf(
+                EngineSettings.upper(stored.settings().scaling())), stored.scaleCenter(),
+                stored.scaleSpread(), stored.whitening());
+        KnnModel engine = KnnModel.restore(data, EngineSettings.of(stored.settings(), threads), transform);
+        return new RestoredModel(stored, engine);
+    }
+}

@@ -1,0 +1,81 @@
+package nearfit.model;
+
+import java.util.LinkedHashMap;
+import java.util.Map;
+
+/**
+ * A tuning table as the {@code tune} command prints it and a model file keeps it: one figure per
+ * candidate k, and the two choices.
+ *
+ * <p>For a number response {@code rmse}, {@code rmseSe}, {@code mae}, {@code press} and
+ * {@code r2Pred} are filled and {@code errorRate}, {@code errorRateSe} are {@code null}; for a category
+ * response it is the other way round. All filled arrays have the length of {@code k}.
+ *
+ * @param rows    rows the figures were computed on
+ * @param k       the candidate k values, ascending
+ * @param sampled rows in the leave-one-out sample, or -1 when every row was used
+ */
+public record TuningSummary(long rows, int[] k, double[] rmse, double[] rmseSe, double[] mae,
+                            double[] press, double[] r2Pred, double[] errorRate, double[] errorRateSe,
+                            int bestK, int oneSeK, long sampled) {
+    /** Checks that exactly one family of figures is present and every array matches {@code k}. */
+    public TuningSummary {
+        boolean regression = rmse != null;
+        if (regression == (errorRate != null)) {
+            throw new IllegalArgumentException("a tuning table has either regression figures or error rates");
+        }
+        Object[] filled = regression ? new Object[] {rmse, rmseSe, mae, press, r2Pred}
+                : new Object[] {errorRate, errorRateSe};
+        for (Object a : filled) {
+            if (a == null || ((double[]) a).length != k.length) {
+                throw new IllegalArgumentException("every tuning column needs one figure per k");
+            }
+        }
+    }
+
+    /** Whether this table holds error rates of a category response. */
+    public boolean forCategories() {
+        return errorRate != null;
+    }
+
+    /**
+     * The JSON object of the {@code tune --format json} output, keys in this order: rows, k, then
+     * rmse, rmse_se, mae, press, r2_pred (or error_rate, error_rate_se), best_k, one_se_k, sampled.
+     */
+    public Map<String, Object> toJson() {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("rows", rows);
+        m.put("k", k);
+        if (forCategories()) {
+            m.put("error_rate", errorRate);
+            m.put("error_rate_se", errorRateSe);
+        } else {
+            m.put("rmse", rmse);
+            m.put("rmse_se", rmseSe);
+            m.put("mae", mae);
+            m.put("press", press);
+            m.put("r2_pred", r2Pred);
+        }
+        m.put("best_k", (long) bestK);
+        m.put("one_se_k", (long) oneSeK);
+        m.put("sampled", sampled < 0 ? null : (Object) sampled);
+        return m;
+    }
+
+    /** Reads the object {@link #toJson()} writes; throws {@link IllegalArgumentException} naming a bad field. */
+    public static TuningSummary fromJson(Map<?, ?> m) {
+        int[] k = ManifestFields.ints(m, "k");
+        boolean categories = m.containsKey("error_rate");
+        Object sampled = m.get("sampled");
+        return new TuningSummary(ManifestFields.whole(m, "rows"), k,
+                categories ? null : ManifestFields.doubles(m, "rmse"),
+                categories ? null : ManifestFields.doubles(m, "rmse_se"),
+                categories ? null : ManifestFields.doubles(m, "mae"),
+                categories ? null : ManifestFields.doubles(m, "press"),
+                categories ? null : ManifestFields.doubles(m, "r2_pred"),
+                categories ? ManifestFields.doubles(m, "error_rate") : null,
+                categories ? ManifestFields.doubles(m, "error_rate_se") : null,
+                (int) ManifestFields.whole(m, "best_k"), (int) ManifestFields.whole(m, "one_se_k"),
+                sampled == null ? -1 : ManifestFields.whole(m, "sampled"));
+    }
+}
