@@ -47,8 +47,12 @@ public final class Explorer implements AutoCloseable {
     private Object curveKey;
     private Object tuningKey;
     private Object flagsKey;
-    /** Whether a curve job has finished: tuning and flags wait for it, so the first curve has the cores. */
-    private boolean curveSeen;
+    /**
+     * The curve key whose job last finished. New tuning or flags wait until the current curve is in, so the
+     * curve has the cores: at start, and after a k change (which makes the flags stale).
+     */
+    private Object curveDoneKey;
+    private boolean submitAfterFrame;
     /** Frames are sent whole until this {@link System#nanoTime} after a resize. */
     private long completeUntil = System.nanoTime();
     private int exitStatus;
@@ -110,8 +114,8 @@ public final class Explorer implements AutoCloseable {
         do {
             jobs.awaitIdle(120_000);
             drainEvents();
+            draw();
         } while (jobs.busy());
-        draw();
     }
 
     /** Waits until the curve of the current state is in and drawn, leaving tuning and flags running. */
@@ -126,6 +130,7 @@ public final class Explorer implements AutoCloseable {
         // Tuning and flags are started by the first curve, so that comes first.
         jobs.awaitIdle(Jobs.Kind.CURVE, 600_000);
         drainEvents();
+        draw();
         jobs.awaitIdle(Jobs.Kind.valueOf(kind.toUpperCase(java.util.Locale.ROOT)), 600_000);
         drainEvents();
         draw();
@@ -162,9 +167,10 @@ public final class Explorer implements AutoCloseable {
             submit();
         } else if (e instanceof Jobs.Done d) {
             apply(d);
-            if (d.kind() == Jobs.Kind.CURVE && !curveSeen && jobs.isCurrent(d)) {
-                curveSeen = true;
-                submit();
+            if (d.kind() == Jobs.Kind.CURVE && jobs.isCurrent(d)) {
+                // Tuning and flags are started after the frame that shows this curve (see draw).
+                curveDoneKey = curveKey;
+                submitAfterFrame = true;
             }
         }
     }
@@ -258,11 +264,15 @@ public final class Explorer implements AutoCloseable {
             results = results.withCurve(results.curve(), 0);
             jobs.start(Jobs.Kind.CURVE, generation, c -> workbench.curve(model, request, c));
         }
-        if (!curveSeen) {
+        List<Object> fk = java.util.Arrays.asList(model, state.groupColumn());
+        if (request != null && !ck.equals(curveDoneKey)) {
+            // Stale flags would only slow the curve down; they start again once it is in.
+            if (!fk.equals(flagsKey)) {
+                jobs.cancel(Jobs.Kind.FLAGS);
+            }
             return;
         }
         // Flags first: they are drawn on the plot, tuning only in its panel and the header; both share a lane.
-        List<Object> fk = java.util.Arrays.asList(model, state.groupColumn());
         if (!fk.equals(flagsKey)) {
             flagsKey = fk;
             generation++;
@@ -359,6 +369,10 @@ public final class Explorer implements AutoCloseable {
         // otherwise only the cells that changed.
         screen.refresh(now - completeUntil < 0 ? Screen.RefreshType.COMPLETE : Screen.RefreshType.DELTA);
         framesDrawn++;
+        if (submitAfterFrame) {
+            submitAfterFrame = false;
+            submit();
+        }
     }
 
     private static Layout layoutOf(TerminalSize size) {
