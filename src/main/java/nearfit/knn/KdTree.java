@@ -4,9 +4,16 @@ package nearfit.knn;
  * A k-d tree (Bentley 1975; k-nearest search after Friedman, Bentley &amp; Finkel 1977) over packed
  * coordinates. The tree is implicit and balanced: node i has children 2i+1 and 2i+2, every leaf
  * sits at depth {@code depth} and holds at most {@link #LEAF_SIZE} rows. Each node splits its rows
- * at the median of its widest coordinate (selection on an int permutation) and stores its bounding
- * box, which gives an exact lower bound on the key for every metric. The coordinates are moved into tree
- * order while building, so both the build and a leaf scan read memory in sequence.
+ * at the median of its cell's widest side (selection on the packed rows): rows left of the split
+ * have a coordinate {@code <= splitValue}, rows right {@code >=}. The coordinates are moved into
+ * tree order while building, so the rows of a leaf are contiguous and a leaf scan is a linear sweep.
+ *
+ * <p>The search keeps, per dimension, the gap between the query and the current cell (Arya &amp;
+ * Mount 1993, incremental distance): entering the far child changes one gap, so a node costs O(1)
+ * plus a d-term sum. The bound is summed from the gaps in dimension order with the operations of
+ * {@link Metric#key}, and each gap is at most the matching coordinate difference of every row in the
+ * cell, so by monotone rounding it never exceeds the key of a row inside: pruning is exact, ties
+ * included.
  */
 public final class KdTree implements NeighborIndex {
     /** Rows per leaf at most. */
@@ -16,24 +23,29 @@ public final class KdTree implements NeighborIndex {
     private final int n;
     private final Metric base;
     private final int depth;
-    private final int[] start;
-    private final int[] end;
-    /** Per node, per dimension: min then max, interleaved so a node's box fills adjacent memory. */
-    private final double[] box;
+    /** The node index of the first leaf: leaf node i holds rows leafStart[i - firstLeaf] until leafStart[i - firstLeaf + 1]. */
+    private final int firstLeaf;
+    private final int[] leafStart;
+    private final int[] splitDim;
+    private final double[] splitValue;
+    private final double[] rootLo;
+    private final double[] rootHi;
     private final double[] treeCoords;
     private final int[] treePos;
 
-    private KdTree(int d, int n, Metric base, int depth, int[] start, int[] end, double[] box,
-                   double[] treeCoords, int[] treePos) {
+    private KdTree(int d, int n, Metric base, int depth, Builder b) {
         this.d = d;
         this.n = n;
         this.base = base;
         this.depth = depth;
-        this.start = start;
-        this.end = end;
-        this.box = box;
-        this.treeCoords = treeCoords;
-        this.treePos = treePos;
+        this.firstLeaf = (1 << depth) - 1;
+        this.leafStart = b.leafStart;
+        this.splitDim = b.splitDim;
+        this.splitValue = b.splitValue;
+        this.rootLo = b.rootLo;
+        this.rootHi = b.rootHi;
+        this.treeCoords = b.rows;
+        this.treePos = b.pos;
     }
 
     /** Builds a tree over packed coordinates (n*d), splitting the top levels over threads. */
@@ -43,33 +55,33 @@ public final class KdTree implements NeighborIndex {
         while ((n + (1 << depth) - 1) >> depth > LEAF_SIZE) {
             depth++;
         }
-        int nodes = (1 << (depth + 1)) - 1;
-        Builder b = new Builder(coords.clone(), d, depth, n, nodes);
-        b.build(0, 0, n, 0, Math.max(1, threads));
-        double[] box = new double[nodes * 2 * d];
-        for (int i = 0; i < nodes * d; i++) {
-            box[2 * i] = b.lo[i];
-            box[2 * i + 1] = b.hi[i];
-        }
-        return new KdTree(d, n, base.base(), depth, b.start, b.end, box, b.rows, b.pos);
+        Builder b = new Builder(coords.clone(), d, depth, n);
+        double[] lo = b.rootLo.clone();
+        double[] hi = b.rootHi.clone();
+        b.build(0, 0, n, 0, lo, hi, Math.max(1, threads));
+        b.leafStart[1 << depth] = n;
+        return new KdTree(d, n, base.base(), depth, b);
     }
 
     /**
      * The build state. Rows are moved physically (d doubles and a position per swap) rather than
      * through an index permutation, so every pass over a node reads memory in sequence; each
-     * node's slots and row range are written by exactly one thread.
+     * node's slots and row range are written by exactly one thread. The split dimension is the
+     * widest side of the node's cell (the root's bounding box cut by the ancestors' splits), which
+     * needs no pass over the rows; it affects speed only, never results.
      */
     private static final class Builder {
         final double[] rows;
         final int[] pos;
         final int d;
         final int depth;
-        final int[] start;
-        final int[] end;
-        final double[] lo;
-        final double[] hi;
+        final int[] leafStart;
+        final int[] splitDim;
+        final double[] splitValue;
+        final double[] rootLo;
+        final double[] rootHi;
 
-        Builder(double[] rows, int d, int depth, int n, int nodes) {
+        Builder(double[] rows, int d, int depth, int n) {
             this.rows = rows;
             this.d = d;
             this.depth = depth;
@@ -77,31 +89,52 @@ public final class KdTree implements NeighborIndex {
             for (int i = 0; i < n; i++) {
                 pos[i] = i;
             }
-            this.start = new int[nodes];
-            this.end = new int[nodes];
-            this.lo = new double[nodes * d];
-            this.hi = new double[nodes * d];
+            int internal = (1 << depth) - 1;
+            this.leafStart = new int[(1 << depth) + 1];
+            this.splitDim = new int[Math.max(1, internal)];
+            this.splitValue = new double[Math.max(1, internal)];
+            this.rootLo = new double[d];
+            this.rootHi = new double[d];
+            java.util.Arrays.fill(rootLo, Double.POSITIVE_INFINITY);
+            java.util.Arrays.fill(rootHi, Double.NEGATIVE_INFINITY);
+            for (int i = 0; i < n; i++) {
+                for (int j = 0; j < d; j++) {
+                    double v = rows[i * d + j];
+                    rootLo[j] = Math.min(rootLo[j], v);
+                    rootHi[j] = Math.max(rootHi[j], v);
+                }
+            }
         }
 
-        void build(int node, int from, int to, int level, int threads) {
-            start[node] = from;
-            end[node] = to;
-            box(node, from, to);
+        /** Builds node's subtree over rows [from, to) in the cell [lo, hi] (arrays owned by this call). */
+        void build(int node, int from, int to, int level, double[] lo, double[] hi, int threads) {
             if (level == depth) {
+                leafStart[node - ((1 << depth) - 1)] = from;
                 return;
             }
-            int dim = widest(node);
+            int dim = 0;
+            for (int j = 1; j < d; j++) {
+                if (hi[j] - lo[j] > hi[dim] - lo[dim]) {
+                    dim = j;
+                }
+            }
             int mid = (from + to) >>> 1;
-            select(from, to, mid, dim);
+            double s = mid < to ? select(from, to, mid, dim) : lo[dim];
+            splitDim[node] = dim;
+            splitValue[node] = s;
+            double[] leftHi = hi.clone();
+            leftHi[dim] = s;
+            double[] rightLo = lo.clone();
+            rightLo[dim] = s;
             if (threads > 1 && to - from > 50_000) {
                 int half = threads / 2;
-                Thread t = new Thread(() -> build(2 * node + 1, from, mid, level + 1, half));
+                Thread t = new Thread(() -> build(2 * node + 1, from, mid, level + 1, lo, leftHi, half));
                 t.start();
-                build(2 * node + 2, mid, to, level + 1, threads - half);
+                build(2 * node + 2, mid, to, level + 1, rightLo, hi, threads - half);
                 join(t);
             } else {
-                build(2 * node + 1, from, mid, level + 1, 1);
-                build(2 * node + 2, mid, to, level + 1, 1);
+                build(2 * node + 1, from, mid, level + 1, lo, leftHi, 1);
+                build(2 * node + 2, mid, to, level + 1, rightLo, hi, 1);
             }
         }
 
@@ -114,44 +147,12 @@ public final class KdTree implements NeighborIndex {
             }
         }
 
-        private void box(int node, int from, int to) {
-            int o = node * d;
-            for (int j = 0; j < d; j++) {
-                lo[o + j] = Double.POSITIVE_INFINITY;
-                hi[o + j] = Double.NEGATIVE_INFINITY;
-            }
-            for (int i = from; i < to; i++) {
-                int p = i * d;
-                for (int j = 0; j < d; j++) {
-                    double v = rows[p + j];
-                    if (v < lo[o + j]) {
-                        lo[o + j] = v;
-                    }
-                    if (v > hi[o + j]) {
-                        hi[o + j] = v;
-                    }
-                }
-            }
-        }
-
-        private int widest(int node) {
-            int best = 0;
-            double w = -1;
-            for (int j = 0; j < d; j++) {
-                double s = hi[node * d + j] - lo[node * d + j];
-                if (s > w) {
-                    w = s;
-                    best = j;
-                }
-            }
-            return best;
-        }
-
         /**
          * Hoare-partition quickselect (Wirth's FIND): stops on equal keys from both sides, so runs
          * of equal values still split evenly and cost linear time; swaps only misplaced rows.
+         * Afterwards rows before kth are {@code <=} and rows from kth on {@code >=} the returned value.
          */
-        private void select(int from, int to, int kth, int dim) {
+        private double select(int from, int to, int kth, int dim) {
             int l = from;
             int r = to - 1;
             while (l < r) {
@@ -179,6 +180,7 @@ public final class KdTree implements NeighborIndex {
                     r = j;
                 }
             }
+            return rows[kth * d + dim];
         }
 
         private void swap(int i, int j) {
@@ -198,48 +200,91 @@ public final class KdTree implements NeighborIndex {
     @Override
     public void search(double[] query, int k, int exclude, NeighborList out) {
         out.reset(k);
-        visit(0, 0, query, exclude, out);
-        out.finish();
+        double[] gap = out.gaps(d);
+        for (int j = 0; j < d; j++) {
+            double q = query[j];
+            gap[j] = q < rootLo[j] ? rootLo[j] - q : q > rootHi[j] ? q - rootHi[j] : 0.0;
+        }
+        out.limit(capFromPrevious(query, k, exclude, out));
+        visit(0, 0, query, gap, exclude, out);
+        out.finish(this, treePos);
     }
 
-    private void visit(int node, int level, double[] q, int exclude, NeighborList out) {
+    /**
+     * An upper bound on the k-th key from the previous search's k best (consecutive queries of a
+     * batch are close, so this prunes from the first node on): the largest key among k of them
+     * other than the excluded row; +infinity when there are fewer. Changes the work, not the result.
+     */
+    private double capFromPrevious(double[] q, int k, int exclude, NeighborList out) {
+        int[] slots = out.previousSlots(this);
+        if (slots == null) {
+            return Double.POSITIVE_INFINITY;
+        }
+        int m = out.previousCount();
+        double cap = 0;
+        int used = 0;
+        for (int i = 0; i < m && used < k; i++) {
+            int slot = slots[i];
+            if (treePos[slot] != exclude) {
+                cap = Math.max(cap, Metric.key(base, treeCoords, slot, q, d));
+                used++;
+            }
+        }
+        return used == k ? cap : Double.POSITIVE_INFINITY;
+    }
+
+    private void visit(int node, int level, double[] q, double[] gap, int exclude, NeighborList out) {
         if (level == depth) {
-            scanLeaf(node, q, exclude, out);
+            scanLeaf(node - firstLeaf, q, exclude, out);
             return;
         }
+        int dim = splitDim[node];
+        double diff = q[dim] - splitValue[node];
         int left = 2 * node + 1;
-        int right = left + 1;
-        double bl = boxKey(left, q);
-        double br = boxKey(right, q);
-        int first = bl <= br ? left : right;
-        int second = bl <= br ? right : left;
-        double bSecond = Math.max(bl, br);
-        if (Math.min(bl, br) <= out.bound()) {
-            visit(first, level + 1, q, exclude, out);
+        visit(diff <= 0 ? left : left + 1, level + 1, q, gap, exclude, out);
+        double old = gap[dim];
+        double g = diff <= 0 ? splitValue[node] - q[dim] : diff;
+        gap[dim] = g;
+        if (cellKey(gap) <= out.bound()) {
+            visit(diff <= 0 ? left + 1 : left, level + 1, q, gap, exclude, out);
         }
-        if (bSecond <= out.bound()) {
-            visit(second, level + 1, q, exclude, out);
-        }
+        gap[dim] = old;
     }
-
-    /** The box bound; Euclidean written out branch-free (the same values as {@link Metric#boxKey}). */
-    private double boxKey(int node, double[] q) {
-        if (base != Metric.EUCLIDEAN) {
-            return Metric.boxKey(base, box, node * 2 * d, q, d);
-        }
-        int o = node * 2 * d;
+    /** The bound on the key of any row in the cell with these gaps; see the class comment. */
+    private double cellKey(double[] gap) {
         double s = 0;
-        for (int j = 0; j < d; j++) {
-            double g = Math.max(0.0, Math.max(box[o + 2 * j] - q[j], q[j] - box[o + 2 * j + 1]));
-            s += g * g;
+        if (base == Metric.EUCLIDEAN) {
+            for (int j = 0; j < d; j++) {
+                s += gap[j] * gap[j];
+            }
+        } else if (base == Metric.MANHATTAN) {
+            for (int j = 0; j < d; j++) {
+                s += gap[j];
+            }
+        } else {
+            for (int j = 0; j < d; j++) {
+                s = Math.max(s, gap[j]);
+            }
         }
         return s;
     }
 
-    private void scanLeaf(int node, double[] q, int exclude, NeighborList out) {
-        int to = end[node];
-        if (base == Metric.EUCLIDEAN) {
-            for (int i = start[node]; i < to; i++) {
+    private void scanLeaf(int leaf, double[] q, int exclude, NeighborList out) {
+        int from = leafStart[leaf];
+        int to = leafStart[leaf + 1];
+        if (base != Metric.EUCLIDEAN) {
+            for (int i = from; i < to; i++) {
+                double key = Metric.key(base, treeCoords, i, q, d);
+                if (key <= out.bound() && treePos[i] != exclude) {
+                    out.offer(key, i);
+                }
+            }
+        } else if (d == 3) {
+            scanLeaf3(from, to, q, exclude, out);
+        } else if (d == 2) {
+            scanLeaf2(from, to, q, exclude, out);
+        } else {
+            for (int i = from; i < to; i++) {
                 int o = i * d;
                 double key = 0;
                 for (int j = 0; j < d; j++) {
@@ -247,15 +292,44 @@ public final class KdTree implements NeighborIndex {
                     key += t * t;
                 }
                 if (key <= out.bound() && treePos[i] != exclude) {
-                    out.offer(key, treePos[i]);
+                    out.offer(key, i);
                 }
             }
-            return;
         }
-        for (int i = start[node]; i < to; i++) {
-            double key = Metric.key(base, treeCoords, i, q, d);
-            if (key <= out.bound() && treePos[i] != exclude) {
-                out.offer(key, treePos[i]);
+    }
+
+    /** Euclidean in three inputs: the general loop's operations in its order, unrolled. */
+    private void scanLeaf3(int from, int to, double[] q, int exclude, NeighborList out) {
+        double q0 = q[0];
+        double q1 = q[1];
+        double q2 = q[2];
+        double[] c = treeCoords;
+        double bound = out.bound();
+        for (int i = from; i < to; i++) {
+            int o = 3 * i;
+            double t0 = c[o] - q0;
+            double t1 = c[o + 1] - q1;
+            double t2 = c[o + 2] - q2;
+            double key = t0 * t0 + t1 * t1 + t2 * t2;
+            if (key <= bound && treePos[i] != exclude) {
+                bound = out.offer(key, i);
+            }
+        }
+    }
+
+    /** Euclidean in two inputs, as {@link #scanLeaf3}. */
+    private void scanLeaf2(int from, int to, double[] q, int exclude, NeighborList out) {
+        double q0 = q[0];
+        double q1 = q[1];
+        double[] c = treeCoords;
+        double bound = out.bound();
+        for (int i = from; i < to; i++) {
+            int o = 2 * i;
+            double t0 = c[o] - q0;
+            double t1 = c[o + 1] - q1;
+            double key = t0 * t0 + t1 * t1;
+            if (key <= bound && treePos[i] != exclude) {
+                bound = out.offer(key, i);
             }
         }
     }

@@ -8,16 +8,26 @@ import java.util.Arrays;
  * scratch space (a max-heap of the k best and a buffer of rows tied with the heap's top), reused
  * from query to query: one list per thread, not thread-safe.
  *
- * <p>Keys are those of {@link Metric}: squared distances for Euclidean and Mahalanobis.
+ * <p>Keys are those of {@link Metric}: squared distances for Euclidean and Mahalanobis. During a
+ * search the heap holds index-specific <em>slots</em> (the k-d tree's tree-order row), mapped to
+ * positions by {@link #finish(int[])}; the slots of the last search's k best are kept, so the next
+ * search of the same index can start with a bound from them (see {@link #previousSlots}).
  */
 public final class NeighborList {
     private int k;
     private int heapSize;
     private double[] heapKey = new double[16];
     private int[] heapPos = new int[16];
+    /** The heap's top once k are held, else +infinity: the key a candidate must not exceed. */
+    private double bound;
+    private double[] gaps = new double[0];
     private int tieCount;
     private double[] tieKey = new double[16];
     private int[] tiePos = new int[16];
+
+    private Object previousOwner;
+    private int previousCount;
+    private int[] previousSlots = new int[16];
 
     private int count;
     private double[] keys = new double[16];
@@ -52,6 +62,7 @@ public final class NeighborList {
         heapSize = 0;
         tieCount = 0;
         count = 0;
+        bound = Double.POSITIVE_INFINITY;
         if (heapKey.length < newK) {
             heapKey = new double[newK];
             heapPos = new int[newK];
@@ -60,22 +71,36 @@ public final class NeighborList {
 
     /** The key a candidate must not exceed to matter: the heap's top once k are held. */
     double bound() {
-        return heapSize < k ? Double.POSITIVE_INFINITY : heapKey[0];
+        return bound;
     }
 
-    /** Offers a candidate; keeps the k best and every candidate tied with the k-th. */
-    void offer(double key, int pos) {
+    /** Per-dimension scratch for the k-d tree's cell gaps (length at least d). */
+    double[] gaps(int d) {
+        if (gaps.length < d) {
+            gaps = new double[d];
+        }
+        return gaps;
+    }
+
+    /**
+     * Offers a candidate; keeps the k best and every candidate tied with the k-th. Returns the new
+     * {@link #bound()}.
+     */
+    double offer(double key, int pos) {
         if (heapSize < k) {
             push(key, pos);
-            return;
+            if (heapSize == k) {
+                bound = heapKey[0];
+            }
+            return bound;
         }
         double top = heapKey[0];
         if (key > top) {
-            return;
+            return bound;
         }
         if (key == top) {
             addTie(key, pos);
-            return;
+            return bound;
         }
         int topPos = heapPos[0];
         replaceTop(key, pos);
@@ -84,6 +109,8 @@ public final class NeighborList {
         } else {
             tieCount = 0; // the buffered ties were at the old top, now beyond the k-th
         }
+        bound = heapKey[0];
+        return bound;
     }
 
     private void push(double key, int pos) {
@@ -132,14 +159,61 @@ public final class NeighborList {
         tiePos[tieCount++] = pos;
     }
 
-    /** Ends the search: moves heap and ties to the output, sorted by (key, position). */
+    /**
+     * Lowers the bound to {@code cap} before any candidate is offered: valid when at least k rows
+     * the search may return have a key {@code <= cap}, since then the k-th key is {@code <= cap}
+     * and no row the result holds (ties included) is rejected.
+     */
+    void limit(double cap) {
+        if (cap < bound) {
+            bound = cap;
+        }
+    }
+
+    /**
+     * The slots of the previous search's k best when it ran on {@code owner}, else null; valid
+     * until the next {@link #finish}; {@link #previousCount()} of them.
+     */
+    int[] previousSlots(Object owner) {
+        return owner == previousOwner ? previousSlots : null;
+    }
+
+    int previousCount() {
+        return previousCount;
+    }
+
+    /** Ends a search whose slots are positions. */
     void finish() {
+        finish(null, null);
+    }
+
+    /**
+     * Ends the search of {@code owner}: remembers the heap's slots, moves heap and ties to the
+     * output with slots mapped to positions ({@code slotPosition[slot]}; null: the same), sorted by
+     * (key, position).
+     */
+    void finish(Object owner, int[] slotPosition) {
         int n = heapSize + tieCount;
         ensureOutput(n);
+        if (previousSlots.length < heapSize) {
+            previousSlots = new int[heapKey.length];
+        }
+        System.arraycopy(heapPos, 0, previousSlots, 0, heapSize);
+        previousCount = heapSize;
+        previousOwner = owner;
         System.arraycopy(heapKey, 0, keys, 0, heapSize);
-        System.arraycopy(heapPos, 0, positions, 0, heapSize);
         System.arraycopy(tieKey, 0, keys, heapSize, tieCount);
-        System.arraycopy(tiePos, 0, positions, heapSize, tieCount);
+        if (slotPosition == null) {
+            System.arraycopy(heapPos, 0, positions, 0, heapSize);
+            System.arraycopy(tiePos, 0, positions, heapSize, tieCount);
+        } else {
+            for (int i = 0; i < heapSize; i++) {
+                positions[i] = slotPosition[heapPos[i]];
+            }
+            for (int i = 0; i < tieCount; i++) {
+                positions[heapSize + i] = slotPosition[tiePos[i]];
+            }
+        }
         count = n;
         sortByKeyThenPosition(keys, positions, 0, n);
     }
@@ -161,6 +235,7 @@ public final class NeighborList {
 
     void setCount(int n) {
         count = n;
+        previousOwner = null;
     }
 
     void sortOutput() {

@@ -6,6 +6,9 @@ final class PairSort {
     }
 
     static void sort(double[] a, double[] b, int from, int to) {
+        if (isSorted(a, b, from, to)) {
+            return; // the usual case: neighbours arrive sorted by key and distinct keys are common
+        }
         while (to - from > 24) {
             int mid = (from + to) >>> 1;
             double pa = a[mid];
@@ -43,6 +46,15 @@ final class PairSort {
             a[j + 1] = x;
             b[j + 1] = y;
         }
+    }
+
+    private static boolean isSorted(double[] a, double[] b, int from, int to) {
+        for (int i = from + 1; i < to; i++) {
+            if (less(a[i], b[i], a[i - 1], b[i - 1])) {
+                return false;
+            }
+        }
+        return true;
     }
 
     private static boolean less(double a1, double b1, double a2, double b2) {

@@ -1,7 +1,5 @@
 package nearfit.knn;
 
-import it.unimi.dsi.fastutil.longs.LongArrays;
-
 /**
  * An order to run a batch of queries in: by Morton (Z-order) code of their first three
  * coordinates, so consecutive queries visit the same tree nodes and rows while they are in cache.
@@ -16,10 +14,6 @@ final class QueryOrder {
 
     /** The processing order for n packed queries of d coordinates (NaN coordinates sort anywhere). */
     static int[] of(double[] q, int d, int n) {
-        int[] perm = new int[n];
-        for (int i = 0; i < n; i++) {
-            perm[i] = i;
-        }
         int used = Math.min(3, d);
         double[] lo = new double[used];
         double[] span = new double[used];
@@ -49,8 +43,7 @@ final class QueryOrder {
             }
             code[i] = c;
         }
-        LongArrays.radixSortIndirect(perm, code, false);
-        return perm;
+        return RadixSort.order(code);
     }
 
     /** Spreads 21 bits so that two zero bits separate each (bit i moves to bit 3i). */

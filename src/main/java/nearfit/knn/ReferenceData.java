@@ -1,6 +1,5 @@
 package nearfit.knn;
 
-import it.unimi.dsi.fastutil.doubles.DoubleArrays;
 import it.unimi.dsi.fastutil.ints.IntArrays;
 import it.unimi.dsi.fastutil.ints.IntComparator;
 import java.util.Arrays;
@@ -137,19 +136,17 @@ public final class ReferenceData {
 
     /**
      * Sorts the kept row indexes lexicographically by input 0, ..., input d-1, response, row id:
-     * one radix pass on input 0, then a comparison sort inside each run of equal input-0 values
+     * a radix sort on input 0, then a comparison sort inside each run of equal input-0 values
      * (runs are short for measured data, long for coarse data; both stay O(n log n)).
      */
     private static void canonicalOrder(int[] kept, double[][] in, double[] y, int[] codes, int[] rowIds) {
         int m = kept.length;
-        int[] perm = new int[m];
-        double[] key = new double[m];
+        long[] key = new long[m];
         double[] x0 = in[0];
         for (int i = 0; i < m; i++) {
-            key[i] = x0[kept[i]] + 0.0; // +0.0 turns -0.0 into 0.0: equal values sort as equal
-            perm[i] = i;
+            key[i] = RadixSort.sortableBits(x0[kept[i]]);
         }
-        DoubleArrays.radixSortIndirect(perm, key, false);
+        int[] perm = RadixSort.order(key);
         int[] order = new int[m];
         for (int i = 0; i < m; i++) {
             order[i] = kept[perm[i]];

@@ -55,6 +55,7 @@ public final class SafeOutput {
                 out.flush();
                 channel.force(true);
             }
+            keepPermissions(temp, target);
             move(temp, target, force);
             temp = null;
         } catch (FileAlreadyExistsException e) {
@@ -113,6 +114,20 @@ public final class SafeOutput {
         } catch (AtomicMoveNotSupportedException e) {
             Files.move(temp, target, StandardCopyOption.REPLACE_EXISTING);
         }
+    }
+
+    /**
+     * Temporary files are created owner-only; the finished file gets the permissions of the file it
+     * replaces, or rw-r--r-- for a new one, as a plain write would under the usual umask.
+     */
+    private static void keepPermissions(Path temp, Path target) throws IOException {
+        if (!Files.getFileStore(temp).supportsFileAttributeView(java.nio.file.attribute.PosixFileAttributeView.class)) {
+            return;
+        }
+        java.util.Set<java.nio.file.attribute.PosixFilePermission> perms = Files.exists(target)
+                ? Files.getPosixFilePermissions(target)
+                : java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--");
+        Files.setPosixFilePermissions(temp, perms);
     }
 
     private static boolean sameFile(Path a, Path b) {

@@ -12,9 +12,14 @@ final class KnnChoices {
     private KnnChoices() {
     }
 
+    /**
+     * Flags divide each leave-one-out residual by the local spread of its neighbours, as {@code check}
+     * does by default: on logs where most rows sit below cut-in or at rated power the global MAD is
+     * tiny, and the global scale flagged about 10 % of the demo site's rows.
+     */
     static KnnSettings settings(ModelSettings m) {
         return new KnnSettings(m.k(), metric(m.metric()), weighting(m.weighting()), scaling(m.scaling()),
-                band(m.band()), KnnSettings.DEFAULT_FLAG_THRESHOLD, FlagScale.GLOBAL_MAD, THREADS);
+                band(m.band()), KnnSettings.DEFAULT_FLAG_THRESHOLD, FlagScale.LOCAL_SD, THREADS);
     }
 
     /**

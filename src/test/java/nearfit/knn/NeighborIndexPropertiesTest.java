@@ -25,6 +25,12 @@ class NeighborIndexPropertiesTest {
     private static void assertSameNeighbours(NeighborIndex index, NeighborIndex brute, double[] q, int k, int exclude) {
         NeighborList a = new NeighborList();
         NeighborList b = new NeighborList();
+        assertSameNeighbours(index, a, brute, b, q, k, exclude);
+    }
+
+    /** Searches both indexes with their own (possibly reused) lists and compares the results. */
+    private static void assertSameNeighbours(NeighborIndex index, NeighborList a, NeighborIndex brute, NeighborList b,
+                                             double[] q, int k, int exclude) {
         index.search(q, k, exclude, a);
         brute.search(q, k, exclude, b);
         assertEquals(b.count(), a.count(), "count");
@@ -51,6 +57,36 @@ class NeighborIndexPropertiesTest {
                 if (kk >= 1) {
                     assertSameNeighbours(tree, brute, q, kk, exclude);
                 }
+            }
+        }
+    }
+
+    /**
+     * One list reused over a walk of nearby queries, as batch queries and leave-one-out reuse it:
+     * the tree's bound from the previous result must change nothing, ties and exclusions included.
+     */
+    @Property(tries = 25)
+    void kdTreeReusingOneListOverNearbyQueriesEqualsBruteForce(@ForAll long seed,
+                                                              @ForAll @IntRange(min = 2, max = 4) int d,
+                                                              @ForAll @IntRange(min = 100, max = 3000) int n,
+                                                              @ForAll @IntRange(min = 1, max = 60) int k) {
+        double[] c = coarseCoords(seed, n, d);
+        Random r = new Random(seed + 3);
+        for (Metric m : new Metric[] {Metric.EUCLIDEAN, Metric.MANHATTAN, Metric.CHEBYSHEV}) {
+            KdTree tree = KdTree.build(c, d, m, 2);
+            BruteForce brute = new BruteForce(c, d, m);
+            NeighborList a = new NeighborList();
+            NeighborList b = new NeighborList();
+            double[] q = new double[d];
+            for (int t = 0; t < 40; t++) {
+                int row = r.nextInt(n);
+                boolean self = t % 3 != 0;
+                for (int j = 0; j < d; j++) {
+                    q[j] = self ? c[row * d + j] : q[j] + (r.nextInt(3) - 1) * 0.25;
+                }
+                int exclude = self ? row : -1;
+                int kk = Math.min(t % 4 == 0 ? k / 2 + 1 : k, n - 1);
+                assertSameNeighbours(tree, a, brute, b, q, kk, exclude);
             }
         }
     }

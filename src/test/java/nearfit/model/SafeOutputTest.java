@@ -25,6 +25,22 @@ class SafeOutputTest {
     }
 
     @Test
+    void aNewFileIsReadableByOthersNotOwnerOnlyLikeItsTemporaryFile() throws IOException {
+        Path p = dir.resolve("plot.png");
+        SafeOutput.write(p, false, List.of(), out -> out.write(1));
+        assertEquals("rw-r--r--", java.nio.file.attribute.PosixFilePermissions.toString(Files.getPosixFilePermissions(p)));
+    }
+
+    @Test
+    void aReplacedFileKeepsItsPermissions() throws IOException {
+        Path p = dir.resolve("model.nfm");
+        Files.writeString(p, "old");
+        Files.setPosixFilePermissions(p, java.nio.file.attribute.PosixFilePermissions.fromString("rw-rw----"));
+        SafeOutput.write(p, true, List.of(), out -> out.write(1));
+        assertEquals("rw-rw----", java.nio.file.attribute.PosixFilePermissions.toString(Files.getPosixFilePermissions(p)));
+    }
+
+    @Test
     void refusesToReplaceAnExistingFileWithoutForce() throws IOException {
         Path p = dir.resolve("out.csv");
         Files.writeString(p, "old");
