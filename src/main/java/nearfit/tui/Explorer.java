@@ -27,6 +27,8 @@ import nearfit.table.NearfitException;
 public final class Explorer implements AutoCloseable {
     /** Exit status after Ctrl-C, as a shell reports a process ended by SIGINT. */
     public static final int EXIT_INTERRUPTED = 130;
+    /** How long a frame waits for a curve just asked for: below what a key press feels like (common practice). */
+    private static final long FRESH_CURVE_NANOS = 40_000_000L;
     /** How long after a resize frames are sent whole: a few frames of the 250 ms loop. */
     private static final long RESIZE_SETTLE_NANOS = 600_000_000L;
 
@@ -53,6 +55,7 @@ public final class Explorer implements AutoCloseable {
      */
     private Object curveDoneKey;
     private boolean submitAfterFrame;
+    private long curveAskedAt;
     /** Frames are sent whole until this {@link System#nanoTime} after a resize. */
     private long completeUntil = System.nanoTime();
     private int exitStatus;
@@ -99,12 +102,13 @@ public final class Explorer implements AutoCloseable {
         submit();
     }
 
-    /** Handles one key: the next state, its effect, the jobs it needs and a frame. */
+    /** Handles one key: the next state, its effect, the jobs it needs and a frame (with a quick curve, if any). */
     public void press(KeyStroke key) throws IOException {
         Step step = KeyPress.next(state, key, context());
         state = step.state();
         perform(step.effect());
         submit();
+        awaitFreshCurve();
         draw();
     }
 
@@ -121,8 +125,9 @@ public final class Explorer implements AutoCloseable {
     /** Waits until the curve of the current state is in and drawn, leaving tuning and flags running. */
     public void settleCurve() throws IOException, InterruptedException {
         jobs.awaitIdle(Jobs.Kind.CURVE, 120_000);
-        drainEvents();
-        draw();
+        if (drainEvents() || submitAfterFrame) {
+            draw();
+        }
     }
 
     /** Waits until one kind of background work is done ("curve", "tuning" or "flags"), then draws. */
@@ -152,6 +157,7 @@ public final class Explorer implements AutoCloseable {
                 handle(e);
                 e = events.poll();
             }
+            awaitFreshCurve();
             if (!state.quit()) {
                 draw();
             }
@@ -202,10 +208,36 @@ public final class Explorer implements AutoCloseable {
         reader.start();
     }
 
-    private void drainEvents() throws IOException {
+    /** Handles every queued event; returns whether there was any. */
+    private boolean drainEvents() throws IOException {
+        boolean any = false;
         Object e;
         while ((e = events.poll()) != null) {
             handle(e);
+            any = true;
+        }
+        return any;
+    }
+
+    /**
+     * Waits a little for a curve that has just been asked for, handling whatever arrives meanwhile, so that a
+     * k change usually draws one frame, with the new curve, instead of one without and one with it.
+     */
+    private void awaitFreshCurve() throws IOException {
+        long end = curveAskedAt + FRESH_CURVE_NANOS;
+        long left;
+        while (curveKey != null && !curveKey.equals(curveDoneKey) && !state.quit()
+                && (left = end - System.nanoTime()) > 0) {
+            Object e;
+            try {
+                e = events.poll(left, TimeUnit.NANOSECONDS);
+            } catch (InterruptedException stop) {
+                Thread.currentThread().interrupt();
+                return;
+            }
+            if (e != null) {
+                handle(e);
+            }
         }
     }
 
@@ -262,6 +294,7 @@ public final class Explorer implements AutoCloseable {
             curveKey = ck;
             generation++;
             results = results.withCurve(results.curve(), 0);
+            curveAskedAt = System.nanoTime();
             jobs.start(Jobs.Kind.CURVE, generation, c -> workbench.curve(model, request, c));
         }
         List<Object> fk = java.util.Arrays.asList(model, state.groupColumn());
