@@ -227,7 +227,7 @@ public final class NeighborList {
         }
     }
 
-    /** Sets the output directly; the caller then calls {@link #sortOutput()}. */
+    /** Sets the output directly; the caller then calls {@link #sortOutput()} unless it wrote in (key, position) order. */
     void setOutput(int i, double key, int pos) {
         keys[i] = key;
         positions[i] = pos;

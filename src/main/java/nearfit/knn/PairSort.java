@@ -1,5 +1,7 @@
 package nearfit.knn;
 
+import java.util.Arrays;
+
 /** Sorts parallel double arrays by (a, b) ascending, in place: canonical summation orders. */
 final class PairSort {
     private PairSort() {
@@ -9,6 +11,41 @@ final class PairSort {
         if (isSorted(a, b, from, to)) {
             return; // the usual case: neighbours arrive sorted by key and distinct keys are common
         }
+        if (isAscending(a, from, to)) {
+            sortWithinEqual(a, b, from, to); // neighbour lists arrive sorted by key: only ties need work
+            return;
+        }
+        quicksort(a, b, from, to);
+    }
+
+    /**
+     * With a ascending, sorts b inside each run of equal a. The (a, b) order is unique but for
+     * the order of -0.0 and 0.0, which changes no sum.
+     */
+    private static void sortWithinEqual(double[] a, double[] b, int from, int to) {
+        int i = from;
+        while (i < to) {
+            int j = i + 1;
+            while (j < to && a[j] == a[i]) {
+                j++;
+            }
+            if (j - i > 1 && !isAscending(b, i, j)) {
+                Arrays.sort(b, i, j);
+            }
+            i = j;
+        }
+    }
+
+    private static boolean isAscending(double[] a, int from, int to) {
+        for (int i = from + 1; i < to; i++) {
+            if (a[i] < a[i - 1]) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static void quicksort(double[] a, double[] b, int from, int to) {
         while (to - from > 24) {
             int mid = (from + to) >>> 1;
             double pa = a[mid];
@@ -27,10 +64,10 @@ final class PairSort {
                 }
             }
             if (j - from < to - i) {
-                sort(a, b, from, j + 1);
+                quicksort(a, b, from, j + 1);
                 from = i;
             } else {
-                sort(a, b, i, to);
+                quicksort(a, b, i, to);
                 to = j + 1;
             }
         }
