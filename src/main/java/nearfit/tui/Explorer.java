@@ -56,6 +56,7 @@ public final class Explorer implements AutoCloseable {
     private Object curveDoneKey;
     private boolean submitAfterFrame;
     private long curveAskedAt;
+    private java.util.function.BooleanSupplier screenStopped = () -> false;
     /** Frames are sent whole until this {@link System#nanoTime} after a resize. */
     private long completeUntil = System.nanoTime();
     private int exitStatus;
@@ -76,6 +77,15 @@ public final class Explorer implements AutoCloseable {
         this.state = initial;
         this.results = Results.none(workbench.rowsUsed(initial.condition()));
         this.layout = layoutOf(screen.getTerminalSize());
+    }
+
+    /**
+     * Tells the explorer when the screen has been stopped (by a shutdown hook on SIGTERM, say): no frame is sent
+     * after that, so nothing is drawn over the restored terminal. The check and the stop both hold the screen's
+     * lock.
+     */
+    public void stopDrawingWhen(java.util.function.BooleanSupplier stopped) {
+        this.screenStopped = stopped;
     }
 
     /** The current state. */
@@ -400,7 +410,12 @@ public final class Explorer implements AutoCloseable {
         // After a resize the terminal may reflow or clear its cells, even after the first frame at the new size
         // (a multiplexer over SSH may apply its reflow late), so frames are sent whole for a short while;
         // otherwise only the cells that changed.
-        screen.refresh(now - completeUntil < 0 ? Screen.RefreshType.COMPLETE : Screen.RefreshType.DELTA);
+        synchronized (screen) {
+            if (screenStopped.getAsBoolean()) {
+                return;
+            }
+            screen.refresh(now - completeUntil < 0 ? Screen.RefreshType.COMPLETE : Screen.RefreshType.DELTA);
+        }
         framesDrawn++;
         if (submitAfterFrame) {
             submitAfterFrame = false;
