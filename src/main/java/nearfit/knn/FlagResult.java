@@ -16,4 +16,20 @@ package nearfit.knn;
  */
 public record FlagResult(int[] rowIds, double[] looFit, double[] residual, double[] z, boolean[] flagged,
                          int flaggedCount, double median, double mad, FlagScale scale, double threshold) {
+
+    /**
+     * @return the leave-one-out RMSE, sqrt(mean(residual^2)) over the rows whose residual is finite; NaN when
+     *     none is. A pass over the rows on each call, so callers keep the value.
+     */
+    public double looRmse() {
+        double sum = 0;
+        long n = 0;
+        for (double e : residual) {
+            if (Double.isFinite(e)) {
+                sum += e * e;
+                n++;
+            }
+        }
+        return n == 0 ? Double.NaN : Math.sqrt(sum / n);
+    }
 }

@@ -346,6 +346,21 @@ public abstract sealed class Canvas permits BrailleCanvas, AsciiCanvas {
         return classCounts != null;
     }
 
+    /**
+     * Replaces this canvas's points (dot mask, counts, highlighted and class counts) with a copy of
+     * another's of the same size and kind; the other layers are left as they are.
+     */
+    final void copyPointsFrom(Canvas other) {
+        if (other.cols != cols || other.rows != rows || other.dotsX != dotsX || other.dotsY != dotsY) {
+            throw new IllegalArgumentException("points of a " + other.cols + "x" + other.rows + " canvas into a "
+                    + cols + "x" + rows + " one");
+        }
+        System.arraycopy(other.masks[0], 0, masks[0], 0, counts.length);
+        System.arraycopy(other.counts, 0, counts, 0, counts.length);
+        highlightCounts = other.highlightCounts == null ? null : other.highlightCounts.clone();
+        classCounts = other.classCounts == null ? null : other.classCounts.clone();
+    }
+
     /** Clears every layer and count, for reuse across frames of the same size. */
     public final void clear() {
         for (byte[] m : masks) {

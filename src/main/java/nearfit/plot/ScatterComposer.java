@@ -5,7 +5,10 @@ package nearfit.plot;
  * band, curve, flags and crosshair, with axes, ticks and labels around.
  *
  * <p>Cost: one pass over the points with no allocation per point, plus one pass over each
- * line's vertices; auto ranges add one pass to find the extent.
+ * line's vertices; auto ranges add one pass to find the extent. Frames that change only the
+ * curve, band, flags or crosshair skip the pass over the points: bin them once with
+ * {@link #points} and compose each frame over that {@link PointLayer}, which gives the same cells
+ * as {@link #compose(Scene, int, int, CanvasKind)}.
  */
 public final class ScatterComposer {
     private ScatterComposer() {
@@ -20,11 +23,46 @@ public final class ScatterComposer {
      * @throws IllegalArgumentException when the size leaves no room for a plot
      */
     public static ComposedPlot compose(Scene scene, int width, int height, CanvasKind kind) {
-        boolean header = !scene.title().isEmpty() || !scene.yName().isEmpty();
-        PlotFrame f = PlotFrame.layout(width, height, header, !scene.xName().isEmpty(), kind,
-                rows -> yAxis(scene, rows), cols -> xAxis(scene, cols));
+        PlotFrame f = frame(scene, width, height, kind);
         Canvas canvas = kind.newCanvas(f.cols(), f.rows());
         draw(scene, f, canvas);
+        return finish(scene, f, canvas, width, height, kind);
+    }
+
+    /**
+     * Bins a scene's points once for charts of width × height cells.
+     *
+     * @throws IllegalArgumentException when the size leaves no room for a plot
+     */
+    public static PointLayer points(Scene scene, int width, int height, CanvasKind kind) {
+        return new PointLayer(scene, frame(scene, width, height, kind), width, height, kind);
+    }
+
+    /**
+     * Composes a scene over points binned earlier: the same cells as {@link #compose(Scene, int, int,
+     * CanvasKind)} at the points' size and kind, without a pass over the points.
+     *
+     * @throws IllegalArgumentException when {@code points} does not {@link PointLayer#fits fit} the scene
+     *     (other points, colouring or axis ranges): bin them again
+     */
+    public static ComposedPlot compose(Scene scene, PointLayer points) {
+        PlotFrame f = frame(scene, points.width(), points.height(), points.kind());
+        if (!points.fits(scene, f)) {
+            throw new IllegalArgumentException("the binned points do not fit this scene");
+        }
+        Canvas canvas = points.kind().newCanvas(f.cols(), f.rows());
+        points.copyInto(canvas);
+        drawOverPoints(scene, f, canvas);
+        return finish(scene, f, canvas, points.width(), points.height(), points.kind());
+    }
+
+    static PlotFrame frame(Scene scene, int width, int height, CanvasKind kind) {
+        boolean header = !scene.title().isEmpty() || !scene.yName().isEmpty();
+        return PlotFrame.layout(width, height, header, !scene.xName().isEmpty(), kind,
+                rows -> yAxis(scene, rows), cols -> xAxis(scene, cols));
+    }
+
+    private static ComposedPlot finish(Scene scene, PlotFrame f, Canvas canvas, int width, int height, CanvasKind kind) {
         CellGrid.Builder g = CellGrid.builder(width, height);
         canvas.writeTo(g, f.col0(), f.row0());
         AxesPainter.paint(g, f, kind, scene.yName(), scene.title(), scene.xName());
@@ -34,6 +72,11 @@ public final class ScatterComposer {
     /** Draws every layer of a scene into a canvas laid out by a frame of the same size. */
     public static void draw(Scene scene, PlotFrame f, Canvas canvas) {
         binPoints(scene, f, canvas);
+        drawOverPoints(scene, f, canvas);
+    }
+
+    /** Draws band, curve, flags and crosshair, the layers over the points. */
+    private static void drawOverPoints(Scene scene, PlotFrame f, Canvas canvas) {
         if (scene.band() != null) {
             drawBand(scene.band(), f, canvas);
         }
@@ -81,7 +124,7 @@ public final class ScatterComposer {
     }
 
     /** The hot loop: one dot per finite point inside the ranges. */
-    private static void binPoints(Scene s, PlotFrame f, Canvas canvas) {
+    static void binPoints(Scene s, PlotFrame f, Canvas canvas) {
         double[] x = s.x();
         double[] y = s.y();
         int w = f.dotWidth();

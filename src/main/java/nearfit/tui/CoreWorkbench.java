@@ -21,7 +21,9 @@ import nearfit.knn.TuningTable;
 import nearfit.plot.CanvasKind;
 import nearfit.plot.ComposedPlot;
 import nearfit.plot.PngRenderer;
+import nearfit.plot.PointLayer;
 import nearfit.plot.ScatterComposer;
+import nearfit.plot.Scene;
 import nearfit.plot.TuningChart;
 import nearfit.plot.TuningScene;
 import nearfit.plot.WidthStrip;
@@ -48,6 +50,7 @@ public final class CoreWorkbench implements Workbench {
     private final String timeColumn;
     private final References references;
     private final ScenePoints points;
+    private PointLayer pointLayer;
 
     private CoreWorkbench(Table table, String source) {
         this.table = table;
@@ -213,9 +216,16 @@ public final class CoreWorkbench implements Workbench {
     }
 
     @Override
-    public PlotCells plot(PlotScene scene, int width, int height) {
+    public synchronized PlotCells plot(PlotScene scene, int width, int height) {
         CanvasKind kind = scene.ascii() ? CanvasKind.ASCII : CanvasKind.BRAILLE;
-        ComposedPlot composed = ScatterComposer.compose(points.scene(scene), width, height, kind);
+        Scene drawn = points.scene(scene);
+        // The points are binned once per data, range and size; a new curve, band, flags or crosshair is drawn
+        // over a copy of them.
+        if (pointLayer == null || pointLayer.width() != width || pointLayer.height() != height
+                || pointLayer.kind() != kind || !pointLayer.fits(drawn)) {
+            pointLayer = ScatterComposer.points(drawn, width, height, kind);
+        }
+        ComposedPlot composed = ScatterComposer.compose(drawn, pointLayer);
         Cells strip;
         CurveResult c = scene.curve();
         if (c != null && scene.mode() != PlotMode.RESIDUALS_OVER_TIME && !allNaN(c.width())) {

@@ -27,6 +27,10 @@ import nearfit.table.NearfitException;
 public final class Explorer implements AutoCloseable {
     /** Exit status after Ctrl-C, as a shell reports a process ended by SIGINT. */
     public static final int EXIT_INTERRUPTED = 130;
+    /** How long a frame waits for a curve just asked for: below what a key press feels like (common practice). */
+    private static final long FRESH_CURVE_NANOS = 40_000_000L;
+    /** How long after a resize frames are sent whole: a few frames of the 250 ms loop. */
+    private static final long RESIZE_SETTLE_NANOS = 600_000_000L;
 
     private final TerminalScreen screen;
     private final Workbench workbench;
@@ -45,6 +49,16 @@ public final class Explorer implements AutoCloseable {
     private Object curveKey;
     private Object tuningKey;
     private Object flagsKey;
+    /**
+     * The curve key whose job last finished. New tuning or flags wait until the current curve is in, so the
+     * curve has the cores: at start, and after a k change (which makes the flags stale).
+     */
+    private Object curveDoneKey;
+    private boolean submitAfterFrame;
+    private long curveAskedAt;
+    private java.util.function.BooleanSupplier screenStopped = () -> false;
+    /** Frames are sent whole until this {@link System#nanoTime} after a resize. */
+    private long completeUntil = System.nanoTime();
     private int exitStatus;
     private long framesDrawn;
 
@@ -65,6 +79,15 @@ public final class Explorer implements AutoCloseable {
         this.layout = layoutOf(screen.getTerminalSize());
     }
 
+    /**
+     * Tells the explorer when the screen has been stopped (by a shutdown hook on SIGTERM, say): no frame is sent
+     * after that, so nothing is drawn over the restored terminal. The check and the stop both hold the screen's
+     * lock.
+     */
+    public void stopDrawingWhen(java.util.function.BooleanSupplier stopped) {
+        this.screenStopped = stopped;
+    }
+
     /** The current state. */
     public ViewState state() {
         return state;
@@ -80,37 +103,49 @@ public final class Explorer implements AutoCloseable {
         return framesDrawn;
     }
 
-    /** Starts the jobs the first state needs and draws the first frame. */
+    /**
+     * Draws the first frame (the points, as soon as the table is in) and then starts the curve; tuning and
+     * flags start once the first curve is in.
+     */
     public void start() throws IOException {
-        submit();
         draw();
+        submit();
     }
 
-    /** Handles one key: the next state, its effect, the jobs it needs and a frame. */
+    /** Handles one key: the next state, its effect, the jobs it needs and a frame (with a quick curve, if any). */
     public void press(KeyStroke key) throws IOException {
         Step step = KeyPress.next(state, key, context());
         state = step.state();
         perform(step.effect());
         submit();
+        awaitFreshCurve();
         draw();
     }
 
     /** Waits until the background work of the current state is done, applies its results and draws. */
     public void settle() throws IOException, InterruptedException {
-        jobs.awaitIdle(120_000);
-        drainEvents();
-        draw();
+        // A finished curve starts tuning and flags, so wait again until draining starts nothing new.
+        do {
+            jobs.awaitIdle(120_000);
+            drainEvents();
+            draw();
+        } while (jobs.busy());
     }
 
     /** Waits until the curve of the current state is in and drawn, leaving tuning and flags running. */
     public void settleCurve() throws IOException, InterruptedException {
         jobs.awaitIdle(Jobs.Kind.CURVE, 120_000);
-        drainEvents();
-        draw();
+        if (drainEvents() || submitAfterFrame) {
+            draw();
+        }
     }
 
     /** Waits until one kind of background work is done ("curve", "tuning" or "flags"), then draws. */
     public void settle(String kind) throws IOException, InterruptedException {
+        // Tuning and flags are started by the first curve, so that comes first.
+        jobs.awaitIdle(Jobs.Kind.CURVE, 600_000);
+        drainEvents();
+        draw();
         jobs.awaitIdle(Jobs.Kind.valueOf(kind.toUpperCase(java.util.Locale.ROOT)), 600_000);
         drainEvents();
         draw();
@@ -132,6 +167,7 @@ public final class Explorer implements AutoCloseable {
                 handle(e);
                 e = events.poll();
             }
+            awaitFreshCurve();
             if (!state.quit()) {
                 draw();
             }
@@ -147,6 +183,11 @@ public final class Explorer implements AutoCloseable {
             submit();
         } else if (e instanceof Jobs.Done d) {
             apply(d);
+            if (d.kind() == Jobs.Kind.CURVE && jobs.isCurrent(d)) {
+                // Tuning and flags are started after the frame that shows this curve (see draw).
+                curveDoneKey = curveKey;
+                submitAfterFrame = true;
+            }
         }
     }
 
@@ -177,10 +218,36 @@ public final class Explorer implements AutoCloseable {
         reader.start();
     }
 
-    private void drainEvents() throws IOException {
+    /** Handles every queued event; returns whether there was any. */
+    private boolean drainEvents() throws IOException {
+        boolean any = false;
         Object e;
         while ((e = events.poll()) != null) {
             handle(e);
+            any = true;
+        }
+        return any;
+    }
+
+    /**
+     * Waits a little for a curve that has just been asked for, handling whatever arrives meanwhile, so that a
+     * k change usually draws one frame, with the new curve, instead of one without and one with it.
+     */
+    private void awaitFreshCurve() throws IOException {
+        long end = curveAskedAt + FRESH_CURVE_NANOS;
+        long left;
+        while (curveKey != null && !curveKey.equals(curveDoneKey) && !state.quit()
+                && (left = end - System.nanoTime()) > 0) {
+            Object e;
+            try {
+                e = events.poll(left, TimeUnit.NANOSECONDS);
+            } catch (InterruptedException stop) {
+                Thread.currentThread().interrupt();
+                return;
+            }
+            if (e != null) {
+                handle(e);
+            }
         }
     }
 
@@ -237,16 +304,18 @@ public final class Explorer implements AutoCloseable {
             curveKey = ck;
             generation++;
             results = results.withCurve(results.curve(), 0);
+            curveAskedAt = System.nanoTime();
             jobs.start(Jobs.Kind.CURVE, generation, c -> workbench.curve(model, request, c));
         }
-        ModelSettings anyK = model.withK(1);
-        if (!anyK.equals(tuningKey)) {
-            tuningKey = anyK;
-            generation++;
-            results = results.withTuning(null, 0);
-            jobs.start(Jobs.Kind.TUNING, generation, c -> workbench.tune(model, c));
-        }
         List<Object> fk = java.util.Arrays.asList(model, state.groupColumn());
+        if (request != null && !ck.equals(curveDoneKey)) {
+            // Stale flags would only slow the curve down; they start again once it is in.
+            if (!fk.equals(flagsKey)) {
+                jobs.cancel(Jobs.Kind.FLAGS);
+            }
+            return;
+        }
+        // Flags first: they are drawn on the plot, tuning only in its panel and the header; both share a lane.
         if (!fk.equals(flagsKey)) {
             flagsKey = fk;
             generation++;
@@ -255,6 +324,13 @@ public final class Explorer implements AutoCloseable {
             results = results.withFlags(results.flags(), 0);
             String group = state.groupColumn();
             jobs.start(Jobs.Kind.FLAGS, generation, c -> workbench.flags(model, group, c));
+        }
+        ModelSettings anyK = model.withK(1);
+        if (!anyK.equals(tuningKey)) {
+            tuningKey = anyK;
+            generation++;
+            results = results.withTuning(null, 0);
+            jobs.start(Jobs.Kind.TUNING, generation, c -> workbench.tune(model, c));
         }
     }
 
@@ -319,8 +395,10 @@ public final class Explorer implements AutoCloseable {
     /** Draws a frame, first taking in a new terminal size (which may ask for a new curve). */
     void draw() throws IOException {
         TerminalSize resized = screen.doResizeIfNecessary();
+        long now = System.nanoTime();
         if (resized != null) {
             layout = layoutOf(resized);
+            completeUntil = now + RESIZE_SETTLE_NANOS;
             submit();
         }
         results = new Results(results.curve(), jobs.progress(Jobs.Kind.CURVE), results.tuning(),
@@ -329,10 +407,20 @@ public final class Explorer implements AutoCloseable {
         Pen pen = new Pen(screen.newTextGraphics(), look, layout.width(), layout.height(), characters);
         ScreenPainter.paint(pen, layout, state, results, frameInput(), sketches);
         screen.setCursorPosition(null);
-        // After a resize the terminal may have reflowed or cleared its cells, so the frame is sent whole;
+        // After a resize the terminal may reflow or clear its cells, even after the first frame at the new size
+        // (a multiplexer over SSH may apply its reflow late), so frames are sent whole for a short while;
         // otherwise only the cells that changed.
-        screen.refresh(resized != null ? Screen.RefreshType.COMPLETE : Screen.RefreshType.DELTA);
+        synchronized (screen) {
+            if (screenStopped.getAsBoolean()) {
+                return;
+            }
+            screen.refresh(now - completeUntil < 0 ? Screen.RefreshType.COMPLETE : Screen.RefreshType.DELTA);
+        }
         framesDrawn++;
+        if (submitAfterFrame) {
+            submitAfterFrame = false;
+            submit();
+        }
     }
 
     private static Layout layoutOf(TerminalSize size) {

@@ -47,6 +47,6 @@ final class FlaggedRows {
             rows.add(new FlaggedRow(row, table.lineOf(row), when, label, inputs, data.response()[i], f.looFit()[i],
                     f.residual()[i], z[i]));
         }
-        return new FlagResult(f.rowIds().length, n, Double.NaN, f.threshold(), rows);
+        return new FlagResult(f.rowIds().length, n, f.looRmse(), f.threshold(), rows);
     }
 }

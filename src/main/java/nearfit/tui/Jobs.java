@@ -10,8 +10,10 @@ import java.util.function.Function;
 /**
  * The explorer's background work: one executor with two lanes, at most one live job per kind, each job
  * tagged with the generation of the state that asked for it. The curve has a lane of its own, so a k change
- * never waits behind leave-one-out work; flags and tuning share the other lane, one after the other, so
- * that on a two-core machine one core stays free for the curve and the frame. Starting a job cancels the older one of its kind, and a result
+ * never waits behind leave-one-out work; flags and tuning share the other lane, one after the other (each
+ * job itself runs on all cores, so they would only compete if run side by side). While a curve is being
+ * computed, leave-one-out work waits at its next cancellation check (the knn package checks before each
+ * chunk of rows), so a k change gets the cores at once and its frame is not slowed by tuning. Starting a job cancels the older one of its kind, and a result
  * whose generation is no longer the latest of its kind is dropped by {@link #isCurrent}.
  *
  * <p>Finished jobs post a {@link Done} to the explorer's event queue; progress posts {@link #TICK} at most
@@ -29,6 +31,15 @@ final class Jobs implements AutoCloseable {
     /** Posted when a running job's progress moved on, so the header can be redrawn. */
     static final Object TICK = new Object();
 
+    /**
+     * Longest a leave-one-out worker waits for one curve; a curve takes well under a second, so this only
+     * guards against a curve that never ends.
+     */
+    private static final long MAX_PAUSE_MILLIS = 2_000;
+
+    private final Object curveGate = new Object();
+    /** Curve jobs running now; guarded by {@link #curveGate}. */
+    private int curvesRunning;
     private final ExecutorService curveLane;
     private final ExecutorService longLane;
     private final BlockingQueue<Object> events;
@@ -55,7 +66,7 @@ final class Jobs implements AutoCloseable {
         if (old != null) {
             old.cancelled = true;
         }
-        Control c = new Control();
+        Control c = new Control(kind != Kind.CURVE);
         running[kind.ordinal()] = c;
         latest[kind.ordinal()] = generation;
         synchronized (this) {
@@ -66,6 +77,9 @@ final class Jobs implements AutoCloseable {
     }
 
     private <T> void run(Kind kind, long generation, Control c, Function<JobControl, T> work) {
+        if (kind == Kind.CURVE) {
+            curveStarted();
+        }
         try {
             if (!c.cancelled) {
                 T value = work.apply(c);
@@ -78,11 +92,43 @@ final class Jobs implements AutoCloseable {
         } catch (RuntimeException | Error e) {
             events.add(new Done(kind, generation, null, e));
         } finally {
+            if (kind == Kind.CURVE) {
+                curveEnded();
+            }
             c.finished = true;
             synchronized (this) {
                 outstanding--;
                 outstandingOf[kind.ordinal()]--;
                 notifyAll();
+            }
+        }
+    }
+
+    private void curveStarted() {
+        synchronized (curveGate) {
+            curvesRunning++;
+        }
+    }
+
+    private void curveEnded() {
+        synchronized (curveGate) {
+            curvesRunning--;
+            curveGate.notifyAll();
+        }
+    }
+
+    /** Waits while a curve job runs, at most {@link #MAX_PAUSE_MILLIS}, or until {@code c} is cancelled. */
+    private void yieldToCurve(Control c) {
+        long end = System.currentTimeMillis() + MAX_PAUSE_MILLIS;
+        synchronized (curveGate) {
+            long left;
+            while (curvesRunning > 0 && !c.cancelled && (left = end - System.currentTimeMillis()) > 0) {
+                try {
+                    curveGate.wait(left);
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                    return;
+                }
             }
         }
     }
@@ -108,6 +154,21 @@ final class Jobs implements AutoCloseable {
             }
             wait(left);
         }
+    }
+
+    /** Cancels the running job of a kind, if any; its result, if it still comes, is dropped. */
+    void cancel(Kind kind) {
+        Control c = running[kind.ordinal()];
+        if (c != null) {
+            c.cancelled = true;
+        }
+        running[kind.ordinal()] = null;
+        latest[kind.ordinal()] = -1; // generations start at 1, so no job is current
+    }
+
+    /** Whether any job is running or queued. */
+    synchronized boolean busy() {
+        return outstanding > 0;
     }
 
     /** Waits until no job of one kind is running or queued; for benchmarks. */
@@ -142,7 +203,21 @@ final class Jobs implements AutoCloseable {
     /** A job's flags that also post a {@link #TICK} when its progress passes a percentage point. */
     private final class Control extends JobFlags {
         volatile boolean finished;
+        private final boolean yields;
         private int lastPercent = -1;
+
+        Control(boolean yields) {
+            this.yields = yields;
+        }
+
+        /** For leave-one-out work, called by the engine's workers between chunks: first gives way to a curve. */
+        @Override
+        public boolean cancelled() {
+            if (yields && !cancelled) {
+                yieldToCurve(this);
+            }
+            return cancelled;
+        }
 
         @Override
         public void progress(double f) {

@@ -12,9 +12,6 @@ final class KnnChoices {
     private KnnChoices() {
     }
 
-    /** Worker threads for leave-one-out runs: all processors but one, which stays with the curve and frame. */
-    static final int LONG_THREADS = Math.max(1, THREADS - 1);
-
     /**
      * Flags divide each leave-one-out residual by the local spread of its neighbours, as {@code check}
      * does by default: on logs where most rows sit below cut-in or at rated power the global MAD is
@@ -25,9 +22,13 @@ final class KnnChoices {
                 band(m.band()), KnnSettings.DEFAULT_FLAG_THRESHOLD, FlagScale.LOCAL_SD, THREADS);
     }
 
-    /** The settings for tuning and flags, on {@link #LONG_THREADS} threads. */
+    /**
+     * The settings for tuning and flags: the engine's batch leave-one-out on all {@link #THREADS}. Leaving a
+     * core to the curve halved the flags' speed on two cores, and a frame no longer needs one: a k change
+     * redraws over points binned once.
+     */
     static KnnSettings longSettings(ModelSettings m) {
-        return settings(m).withThreads(LONG_THREADS);
+        return settings(m);
     }
 
     static nearfit.knn.Metric metric(Metric m) {

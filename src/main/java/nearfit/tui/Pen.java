@@ -34,10 +34,20 @@ final class Pen {
 
     /** Blanks the whole buffer. */
     void clear() {
+        clearRows(0, height);
+    }
+
+    /** Blanks rows [from, to) across the whole width. */
+    void clearRows(int from, int to) {
         g.setForegroundColor(TextColor.ANSI.DEFAULT);
         g.setBackgroundColor(TextColor.ANSI.DEFAULT);
         g.clearModifiers();
-        g.fill(' ');
+        int top = Math.max(0, from);
+        int bottom = Math.min(height, to);
+        if (bottom > top) {
+            g.fillRectangle(new com.googlecode.lanterna.TerminalPosition(0, top),
+                    new com.googlecode.lanterna.TerminalSize(width, bottom - top), ' ');
+        }
     }
 
     /** Writes text from a cell rightwards in one ink, clipped at the right edge. */

@@ -24,8 +24,30 @@ final class ScenePoints {
     private Object pointsKey;
     private Points points;
 
-    /** Row ids and their coordinates and codes on the plot. Arrays never change once built. */
-    private record Points(int[] rows, double[] x, double[] y, int[] codes) {
+    /**
+     * Row ids and their coordinates and codes on the plot, with the finite extent of y (NaN when none).
+     * Arrays never change once built.
+     */
+    private record Points(int[] rows, double[] x, double[] y, int[] codes, double yLow, double yHigh) {
+        Points(int[] rows, double[] x, double[] y, int[] codes) {
+            this(rows, x, y, codes, lowest(y), highest(y));
+        }
+    }
+
+    private static double lowest(double[] v) {
+        double m = Double.POSITIVE_INFINITY;
+        for (double d : v) {
+            m = d < m ? d : m;
+        }
+        return m == Double.POSITIVE_INFINITY ? Double.NaN : m;
+    }
+
+    private static double highest(double[] v) {
+        double m = Double.NEGATIVE_INFINITY;
+        for (double d : v) {
+            m = d > m ? d : m;
+        }
+        return m == Double.NEGATIVE_INFINITY ? Double.NaN : m;
     }
 
     ScenePoints(Table table, References references) {
@@ -43,6 +65,13 @@ final class ScenePoints {
             b.timeAxis();
         } else {
             b.xRange(s.request().from(), s.request().to());
+        }
+        if (!Double.isNaN(p.yLow())) {
+            // The y axis follows the points only, padded a little, so that a new curve or band (a k change)
+            // keeps the axes and the plot package's binned points stay valid; the fit is a weighted mean of
+            // responses, so it stays inside this range (a +-2 SD band may be clipped at the edges).
+            double pad = 0.02 * Math.max(p.yHigh() - p.yLow(), Math.abs(p.yLow()) * 1e-9 + 1e-12);
+            b.yRange(p.yLow() - pad, p.yHigh() + pad);
         }
         boolean category = table.column(s.model().response()) instanceof CategoryColumn;
         if (category && !residuals) {

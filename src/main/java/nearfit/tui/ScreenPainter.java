@@ -15,7 +15,15 @@ final class ScreenPainter {
     }
 
     static void paint(Pen pen, Layout layout, ViewState s, Results r, FrameInput in, Sketches sketches) {
-        pen.clear();
+        if (!layout.fits() || in.request() == null) {
+            pen.clear();
+        } else {
+            // The plot and strip write every cell of their rows, so only the text rows are blanked first:
+            // that halves the cells handed to the terminal library per frame.
+            pen.clearRows(0, layout.plotTop());
+            pen.clearRows(layout.plotTop() + layout.plotHeight(), layout.stripRow());
+            pen.clearRows(layout.stripRow() + 1, layout.height());
+        }
         if (!layout.fits()) {
             tooSmall(pen, layout);
             return;

@@ -16,23 +16,31 @@ public record StartSettings(List<String> inputs, String response, int k) {
     /** k when none is asked: small enough for a small file, smooth enough for a long log (common practice). */
     static final int DEFAULT_K = 20;
 
+    /** The demo site's response and first input: a turbine's power curve. */
+    static final String SITE_RESPONSE = "power_kw";
+    static final String SITE_INPUT = "wind_ms";
+
     public StartSettings {
         inputs = List.copyOf(inputs);
     }
 
     /**
-     * The first state for these columns. Without {@code -y} the response is the last number column; without
-     * {@code -x} the input is the first number column that is not the response.
+     * The first state for these columns. With neither {@code -y} nor {@code -x}, a file with the demo site's
+     * columns {@value #SITE_RESPONSE} and {@value #SITE_INPUT} opens on power against wind speed, whatever its
+     * name. Otherwise, without {@code -y} the response is the last number column; without {@code -x} the input
+     * is the first number column that is not the response.
      *
      * @throws NearfitException naming the option when a column is missing or of the wrong kind
      */
     public ViewState initialState(List<ColumnInfo> columns, int rows) {
-        String y = response != null ? response : lastNumber(columns, inputs);
+        boolean site = response == null && inputs.isEmpty() && isNumber(columns, SITE_RESPONSE)
+                && isNumber(columns, SITE_INPUT);
+        String y = site ? SITE_RESPONSE : response != null ? response : lastNumber(columns, inputs);
         if (y == null) {
             throw new NearfitException("the file has no number column to use as the response");
         }
         checkColumn(columns, y, "-y", false);
-        List<String> x = new ArrayList<>(inputs);
+        List<String> x = new ArrayList<>(site ? List.of(SITE_INPUT) : inputs);
         if (x.isEmpty()) {
             for (ColumnInfo c : columns) {
                 if (c.kind() == ColumnKind.NUMBER && !c.name().equals(y)) {
@@ -52,6 +60,15 @@ public record StartSettings(List<String> inputs, String response, int k) {
         }
         int chosenK = k > 0 ? k : Math.max(1, Math.min(DEFAULT_K, rows - 1));
         return ViewState.initial(y, x, chosenK);
+    }
+
+    private static boolean isNumber(List<ColumnInfo> columns, String name) {
+        for (ColumnInfo c : columns) {
+            if (c.name().equals(name)) {
+                return c.kind() == ColumnKind.NUMBER;
+            }
+        }
+        return false;
     }
 
     private static String lastNumber(List<ColumnInfo> columns, List<String> inputs) {

@@ -75,6 +75,7 @@ public final class TerminalSession {
             } else {
                 ViewState first = start.initialState(wb.columns(), wb.rowsUsed(""));
                 try (Explorer explorer = new Explorer(screen, wb, first, look)) {
+                    explorer.stopDrawingWhen(session::isStopped);
                     status = explorer.run();
                 }
             }
@@ -102,16 +103,23 @@ public final class TerminalSession {
         return status;
     }
 
+    /** Whether the screen has been stopped; read under the screen's lock. */
+    boolean isStopped() {
+        return stopped;
+    }
+
     /** Stops the screen and restores the terminal's settings; safe to call twice and from the shutdown hook. */
-    synchronized void stop() {
-        if (stopped) {
-            return;
-        }
-        stopped = true;
-        try {
-            screen.stopScreen();
-        } catch (IOException | RuntimeException e) {
-            // Nothing more can be done for a terminal that is gone.
+    void stop() {
+        synchronized (screen) {
+            if (stopped) {
+                return;
+            }
+            stopped = true;
+            try {
+                screen.stopScreen();
+            } catch (IOException | RuntimeException e) {
+                // Nothing more can be done for a terminal that is gone.
+            }
         }
         try {
             screen.getTerminal().close();

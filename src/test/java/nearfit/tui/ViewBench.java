@@ -28,7 +28,8 @@ import nearfit.table.LoadOptions;
  * <p>Arguments: FILE RESPONSE INPUTS REPEATS [flags]. Prints "name value" lines.
  */
 public final class ViewBench {
-    private static final int WARMUP = 2;
+    /** Presses before timing: the first dozen run before the JIT has compiled the frame path (about 3x slower). */
+    private static final int WARMUP = 10;
 
     private ViewBench() {
     }
