@@ -58,7 +58,7 @@ class ModelArchiveTest {
         byte[] b = Files.readAllBytes(p);
         // The last entry's data sits just before the central directory; flip a byte in the x0 data,
         // found by its known little-endian pattern for 1.5.
-        int at = indexOf(b, new byte[] {0, 0, 0, 0, 0, 0, (byte) 0xF8, 0x3F});
+        int at = Bytes.indexOf(b, new byte[] {0, 0, 0, 0, 0, 0, (byte) 0xF8, 0x3F});
         b[at] ^= 0x01;
         Files.write(p, b);
         NearfitException e = assertThrows(NearfitException.class, () -> ModelArchive.read(p));
@@ -122,16 +122,4 @@ class ModelArchiveTest {
         }
     }
 
-    private static int indexOf(byte[] hay, byte[] needle) {
-        outer:
-        for (int i = 0; i + needle.length <= hay.length; i++) {
-            for (int j = 0; j < needle.length; j++) {
-                if (hay[i + j] != needle[j]) {
-                    continue outer;
-                }
-            }
-            return i;
-        }
-        throw new AssertionError("pattern not found");
-    }
 }

@@ -132,7 +132,7 @@ class ModelFileTest {
         Path p = saved(sample(false));
         byte[] b = Files.readAllBytes(p);
         // 2010.0 little-endian: 00 00 00 00 00 68 9F 40; flip a bit inside the response array.
-        int at = indexOf(b, new byte[] {0, 0, 0, 0, 0, 0x68, (byte) 0x9F, 0x40});
+        int at = Bytes.indexOf(b, new byte[] {0, 0, 0, 0, 0, 0x68, (byte) 0x9F, 0x40});
         b[at + 5] ^= 0x10;
         Files.write(p, b);
         NearfitException e = assertThrows(NearfitException.class, () -> ModelFile.read(p));
@@ -180,16 +180,4 @@ class ModelFileTest {
         return arrays;
     }
 
-    private static int indexOf(byte[] hay, byte[] needle) {
-        outer:
-        for (int i = 0; i + needle.length <= hay.length; i++) {
-            for (int j = 0; j < needle.length; j++) {
-                if (hay[i + j] != needle[j]) {
-                    continue outer;
-                }
-            }
-            return i;
-        }
-        throw new AssertionError("pattern not found");
-    }
 }
