@@ -32,9 +32,8 @@ final class FitCommand implements Callable<Integer> {
     @Mixin
     ColumnOptions columns;
 
-    @Option(names = "--k", paramLabel = "K|auto", defaultValue = "auto",
-            description = "Neighbours per estimate, or auto for the one-SE k of tuning (default: ${DEFAULT-VALUE}).")
-    String k;
+    @Mixin
+    KOption k;
 
     @Option(names = "--threshold", paramLabel = "Z", defaultValue = "3.5",
             description = "|z| above which check flags a row (default: ${DEFAULT-VALUE}).")
@@ -54,7 +53,7 @@ final class FitCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        int chosenK = OptionValues.k("--k", k);
+        int chosenK = k.value();
         double z = OptionValues.positiveNumber("--threshold", threshold);
         tuning.validate();
         List<Path> inputs = "-".equals(file) ? List.of() : List.of(Path.of(file));

@@ -53,9 +53,8 @@ final class PlotCommand implements Callable<Integer> {
     @Mixin
     ColumnOptions columns;
 
-    @Option(names = "--k", paramLabel = "K|auto", defaultValue = "auto",
-            description = "Neighbours per estimate, or auto for the one-SE k of tuning (default: ${DEFAULT-VALUE}).")
-    String k;
+    @Mixin
+    KOption k;
 
     @Option(names = "--size", paramLabel = "WxH",
             description = "Text: cells (default 100x30); PNG: pixels (default 1200x800).")
@@ -78,7 +77,7 @@ final class PlotCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        int chosenK = OptionValues.k("--k", k);
+        int chosenK = k.value();
         int[] dims = size == null ? (png == null ? TEXT_SIZE : PNG_SIZE)
                 : png == null ? OptionValues.size("--size", size, 20, 1000) : OptionValues.size("--size", size, 120, 8000);
         tuning.validate();
