@@ -1,6 +1,5 @@
 package nearfit.cli;
 
-import java.util.ArrayList;
 import java.util.List;
 
 import picocli.CommandLine.Option;
@@ -25,17 +24,5 @@ final class ColumnOptions {
 
     String response() {
         return response.trim();
-    }
-
-    /** Every column the command needs from the file: inputs, response and the extras given. */
-    List<String> needed(String... extras) {
-        List<String> all = new ArrayList<>(inputs());
-        all.add(response());
-        for (String e : extras) {
-            if (e != null && !all.contains(e)) {
-                all.add(e);
-            }
-        }
-        return all;
     }
 }

@@ -53,8 +53,9 @@ final class DescribeCommand implements Callable<Integer> {
         Table table = CsvLoader.load(file, options);
         if (progress) {
             err.print("\r\033[K");
-            err.flush();
         }
+        // Warnings are about the data, not progress: on standard error even with --quiet, and in the report.
+        SourceTable.printWarnings(table.report(), err);
         List<ColumnSummary> summaries = new ArrayList<>();
         for (Column c : table.columns()) {
             summaries.add(ColumnSummary.of(c));
@@ -83,6 +84,10 @@ final class DescribeCommand implements Callable<Integer> {
                     .key("count").value(s.count()).key("missing").value(s.missing()).key("bad").value(s.bad())
                     .key("min").value(s.min()).key("max").value(s.max()).key("mean").value(s.mean())
                     .key("sd").value(s.sd()).key("median").value(s.median()).endObject();
+        }
+        w.endArray().key("warnings").beginArray();
+        for (String warning : report.warnings()) {
+            w.value(warning);
         }
         return w.endArray().endObject().toString();
     }
@@ -129,6 +134,9 @@ final class DescribeCommand implements Callable<Integer> {
         }
         out.append(String.format(Locale.ROOT, "loaded %.1f MB in %.2f s (%.0f MB/s)%n", r.bytes() / 1e6, r.seconds(),
                 r.megabytesPerSecond()));
+        for (String w : r.warnings()) {
+            out.append("warning: ").append(w).append('\n');
+        }
     }
 
     private static String[] cells(ColumnSummary s) {

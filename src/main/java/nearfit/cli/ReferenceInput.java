@@ -24,10 +24,9 @@ record ReferenceInput(SourceTable source, ReferenceData data, List<String> respo
     static ReferenceInput load(String file, ColumnOptions columns, ModelOptions model, PrintWriter err) {
         List<String> inputs = columns.inputs();
         model.validate();
-        boolean keepAll = model.where != null && !model.where.isBlank();
-        SourceTable source = SourceTable.load(file, keepAll ? List.of() : columns.needed(model.group),
-                name -> inputs.contains(name) ? "-x" : name.equals(columns.response()) ? "-y" : "--group",
-                model.threads(), model.quiet, err);
+        ColumnRequest request = ColumnRequest.NONE.require("-x", inputs).require("-y", columns.response())
+                .require("--group", model.group).where(model.where);
+        SourceTable source = SourceTable.load(file, request, model.threads(), model.quiet, err);
         RowSet rows = source.rows(model.where);
         double[][] x = new double[inputs.size()][];
         for (int j = 0; j < x.length; j++) {

@@ -50,18 +50,16 @@ record ScoredRows(SourceTable source, RowSet rows, List<NumericColumn> inputs, d
     static ScoredRows score(RestoredModel model, String file, ModelOptions options, PrintWriter err) {
         ReferenceModel stored = model.stored();
         ModelColumns columns = stored.columns();
-        // Every column is kept: the response and the group may be absent, and --where may name any column.
-        SourceTable source = SourceTable.load(file, List.of(), options.threads(), options.quiet, err);
+        // Only the model's columns and those of --where are kept; a file of new readings may lack the
+        // response (predict) or the group.
+        ColumnRequest request = ColumnRequest.NONE.require("model input", columns.inputs())
+                .allow(columns.response(), columns.group()).where(options.where);
+        SourceTable source = SourceTable.load(file, request, options.threads(), options.quiet, err);
         RowSet rows = source.rows(options.where);
         List<NumericColumn> inputs = new ArrayList<>();
         double[][] x = new double[columns.inputs().size()][];
         for (int j = 0; j < x.length; j++) {
-            String name = columns.inputs().get(j);
-            if (!source.table().hasColumn(name)) {
-                throw NearfitException.inFile(file, "has no column \"" + name + "\", an input of the model (columns: "
-                        + String.join(", ", source.table().names()) + ")");
-            }
-            inputs.add(source.numeric("model input", name));
+            inputs.add(source.numeric("model input", columns.inputs().get(j)));
             x[j] = SourceTable.values(inputs.get(j), rows);
         }
         CategoryColumn group = groupColumn(source, columns.group());

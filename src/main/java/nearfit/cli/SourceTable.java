@@ -17,6 +17,7 @@ import nearfit.table.CategoryColumn;
 import nearfit.table.Column;
 import nearfit.table.CsvLoader;
 import nearfit.table.LoadOptions;
+import nearfit.table.LoadReport;
 import nearfit.table.NearfitException;
 import nearfit.table.NumericColumn;
 import nearfit.table.RowSet;
@@ -41,19 +42,12 @@ final class SourceTable {
     }
 
     /**
-     * Loads {@code name} ({@code -} for standard input). {@code keep} lists the columns needed, or is
-     * empty to keep every column (needed when a row condition may name any column).
+     * Loads {@code name} ({@code -} for standard input), keeping only the columns {@code request} asks
+     * for. Unless {@code quiet}, says on {@code err} how many rows were read and how many bad cells they
+     * held; the load report's warnings (say, the file changed while it was read) go to {@code err} even
+     * when quiet, since they are about the data, not progress.
      */
-    static SourceTable load(String name, List<String> keep, int threads, boolean quiet, PrintWriter err) {
-        return load(name, keep, column -> "column", threads, quiet, err);
-    }
-
-    /**
-     * As {@link #load(String, List, int, boolean, PrintWriter)}; {@code optionOf} names the option
-     * that asked for a kept column, for the message when the file lacks it.
-     */
-    static SourceTable load(String name, List<String> keep, java.util.function.UnaryOperator<String> optionOf,
-                            int threads, boolean quiet, PrintWriter err) {
+    static SourceTable load(String name, ColumnRequest request, int threads, boolean quiet, PrintWriter err) {
         boolean stdin = "-".equals(name);
         Path path = stdin ? null : Path.of(name);
         if (!stdin && !Files.isRegularFile(path)) {
@@ -61,35 +55,46 @@ final class SourceTable {
         }
         CompletableFuture<String> sha = stdin ? CompletableFuture.completedFuture(null)
                 : CompletableFuture.supplyAsync(() -> sha256Of(path, name));
-        LoadOptions options = LoadOptions.builder().threads(threads).keepColumns(keep).build();
+        LoadOptions options = LoadOptions.builder().threads(threads).keepColumns(request.required())
+                .keepIfPresent(request.optional()).build();
         long start = System.nanoTime();
         Table table;
         try {
             table = CsvLoader.load(name, options);
         } catch (NearfitException e) {
-            throw unknownKeptColumn(e, name, keep, optionOf);
+            throw unknownKeptColumn(e, name, request);
         }
         long size = stdin ? -1 : sizeOf(path, name);
+        LoadReport report = table.report();
         if (!quiet) {
-            err.printf(Locale.ROOT, "nearfit: read %d rows from %s in %.1f s%n", table.rowCount(), name,
-                    (System.nanoTime() - start) / 1e9);
-            err.flush();
+            String bad = report.badCells() == 0 ? "" : String.format(Locale.ROOT, " (%d bad cells, read as missing)",
+                    report.badCells());
+            err.printf(Locale.ROOT, "nearfit: read %d rows from %s in %.1f s%s%n", table.rowCount(), name,
+                    (System.nanoTime() - start) / 1e9, bad);
         }
+        printWarnings(report, err);
         return new SourceTable(name, table, size, sha);
+    }
+
+    /** Each warning of a load report as one line {@code nearfit: warning: ...}, then flushes. */
+    static void printWarnings(LoadReport report, PrintWriter err) {
+        for (String w : report.warnings()) {
+            err.println("nearfit: warning: " + w);
+        }
+        err.flush();
     }
 
     /**
      * The loader refuses a kept column the file lacks, naming the column and listing the others;
-     * restates that in the commands' form, naming the option.
+     * restates that in the commands' form, naming the option that asked for it.
      */
-    private static NearfitException unknownKeptColumn(NearfitException e, String name, List<String> keep,
-                                                      java.util.function.UnaryOperator<String> optionOf) {
+    private static NearfitException unknownKeptColumn(NearfitException e, String name, ColumnRequest request) {
         String marker = "the columns are ";
         int at = e.detail().indexOf(marker);
-        if (e.column() == null || !keep.contains(e.column()) || at < 0) {
+        if (e.column() == null || !request.required().contains(e.column()) || at < 0) {
             return e;
         }
-        return new NearfitException(optionOf.apply(e.column()) + ": no column \"" + e.column() + "\" in " + name
+        return new NearfitException(request.optionOf(e.column()) + ": no column \"" + e.column() + "\" in " + name
                 + " (columns: " + e.detail().substring(at + marker.length()) + ")");
     }
 

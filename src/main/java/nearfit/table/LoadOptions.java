@@ -24,6 +24,7 @@ public final class LoadOptions {
     private final int threads;
     private final LoadProgress progress;
     private final List<String> keepColumns;
+    private final List<String> keepIfPresent;
     private final BooleanSupplier cancelSignal;
     private final long parallelMinBytes;
 
@@ -34,6 +35,7 @@ public final class LoadOptions {
         this.threads = b.threads;
         this.progress = b.progress;
         this.keepColumns = b.keepColumns;
+        this.keepIfPresent = b.keepIfPresent;
         this.cancelSignal = b.cancelSignal;
     }
 
@@ -50,6 +52,7 @@ public final class LoadOptions {
         b.threads = threads;
         b.progress = progress;
         b.keepColumns = keepColumns;
+        b.keepIfPresent = keepIfPresent;
         b.cancelSignal = cancelSignal;
         b.parallelMinBytes = parallelMinBytes;
         return b;
@@ -75,9 +78,22 @@ public final class LoadOptions {
         return progress;
     }
 
-    /** The columns to keep by name, in file order; empty keeps all. */
+    /**
+     * The columns to keep by name; the table holds them in file order. When both this list and
+     * {@link #keepIfPresent()} are empty every column is kept.
+     */
     public List<String> keepColumns() {
         return keepColumns;
+    }
+
+    /** Columns kept when the file has them and skipped without complaint when it has not. */
+    public List<String> keepIfPresent() {
+        return keepIfPresent;
+    }
+
+    /** Whether every column is kept: no column was named to keep, required or optional. */
+    boolean keepsAll() {
+        return keepColumns.isEmpty() && keepIfPresent.isEmpty();
     }
 
     /** Polled about once per block; when it answers true the load throws {@link LoadCancelledException}. */
@@ -97,6 +113,7 @@ public final class LoadOptions {
         private int threads = Runtime.getRuntime().availableProcessors();
         private LoadProgress progress = LoadProgress.NONE;
         private List<String> keepColumns = List.of();
+        private List<String> keepIfPresent = List.of();
         private BooleanSupplier cancelSignal = () -> false;
         private long parallelMinBytes = 8L << 20;
 
@@ -136,6 +153,15 @@ public final class LoadOptions {
         /** Keeps only these columns (by header name or generated name); an unknown name fails the load. */
         public Builder keepColumns(List<String> names) {
             this.keepColumns = List.copyOf(names);
+            return this;
+        }
+
+        /**
+         * Also keeps these columns when the file has them (say a response that a file of new readings
+         * may lack); a name the file lacks is skipped. Names may repeat those of {@link #keepColumns}.
+         */
+        public Builder keepIfPresent(List<String> names) {
+            this.keepIfPresent = List.copyOf(names);
             return this;
         }
 

@@ -17,16 +17,27 @@ import java.util.List;
  * @param badCells       total cells that did not parse in number or time columns
  * @param badExamples    the first bad cells (line, column, text)
  * @param nanos          wall-clock time of the load in nanoseconds
+ * @param warnings       one line each about the input as a whole, without the "nearfit: " prefix
+ *                       (for example a file that grew while it was read); empty for most loads
  */
 public record LoadReport(String source, int rows, long bytes, char delimiter, boolean headerPresent,
         boolean decimalComma, long shortRows, long longRows, List<BadCell> raggedExamples, long badCells,
-        List<BadCell> badExamples, long nanos) {
+        List<BadCell> badExamples, long nanos, List<String> warnings) {
     /** How many examples of each kind a report keeps. */
     public static final int EXAMPLES = 10;
 
     public LoadReport {
         raggedExamples = List.copyOf(raggedExamples);
         badExamples = List.copyOf(badExamples);
+        warnings = List.copyOf(warnings);
+    }
+
+    /** This report with one more warning. */
+    public LoadReport withWarning(String warning) {
+        List<String> w = new java.util.ArrayList<>(warnings);
+        w.add(warning);
+        return new LoadReport(source, rows, bytes, delimiter, headerPresent, decimalComma, shortRows, longRows,
+                raggedExamples, badCells, badExamples, nanos, w);
     }
 
     /** Rows with the wrong number of fields, short and long together. */

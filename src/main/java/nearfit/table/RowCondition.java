@@ -81,6 +81,24 @@ public final class RowCondition {
         return new RowCondition(text, clauses, tests);
     }
 
+    /**
+     * The column names a condition uses, in order of first mention, checking only its syntax, so that
+     * a loader can keep just those columns. Fails as {@link #parse} does on a malformed condition.
+     */
+    public static List<String> columnsNamed(String text) {
+        ConditionLexer lex = new ConditionLexer(text);
+        List<String> names = new ArrayList<>();
+        do {
+            String column = lex.name("a column name");
+            if (!names.contains(column)) {
+                names.add(column);
+            }
+            lex.op();
+            lex.value();
+        } while (lex.and());
+        return names;
+    }
+
     /** The clauses in order. */
     public List<Clause> clauses() {
         return clauses;

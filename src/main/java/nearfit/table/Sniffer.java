@@ -79,7 +79,7 @@ final class Sniffer {
         if (header && rows.size() == 1) {
             dataOffset = ends.get(0);
         }
-        int[] fields = keptFields(source, allNames, options.keepColumns());
+        int[] fields = keptFields(source, allNames, options);
         List<String> names = new ArrayList<>();
         ColumnType[] types = new ColumnType[fields.length];
         for (int j = 0; j < fields.length; j++) {
@@ -244,8 +244,9 @@ final class Sniffer {
         return out;
     }
 
-    private static int[] keptFields(String source, List<String> names, List<String> keep) {
-        if (keep.isEmpty()) {
+    /** The field indexes of the kept columns, ascending and distinct; an unknown required name fails. */
+    private static int[] keptFields(String source, List<String> names, LoadOptions options) {
+        if (options.keepsAll()) {
             int[] all = new int[names.size()];
             for (int i = 0; i < all.length; i++) {
                 all[i] = i;
@@ -256,16 +257,25 @@ final class Sniffer {
         for (int i = 0; i < names.size(); i++) {
             index.put(names.get(i), i);
         }
-        int[] out = new int[keep.size()];
-        for (int j = 0; j < out.length; j++) {
-            Integer i = index.get(keep.get(j));
+        java.util.BitSet kept = new java.util.BitSet(names.size());
+        for (String name : options.keepColumns()) {
+            Integer i = index.get(name);
             if (i == null) {
-                throw new NearfitException(source, NearfitException.NO_LINE, keep.get(j),
+                throw new NearfitException(source, NearfitException.NO_LINE, name,
                         "no such column; the columns are " + String.join(", ", names), null);
             }
+            kept.set(i);
+        }
+        for (String name : options.keepIfPresent()) {
+            Integer i = index.get(name);
+            if (i != null) {
+                kept.set(i);
+            }
+        }
+        int[] out = new int[kept.cardinality()];
+        for (int i = kept.nextSetBit(0), j = 0; i >= 0; i = kept.nextSetBit(i + 1), j++) {
             out[j] = i;
         }
-        java.util.Arrays.sort(out);
         return out;
     }
 }

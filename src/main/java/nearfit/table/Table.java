@@ -88,6 +88,11 @@ public final class Table {
         return report;
     }
 
+    /** The same columns with another load report (the loader adds warnings once the read is over). */
+    Table withReport(LoadReport r) {
+        return new Table(columns, lines, r);
+    }
+
     /** Every row. */
     public RowSet allRows() {
         return RowSet.all(rowCount());

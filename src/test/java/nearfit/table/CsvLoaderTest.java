@@ -143,6 +143,48 @@ class CsvLoaderTest {
     }
 
     @Test
+    void columnsKeptIfPresentAreSkippedWhenTheFileLacksThem() {
+        LoadOptions o = LoadOptions.builder().keepColumns(List.of("c")).keepIfPresent(List.of("a", "zz", "c")).build();
+        Table t = CsvFiles.load(dir, "a,b,c\n1,2,3\n", o);
+        assertEquals(List.of("a", "c"), t.names());
+        assertEquals(1.0, ((NumberColumn) t.column("a")).get(0));
+    }
+
+    @Test
+    void aRequiredColumnTheFileLacksFailsNamingItAndListingTheColumns() {
+        LoadOptions o = LoadOptions.builder().keepColumns(List.of("zz")).keepIfPresent(List.of("a")).build();
+        NearfitException e = org.junit.jupiter.api.Assertions.assertThrows(NearfitException.class,
+                () -> CsvFiles.load(dir, "a,b,c\n1,2,3\n", o));
+        assertEquals("zz", e.column());
+        assertTrue(e.detail().endsWith("the columns are a, b, c"), e.detail());
+    }
+
+    @Test
+    void aColumnLeftOutIsNeitherTypedNorCountedForBadCells() {
+        // Column junk is typed as numbers (at most 1 cell in 10 is not one), so its text cells are bad cells.
+        StringBuilder b = new StringBuilder("wind_ms,junk,power_kw\n");
+        for (int i = 0; i < 20; i++) {
+            b.append(i).append(',').append(i == 7 ? "x?" : i == 9 ? "\"a,b\"" : "1.5").append(',').append(i * 10).append('\n');
+        }
+        String csv = b.toString();
+        Table all = CsvFiles.load(dir, csv);
+        Table kept = CsvFiles.load(dir, csv, LoadOptions.builder().keepColumns(List.of("wind_ms", "power_kw")).build());
+        assertEquals(2, all.report().badCells(), "the whole file has the two bad cells");
+        assertEquals(0, kept.report().badCells());
+        assertEquals(List.of("wind_ms", "power_kw"), kept.names());
+        assertEquals(20, kept.rowCount());
+        assertEquals(190.0, ((NumberColumn) kept.column("power_kw")).get(19));
+        assertEquals(all.lineOf(19), kept.lineOf(19));
+    }
+
+    @Test
+    void aRepeatedKeptNameKeepsTheColumnOnce() {
+        Table t = CsvFiles.load(dir, "a,b\n1,2\n", LoadOptions.builder().keepColumns(List.of("b", "b"))
+                .keepIfPresent(List.of("b")).build());
+        assertEquals(List.of("b"), t.names());
+    }
+
+    @Test
     void gzipIsRecognisedByItsBytesNotItsName() {
         byte[] gz = CsvFiles.gzip("a,b\n1,2\n3,4\n".getBytes(StandardCharsets.UTF_8));
         Table t = CsvLoader.load(CsvFiles.write(dir, "plain-name.csv", gz), "plain-name.csv", LoadOptions.DEFAULT);

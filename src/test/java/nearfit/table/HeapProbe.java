@@ -5,7 +5,8 @@ import java.lang.management.MemoryMXBean;
 
 /**
  * Run in a child JVM by {@link HeapBoundTest}: loads a file and prints the heap the table holds (used heap
- * after a full collection, minus the same before loading), then {@code rows=N}.
+ * after a full collection, minus the same before loading), then {@code rows=N}. A second argument lists
+ * the columns to keep, comma-separated.
  */
 public final class HeapProbe {
     private HeapProbe() {
@@ -15,7 +16,9 @@ public final class HeapProbe {
         MemoryMXBean mem = ManagementFactory.getMemoryMXBean();
         System.gc();
         long before = mem.getHeapMemoryUsage().getUsed();
-        Table t = CsvLoader.load(args[0], LoadOptions.DEFAULT);
+        LoadOptions options = args.length > 1
+                ? LoadOptions.builder().keepColumns(java.util.List.of(args[1].split(","))).build() : LoadOptions.DEFAULT;
+        Table t = CsvLoader.load(args[0], options);
         System.gc();
         long after = mem.getHeapMemoryUsage().getUsed();
         System.out.println("held=" + (after - before) + " rows=" + t.rowCount() + " columns=" + t.columnCount());

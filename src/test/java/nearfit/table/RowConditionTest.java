@@ -69,6 +69,20 @@ class RowConditionTest {
     }
 
     @Test
+    void theColumnsNamedAreListedOnceInOrderWithoutATable() {
+        assertEquals(java.util.List.of("turbine", "rotor speed", "time"), RowCondition.columnsNamed(
+                "turbine = 'T 01' and \"rotor speed\" > 11 AND turbine != T02 and time < \"2025-03-01 10:00\""));
+    }
+
+    @Test
+    void listingTheColumnsNamedChecksTheSyntaxAsParsingDoes() {
+        assertEquals("row condition, position 9: expected one of = != < <= > >= in \"wind_ms ~ 3\"",
+                assertThrows(NearfitException.class, () -> RowCondition.columnsNamed("wind_ms ~ 3")).getMessage());
+        assertEquals("row condition, position 13: expected 'and' or the end of the condition in \"wind_ms > 3 or x\"",
+                assertThrows(NearfitException.class, () -> RowCondition.columnsNamed("wind_ms > 3 or x")).getMessage());
+    }
+
+    @Test
     void rowSetsIntersectAndCopyNothing() {
         RowSet a = t.where("wind_ms > 3");
         RowSet b = t.where("turbine = T01");
