@@ -70,13 +70,16 @@ public final class CsvLoader {
                     return loadStream(in, name, -1, t0);
                 }
             }
-            long size = Files.size(path);
+            FileSnapshot before = FileSnapshot.of(path);
+            Table table;
             if (isGzip(path)) {
-                try (InputStream in = Files.newInputStream(path)) {
-                    return loadStream(in, name, -1, t0);
+                try (InputStream in = new PrefixStream(Files.newInputStream(path), before.size())) {
+                    table = loadStream(in, name, -1, t0);
                 }
+            } else {
+                table = loadPlain(path, name, before.size(), t0);
             }
-            return loadPlain(path, name, size, t0);
+            return before.confirm(path, name, table);
         } catch (java.nio.channels.ClosedByInterruptException ex) {
             throw new LoadCancelledException(name); // the loading thread was interrupted
         } catch (NoSuchFileException ex) {
@@ -108,8 +111,9 @@ public final class CsvLoader {
         if (threads == 1 || size < options.parallelMinBytes()) {
             try (FileChannel ch = FileChannel.open(path, StandardOpenOption.READ)) {
                 ChunkParser parser = new ChunkParser(layout, name, false, shared);
-                parts = List.of(parser.parse(Channels.newInputStream(ch.position(layout.dataOffset())),
-                        layout.dataOffset(), Long.MAX_VALUE, layout.dataLine()));
+                InputStream in = new PrefixStream(Channels.newInputStream(ch.position(layout.dataOffset())),
+                        size - layout.dataOffset());
+                parts = List.of(parser.parse(in, layout.dataOffset(), Long.MAX_VALUE, layout.dataLine()));
             }
         } else {
             parts = new ParallelPlainParse(path, name, size, layout, shared, threads).run();
@@ -213,8 +217,9 @@ public final class CsvLoader {
 
         private ChunkResult parse(long start, long stop, long line) throws IOException {
             try (FileChannel ch = FileChannel.open(path, StandardOpenOption.READ)) {
-                return new ChunkParser(layout, name, false, shared)
-                        .parse(Channels.newInputStream(ch.position(start)), start, stop, line);
+                // Bounded by the size at the start, so a row appended meanwhile is not half read.
+                InputStream in = new PrefixStream(Channels.newInputStream(ch.position(start)), size - start);
+                return new ChunkParser(layout, name, false, shared).parse(in, start, stop, line);
             }
         }
 

@@ -1,6 +1,7 @@
 package nearfit.table;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTimeoutPreemptively;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -11,6 +12,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
+import java.util.List;
 import java.util.concurrent.atomic.AtomicBoolean;
 
 import org.junit.jupiter.api.Test;
@@ -102,20 +104,91 @@ class LoaderRobustnessTest {
         };
     }
 
+    /** Runs {@code change} on the file the first time the loader reports progress (after its first block). */
+    private static LoadProgress onFirstReport(AtomicBoolean done, IoAction change) {
+        return (bytes, total, rows) -> {
+            if (done.compareAndSet(false, true)) {
+                try {
+                    change.run();
+                } catch (IOException ex) {
+                    throw new java.io.UncheckedIOException(ex);
+                }
+            }
+        };
+    }
+
+    /** A file operation done from inside the loader's progress callback. */
+    @FunctionalInterface
+    private interface IoAction {
+        void run() throws IOException;
+    }
+
     @Test
-    void aFileCutShorterWhileLoadingLoadsWhatIsLeftOrSaysWhereItEnded() throws IOException {
+    void aFileCutShorterWhileLoadingFailsSayingItShrank() throws IOException {
+        // Before: the rows left were loaded (sometimes with a half row), with no word of the change.
         for (int threads : new int[] {1, 2}) {
             Path p = numbers("shrinking-" + threads + ".csv", 3_000_000);
+            long size = Files.size(p);
             AtomicBoolean cut = new AtomicBoolean();
             LoadOptions o = LoadOptions.builder().threads(threads).progress(truncateOnFirstReport(p, cut)).build();
-            try {
-                Table t = assertTimeoutPreemptively(HANG, () -> CsvLoader.load(p, "shrinking.csv", o));
-                assertTrue(cut.get(), "the file was cut during the load");
-                assertTrue(t.rowCount() > 0 && t.rowCount() < 3_000_000, "rows " + t.rowCount());
-            } catch (NearfitException ex) {
-                assertEquals("shrinking.csv", ex.file(), ex.getMessage());
-            }
+            NearfitException ex = assertTimeoutPreemptively(HANG, () -> assertThrows(NearfitException.class,
+                    () -> CsvLoader.load(p, "shrinking.csv", o)));
+            assertTrue(cut.get(), "the file was cut during the load");
+            assertEquals("shrinking.csv", ex.file(), ex.getMessage());
+            assertEquals("shrank from " + size + " to " + size / 3 + " bytes while it was read, so the rows read may "
+                    + "be cut or mixed; load it again once it is complete", ex.detail(), "threads " + threads);
         }
+    }
+
+    @Test
+    void aFileThatGrowsWhileLoadingGivesTheRowsItHadAndAWarning() throws IOException {
+        for (int threads : new int[] {1, 2}) {
+            Path p = numbers("growing-" + threads + ".csv", 3_000_000);
+            long size = Files.size(p);
+            AtomicBoolean grown = new AtomicBoolean();
+            // A log still being written: a whole row, then half of the next one.
+            byte[] more = "99.5,1234.5\n98".getBytes(StandardCharsets.UTF_8);
+            LoadOptions o = LoadOptions.builder().threads(threads).parallelMinBytes(1 << 20).progress(onFirstReport(
+                    grown, () -> Files.write(p, more, java.nio.file.StandardOpenOption.APPEND))).build();
+            Table t = assertTimeoutPreemptively(HANG, () -> CsvLoader.load(p, "growing.csv", o));
+            assertTrue(grown.get());
+            assertEquals(3_000_000, t.rowCount(), "threads " + threads);
+            assertEquals((2_999_999 % 2000) + 0.5, ((NumberColumn) t.column("power_kw")).get(2_999_999), 0);
+            assertEquals(List.of("growing.csv: grew from " + size + " to " + (size + more.length) + " bytes while it "
+                    + "was read; only the first " + size + " bytes were read"), t.report().warnings());
+        }
+    }
+
+    @Test
+    void aFileModifiedInPlaceWhileLoadingGivesAWarning() throws IOException {
+        Path p = numbers("touched.csv", 1_500_000);
+        long size = Files.size(p);
+        AtomicBoolean touched = new AtomicBoolean();
+        LoadOptions o = LoadOptions.builder().threads(1).progress(onFirstReport(touched, () -> Files.setLastModifiedTime(
+                p, java.nio.file.attribute.FileTime.fromMillis(Files.getLastModifiedTime(p).toMillis() + 5_000)))).build();
+        Table t = assertTimeoutPreemptively(HANG, () -> CsvLoader.load(p, "touched.csv", o));
+        assertEquals(1_500_000, t.rowCount());
+        assertEquals(List.of("touched.csv: was modified while it was read (same size, " + size + " bytes); if it was "
+                + "rewritten, load it again"), t.report().warnings());
+    }
+
+    @Test
+    void aFileReplacedWhileLoadingFailsSayingSo() throws IOException {
+        // A log rotated under the reader: the path now names another file.
+        Path p = numbers("rotated.csv", 1_500_000);
+        Path next = numbers("next.csv", 10);
+        AtomicBoolean moved = new AtomicBoolean();
+        LoadOptions o = LoadOptions.builder().threads(1).progress(onFirstReport(moved,
+                () -> Files.move(next, p, java.nio.file.StandardCopyOption.REPLACE_EXISTING))).build();
+        NearfitException ex = assertTimeoutPreemptively(HANG, () -> assertThrows(NearfitException.class,
+                () -> CsvLoader.load(p, "rotated.csv", o)));
+        assertEquals("rotated.csv: was replaced by another file while it was read; load it again", ex.getMessage());
+    }
+
+    @Test
+    void aFileLeftAloneGivesNoWarning() throws IOException {
+        Path p = numbers("quiet.csv", 1000);
+        assertEquals(List.of(), CsvLoader.load(p, "quiet.csv", LoadOptions.DEFAULT).report().warnings());
     }
 
     @Test
@@ -123,18 +196,12 @@ class LoaderRobustnessTest {
         // POSIX: unlinking a file leaves its data readable through descriptors already open.
         Path p = numbers("vanishing.csv", 1_500_000);
         AtomicBoolean gone = new AtomicBoolean();
-        LoadOptions o = LoadOptions.builder().threads(1).progress((bytes, total, rows) -> {
-            if (gone.compareAndSet(false, true)) {
-                try {
-                    Files.delete(p);
-                } catch (IOException ex) {
-                    throw new java.io.UncheckedIOException(ex);
-                }
-            }
-        }).build();
+        LoadOptions o = LoadOptions.builder().threads(1).progress(onFirstReport(gone, () -> Files.delete(p))).build();
         Table t = assertTimeoutPreemptively(HANG, () -> CsvLoader.load(p, "vanishing.csv", o));
         assertTrue(gone.get());
         assertEquals(1_500_000, t.rowCount());
+        assertEquals(List.of("vanishing.csv: was deleted while it was read; the rows are those it held when the load "
+                + "began"), t.report().warnings());
     }
 
     /** Makes a named pipe and feeds it {@code bytes} from another thread, as {@code <(zcat log.gz)} would. */
