@@ -13,7 +13,6 @@ import nearfit.model.ReferenceModel;
 import nearfit.model.RestoredModel;
 import nearfit.table.CategoryColumn;
 import nearfit.table.Column;
-import nearfit.table.NearfitException;
 import nearfit.table.NumericColumn;
 import nearfit.table.RowSet;
 
