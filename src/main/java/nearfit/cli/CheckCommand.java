@@ -80,7 +80,7 @@ final class CheckCommand implements Callable<Integer> {
         }
         RestoredModel restored = RestoredModel.of(stored, model.over(stored.settings()), model.threads());
         ScoredRows scored = ScoredRows.score(restored, file, model, spec.commandLine().getErr());
-        if (scored.response() == null) {
+        if (scored.read().response() == null) {
             throw NearfitException.inFile(file, "has no column \"" + columns.response()
                     + "\", the model's response, so nothing can be checked");
         }
@@ -96,24 +96,21 @@ final class CheckCommand implements Callable<Integer> {
             out.println(report.toJson());
             out.flush();
         } else {
-            report.writeText(out, columns.response(), scored.group() == null ? null : scored.group().name());
+            CategoryColumn g = scored.read().group();
+            report.writeText(out, columns.response(), g == null ? null : g.name());
         }
         return report.passed() ? 0 : Main.EXIT_CHECK_FAILED;
     }
 
     private static CheckReport tally(ScoredRows s, double cut, double limit) {
-        int n = s.rows().size();
-        long[] lines = new long[n];
-        int[] groups = s.group() == null ? null : new int[n];
-        CategoryColumn g = s.group();
-        for (int i = 0; i < n; i++) {
-            int row = s.rows().row(i);
-            lines[i] = s.source().table().lineOf(row);
-            if (groups != null) {
-                groups[i] = g.code(row);
-            }
+        ScoredRows.ReadRows read = s.read();
+        int n = read.rows().size();
+        CategoryColumn g = read.group();
+        int[] groups = g == null ? null : new int[n];
+        for (int i = 0; groups != null && i < n; i++) {
+            groups[i] = g.code(read.rows().row(i));
         }
-        return CheckReport.tally(s.z(), s.response(), s.estimates().fit(), lines, groups,
+        return CheckReport.tally(s.z(), read.response(), s.estimates().fit(), read.lines(), groups,
                 g == null ? List.of() : g.labels(), cut, limit, WORST_ROWS);
     }
 }

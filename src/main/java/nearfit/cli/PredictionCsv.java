@@ -14,8 +14,6 @@ import java.util.List;
 import nearfit.model.CsvCells;
 import nearfit.model.SafeOutput;
 import nearfit.table.NearfitException;
-import nearfit.table.NumericColumn;
-import nearfit.table.TimeColumn;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 
@@ -57,7 +55,7 @@ final class PredictionCsv {
                               RowFilter filter) throws IOException {
         CSVPrinter csv = new CSVPrinter(w, CSVFormat.RFC4180.builder().setRecordSeparator('\n').get());
         header(csv, s, responseName);
-        for (int i = 0; i < s.rows().size(); i++) {
+        for (int i = 0; i < s.read().rows().size(); i++) {
             if (filter.keep(i)) {
                 record(csv, s, classLabels, i);
             }
@@ -66,14 +64,15 @@ final class PredictionCsv {
     }
 
     private static void header(CSVPrinter csv, ScoredRows s, String responseName) throws IOException {
+        ScoredRows.ReadRows read = s.read();
         csv.print("line");
-        if (s.group() != null) {
-            csv.print(CsvCells.text(s.group().name()));
+        if (read.group() != null) {
+            csv.print(CsvCells.text(read.group().name()));
         }
-        for (NumericColumn c : s.inputs()) {
-            csv.print(CsvCells.text(c.name()));
+        for (String name : read.inputNames()) {
+            csv.print(CsvCells.text(name));
         }
-        boolean hasResponse = s.response() != null || s.actualClass() != null;
+        boolean hasResponse = read.response() != null || read.actualClass() != null;
         if (hasResponse) {
             csv.print(CsvCells.text(responseName));
         }
@@ -93,29 +92,31 @@ final class PredictionCsv {
     }
 
     private static void record(CSVPrinter csv, ScoredRows s, List<String> classLabels, int i) throws IOException {
-        int row = s.rows().row(i);
-        csv.print(Long.toString(s.source().table().lineOf(row)));
-        if (s.group() != null) {
-            csv.print(s.group().code(row) < 0 ? "" : CsvCells.text(s.group().label(row)));
+        ScoredRows.ReadRows read = s.read();
+        int row = read.rows().row(i);
+        csv.print(Long.toString(read.lines()[i]));
+        if (read.group() != null) {
+            csv.print(read.group().code(row) < 0 ? "" : CsvCells.text(read.group().label(row)));
         }
-        for (NumericColumn c : s.inputs()) {
-            csv.print(cell(c, row));
+        for (int j = 0; j < read.x().length; j++) {
+            csv.print(cell(read.x()[j][i], read.timeInputs()[j]));
         }
+        double[] y = read.response();
         if (s.estimates() != null) {
             double fit = s.estimates().fit()[i];
-            if (s.response() != null) {
-                csv.print(CsvCells.number(s.response()[i]));
+            if (y != null) {
+                csv.print(CsvCells.number(y[i]));
             }
             csv.print(CsvCells.number(fit));
             csv.print(CsvCells.number(s.estimates().bandLow()[i]));
             csv.print(CsvCells.number(s.estimates().bandHigh()[i]));
-            if (s.response() != null) {
-                csv.print(CsvCells.number(s.response()[i] - fit));
+            if (y != null) {
+                csv.print(CsvCells.number(y[i] - fit));
                 csv.print(CsvCells.number(s.z()[i]));
             }
         } else {
-            if (s.actualClass() != null) {
-                int a = s.actualClass()[i];
+            if (read.actualClass() != null) {
+                int a = read.actualClass()[i];
                 csv.print(a < 0 ? "" : CsvCells.text(classLabels.get(a)));
             }
             int c = s.classes()[i];
@@ -125,14 +126,11 @@ final class PredictionCsv {
         csv.println();
     }
 
-    /** A number, or a time in ISO 8601 UTC; empty when missing. */
-    static String cell(NumericColumn c, int row) {
-        if (c.isMissing(row)) {
+    /** A number, or a time (epoch ms, exact in a double) in ISO 8601 UTC; empty when missing (NaN). */
+    static String cell(double v, boolean time) {
+        if (Double.isNaN(v)) {
             return "";
         }
-        if (c instanceof TimeColumn t) {
-            return Instant.ofEpochMilli(t.epochMillis(row)).toString();
-        }
-        return CsvCells.number(c.asDouble(row));
+        return time ? Instant.ofEpochMilli((long) v).toString() : CsvCells.number(v);
     }
 }

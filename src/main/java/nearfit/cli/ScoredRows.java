@@ -1,7 +1,6 @@
 package nearfit.cli;
 
 import java.io.PrintWriter;
-import java.util.ArrayList;
 import java.util.List;
 
 import nearfit.knn.ClassVote;
@@ -15,6 +14,7 @@ import nearfit.table.CategoryColumn;
 import nearfit.table.Column;
 import nearfit.table.NumericColumn;
 import nearfit.table.RowSet;
+import nearfit.table.TimeColumn;
 
 /**
  * New rows scored against a model: the rows of a file that meet the row condition, the engine's
@@ -29,51 +29,79 @@ import nearfit.table.RowSet;
  * for a zero (centred) residual and an infinite z otherwise, as the engine's flags do. Rows with a
  * missing input or response get NaN.
  *
- * @param source      the file scored
- * @param rows        the table rows scored, ascending
- * @param inputs      the model's input columns in the file
- * @param response    the response values, or {@code null} when the file lacks the response column
- *                    or the response is a category
+ * <p>The values are copied out of the table before scoring, and the table is let go: at 10M rows its
+ * columns and line numbers are 240 MB that scoring does not need.
+ *
+ * @param read        the rows scored and their values, as read from the file
  * @param estimates   fit and band at each row (number response), or {@code null}
  * @param classes     the predicted class code at each row (category response), or {@code null}
  * @param shares      the vote share of the predicted class (category response), or {@code null}
- * @param actualClass the file's class code mapped to the model's dictionary (-1 unknown), or {@code null}
  * @param z           z at each row, or {@code null} without a number response
- * @param group       the model's group column in the file, or {@code null}
  */
-record ScoredRows(SourceTable source, RowSet rows, List<NumericColumn> inputs, double[] response,
-                  Estimates estimates, int[] classes, double[] shares, int[] actualClass, double[] z,
-                  CategoryColumn group) {
+record ScoredRows(ReadRows read, Estimates estimates, int[] classes, double[] shares, double[] z) {
+
+    /**
+     * The rows of a file to score, copied out of its table.
+     *
+     * @param rows        the table rows scored, ascending
+     * @param lines       the source line of each scored row
+     * @param inputNames  the model's inputs
+     * @param timeInputs  for each input, whether the file's column is a time (values are epoch ms)
+     * @param x           the inputs' values at each scored row, one array per input, NaN when missing
+     * @param response    the response values, or {@code null} when the file lacks the response column
+     *                    or the response is a category
+     * @param actualClass the file's class code mapped to the model's dictionary (-1 unknown), or {@code null}
+     * @param group       the model's group column in the file, or {@code null}
+     */
+    record ReadRows(RowSet rows, long[] lines, List<String> inputNames, boolean[] timeInputs, double[][] x,
+                    double[] response, int[] actualClass, CategoryColumn group) {
+    }
 
     /** Loads {@code file} and scores its rows (those meeting {@code where}) against {@code model}. */
     static ScoredRows score(RestoredModel model, String file, ModelOptions options, PrintWriter err) {
-        ReferenceModel stored = model.stored();
-        ModelColumns columns = stored.columns();
-        // Only the model's columns and those of --where are kept; a file of new readings may lack the
-        // response (predict) or the group.
+        ReadRows read = read(model.stored().columns(), file, options, err);
+        if (model.stored().columns().categoryResponse()) {
+            return classify(model, read);
+        }
+        TerminalProgress progress = TerminalProgress.of(err, "scoring", options.quiet);
+        Estimates est = model.engine().estimateAll(read.x(), progress);
+        progress.done();
+        double[] y = read.response();
+        double[] z = y == null ? null : "local".equals(model.settings().zScale())
+                ? localZ(y, est.fit(), est.localSd()) : zScores(y, est.fit(), model.stored().residualScale());
+        return new ScoredRows(read, est, null, null, z);
+    }
+
+    /**
+     * Loads the file, keeping only the model's columns and those of --where (a file of new readings may lack
+     * the response or the group), and copies out what scoring and the reports use; the table is not kept.
+     */
+    private static ReadRows read(ModelColumns columns, String file, ModelOptions options, PrintWriter err) {
         ColumnRequest request = ColumnRequest.NONE.require("model input", columns.inputs())
                 .allow(columns.response(), columns.group()).where(options.where);
         SourceTable source = SourceTable.load(file, request, options.threads(), options.quiet, err);
         RowSet rows = source.rows(options.where);
-        List<NumericColumn> inputs = new ArrayList<>();
+        int n = rows.size();
         double[][] x = new double[columns.inputs().size()][];
+        boolean[] time = new boolean[x.length];
         for (int j = 0; j < x.length; j++) {
-            inputs.add(source.numeric("model input", columns.inputs().get(j)));
-            x[j] = SourceTable.values(inputs.get(j), rows);
+            NumericColumn c = source.numeric("model input", columns.inputs().get(j));
+            x[j] = SourceTable.values(c, rows);
+            time[j] = c instanceof TimeColumn;
         }
-        CategoryColumn group = groupColumn(source, columns.group());
+        long[] lines = new long[n];
+        for (int i = 0; i < n; i++) {
+            lines[i] = source.table().lineOf(rows.row(i));
+        }
         boolean hasResponse = source.table().hasColumn(columns.response());
-        if (columns.categoryResponse()) {
-            return classify(model, source, rows, inputs, x, hasResponse, group);
+        double[] y = null;
+        int[] actual = null;
+        if (hasResponse && columns.categoryResponse()) {
+            actual = actualClasses(columns, source, rows);
+        } else if (hasResponse) {
+            y = SourceTable.values(source.numeric("model response", columns.response()), rows);
         }
-        double[] y = hasResponse ? SourceTable.values(source.numeric("model response", columns.response()), rows)
-                : null;
-        TerminalProgress progress = TerminalProgress.of(err, "scoring", options.quiet);
-        Estimates est = model.engine().estimateAll(x, progress);
-        progress.done();
-        double[] z = y == null ? null : "local".equals(model.settings().zScale())
-                ? localZ(y, est.fit(), est.localSd()) : zScores(y, est.fit(), stored.residualScale());
-        return new ScoredRows(source, rows, inputs, y, est, null, null, null, z, group);
+        return new ReadRows(rows, lines, columns.inputs(), time, x, y, actual, groupColumn(source, columns.group()));
     }
 
     /** z of each residual on the stored scale; NaN where the response or the fit is missing. */
@@ -106,12 +134,11 @@ record ScoredRows(SourceTable source, RowSet rows, List<NumericColumn> inputs, d
         return e == 0 ? 0 : Math.copySign(Double.POSITIVE_INFINITY, e);
     }
 
-    private static ScoredRows classify(RestoredModel model, SourceTable source, RowSet rows,
-                                       List<NumericColumn> inputs, double[][] x, boolean hasResponse,
-                                       CategoryColumn group) {
+    private static ScoredRows classify(RestoredModel model, ReadRows read) {
         KnnModel engine = model.engine();
         Searcher searcher = engine.searcher();
-        int n = rows.size();
+        double[][] x = read.x();
+        int n = read.rows().size();
         int[] classes = new int[n];
         double[] shares = new double[n];
         double[] point = new double[x.length];
@@ -130,12 +157,10 @@ record ScoredRows(SourceTable source, RowSet rows, List<NumericColumn> inputs, d
             classes[i] = vote.winner();
             shares[i] = vote.shares()[vote.winner()];
         }
-        int[] actual = hasResponse ? actualClasses(model, source, rows) : null;
-        return new ScoredRows(source, rows, inputs, null, null, classes, shares, actual, null, group);
+        return new ScoredRows(read, null, classes, shares, null);
     }
 
-    private static int[] actualClasses(RestoredModel model, SourceTable source, RowSet rows) {
-        ModelColumns columns = model.stored().columns();
+    private static int[] actualClasses(ModelColumns columns, SourceTable source, RowSet rows) {
         CategoryColumn c = source.category("model response", columns.response());
         int[] out = new int[rows.size()];
         for (int i = 0; i < out.length; i++) {
