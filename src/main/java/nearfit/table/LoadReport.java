@@ -32,6 +32,14 @@ public record LoadReport(String source, int rows, long bytes, char delimiter, bo
         warnings = List.copyOf(warnings);
     }
 
+    /** A report without warnings: the common case, and the form callers used before warnings existed. */
+    public LoadReport(String source, int rows, long bytes, char delimiter, boolean headerPresent,
+            boolean decimalComma, long shortRows, long longRows, List<BadCell> raggedExamples, long badCells,
+            List<BadCell> badExamples, long nanos) {
+        this(source, rows, bytes, delimiter, headerPresent, decimalComma, shortRows, longRows, raggedExamples,
+                badCells, badExamples, nanos, List.of());
+    }
+
     /** This report with one more warning. */
     public LoadReport withWarning(String warning) {
         List<String> w = new java.util.ArrayList<>(warnings);
