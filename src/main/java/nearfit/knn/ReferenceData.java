@@ -1,7 +1,6 @@
 package nearfit.knn;
 
 import it.unimi.dsi.fastutil.ints.IntArrays;
-import it.unimi.dsi.fastutil.ints.IntComparator;
 import java.util.Arrays;
 import nearfit.table.NearfitException;
 
@@ -138,7 +137,10 @@ public final class ReferenceData {
     /**
      * Sorts the kept row indexes lexicographically by input 0, ..., input d-1, response, row id:
      * a radix sort on input 0, then a comparison sort inside each run of equal input-0 values
-     * (runs are short for measured data, long for coarse data; both stay O(n log n)).
+     * (runs are short for measured data, long for coarse data; both stay O(n log n)). A long run's
+     * remaining keys are first copied into scratch arrays, so its sort compares values that sit
+     * together in cache instead of reaching into the whole columns (rounded 10M-row inputs hold
+     * thousands of rows per value, and those scattered reads dominated).
      */
     private static void canonicalOrder(int[] kept, double[][] in, double[] y, int[] codes, int[] rowIds) {
         int m = kept.length;
@@ -148,33 +150,109 @@ public final class ReferenceData {
             key[i] = RadixSort.sortableBits(x0[kept[i]]);
         }
         int[] perm = RadixSort.order(key);
+        key = null;
         int[] order = new int[m];
         for (int i = 0; i < m; i++) {
             order[i] = kept[perm[i]];
         }
-        IntComparator rest = (a, b) -> {
-            for (int j = 1; j < in.length; j++) {
-                int c = Double.compare(in[j][a] + 0.0, in[j][b] + 0.0);
-                if (c != 0) {
-                    return c;
-                }
-            }
-            int c = y != null ? Double.compare(y[a] + 0.0, y[b] + 0.0) : Integer.compare(codes[a], codes[b]);
-            if (c != 0) {
-                return c;
-            }
-            return rowIds == null ? Integer.compare(a, b) : Integer.compare(rowIds[a], rowIds[b]);
-        };
+        perm = null;
+        RunSorter runs = new RunSorter(in, y, codes, rowIds);
         int from = 0;
         for (int i = 1; i <= m; i++) {
             if (i == m || x0[order[i]] + 0.0 != x0[order[from]] + 0.0) {
                 if (i - from > 1) {
-                    IntArrays.quickSort(order, from, i, rest);
+                    runs.sort(order, from, i);
                 }
                 from = i;
             }
         }
         System.arraycopy(order, 0, kept, 0, m);
+    }
+
+    /** Sorts runs of equal input 0 by the remaining keys: inputs 1..d-1, response, row id. */
+    private static final class RunSorter {
+        private final double[][] in;
+        private final double[] y;
+        private final int[] codes;
+        private final int[] rowIds;
+        private double[][] cols = new double[0][];
+        private int[] ids = new int[0];
+        private int[] local = new int[0];
+        private int[] saved = new int[0];
+        private double[] position = new double[0];
+
+        RunSorter(double[][] in, double[] y, int[] codes, int[] rowIds) {
+            this.in = in;
+            this.y = y;
+            this.codes = codes;
+            this.rowIds = rowIds;
+        }
+
+        void sort(int[] order, int from, int to) {
+            int len = to - from;
+            int keys = in.length; // inputs 1..d-1, then the response
+            if (cols.length == 0 || cols[0].length < len) {
+                int cap = Math.max(len, 2 * ids.length);
+                cols = new double[keys][cap];
+                ids = new int[cap];
+                local = new int[cap];
+                saved = new int[cap];
+            }
+            for (int t = 0; t < len; t++) {
+                int row = order[from + t];
+                for (int j = 1; j < keys; j++) {
+                    cols[j - 1][t] = in[j][row] + 0.0;
+                }
+                cols[keys - 1][t] = y != null ? y[row] + 0.0 : codes[row];
+                ids[t] = rowIds == null ? row : rowIds[row];
+                local[t] = t;
+                saved[t] = row;
+            }
+            if (keys == 1 && ascending(ids, len)) {
+                sortByResponse(order, from, len);
+                return;
+            }
+            double[][] c = cols;
+            int[] id = ids;
+            IntArrays.quickSort(local, 0, len, (a, b) -> {
+                for (double[] col : c) {
+                    int r = Double.compare(col[a], col[b]);
+                    if (r != 0) {
+                        return r;
+                    }
+                }
+                return Integer.compare(id[a], id[b]);
+            });
+            for (int t = 0; t < len; t++) {
+                order[from + t] = saved[local[t]];
+            }
+        }
+
+        /**
+         * One input: sorts by (response, position in the run), which is (response, row id) because
+         * the row ids ascend along the run; primitive pairs, no comparator.
+         */
+        private void sortByResponse(int[] order, int from, int len) {
+            if (position.length < len) {
+                position = new double[cols[0].length];
+            }
+            for (int t = 0; t < len; t++) {
+                position[t] = t;
+            }
+            PairSort.sort(cols[0], position, 0, len);
+            for (int t = 0; t < len; t++) {
+                order[from + t] = saved[(int) position[t]];
+            }
+        }
+
+        private static boolean ascending(int[] a, int len) {
+            for (int t = 1; t < len; t++) {
+                if (a[t] <= a[t - 1]) {
+                    return false;
+                }
+            }
+            return true;
+        }
     }
 
     /** Number of kept rows. */
