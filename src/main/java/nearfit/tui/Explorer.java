@@ -261,8 +261,8 @@ public final class Explorer implements AutoCloseable {
         }
         switch (d.kind()) {
             case CURVE -> results = results.withCurve((CurveResult) d.value(), Double.NaN);
-            case TUNING -> results = results.withTuning((TuningResult) d.value(), Double.NaN);
-            case FLAGS -> results = results.withFlags((FlagResult) d.value(), Double.NaN);
+            case TUNING -> results = results.withTuning((nearfit.knn.TuningTable) d.value(), Double.NaN);
+            case FLAGS -> results = results.withFlags((FlaggedRows) d.value(), Double.NaN);
         }
     }
 

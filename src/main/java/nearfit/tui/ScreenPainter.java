@@ -116,8 +116,8 @@ final class ScreenPainter {
         if (s.mode() != PlotMode.RESPONSE) {
             sb.append(s.mode() == PlotMode.RESIDUALS ? "  residuals" : "  residuals over time");
         }
-        sb.append("  ").append(s.metric().label()).append(", weights ").append(s.weighting().label())
-                .append(", scaling ").append(s.scaling().label()).append(", band ").append(s.band().label());
+        sb.append("  ").append(ChoiceNames.of(s.metric())).append(", weights ").append(ChoiceNames.of(s.weighting()))
+                .append(", scaling ").append(ChoiceNames.of(s.scaling())).append(", band ").append(ChoiceNames.of(s.band()));
         return sb.toString();
     }
 
@@ -127,8 +127,7 @@ final class ScreenPainter {
             return r.flags().looRmse();
         }
         if (r.tuning() != null) {
-            int i = r.tuning().indexOf(s.k());
-            return i < 0 ? Double.NaN : r.tuning().rmse()[i];
+            return TuningCriterion.at(r.tuning(), s.k());
         }
         return Double.NaN;
     }
@@ -161,11 +160,11 @@ final class ScreenPainter {
             sb.append("fitting ...");
         }
         sb.append("  |  LOO RMSE ").append(Figures.value(looRmse(s, r)));
-        FlagResult f = r.flags();
-        if (f != null && f.rows() == 0) {
+        FlaggedRows f = r.flags();
+        if (f != null && f.examined() == 0) {
             sb.append("  |  no flags for a category response");
         } else if (f != null) {
-            sb.append("  |  flagged ").append(Figures.count(f.flaggedCount())).append(" (")
+            sb.append("  |  flagged ").append(Figures.count(f.result().flaggedCount())).append(" (")
                     .append(Figures.percent(f.share())).append(')');
             if (!Double.isNaN(r.flagsProgress())) {
                 sb.append(" updating ").append(Math.round(100 * r.flagsProgress())).append(" %");
