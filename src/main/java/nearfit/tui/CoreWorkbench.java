@@ -51,6 +51,7 @@ public final class CoreWorkbench implements Workbench {
     private final String timeColumn;
     private final References references;
     private final ScenePoints points;
+    private final LoadNotes notes;
     private PointLayer pointLayer;
 
     private CoreWorkbench(Table table, String source) {
@@ -74,6 +75,7 @@ public final class CoreWorkbench implements Workbench {
         this.timeColumn = time;
         this.references = new References(table);
         this.points = new ScenePoints(table, references);
+        this.notes = LoadNotes.of(table);
     }
 
     /** Loads a file with the table package's loader, reporting progress and stopping when cancelled. */
@@ -107,6 +109,11 @@ public final class CoreWorkbench implements Workbench {
     @Override
     public long totalRows() {
         return table.rowCount();
+    }
+
+    @Override
+    public LoadNotes loadNotes() {
+        return notes;
     }
 
     @Override

@@ -381,7 +381,8 @@ public final class Explorer implements AutoCloseable {
         int groups = state.groupColumn() == null ? 0 : workbench.labels(state.groupColumn()).size();
         int classes = kindOf(state.response()) == ColumnKind.CATEGORY ? workbench.labels(state.response()).size() : 0;
         return new KeyContext(workbench.columns(), results, quantile(state.displayInput(), 0),
-                quantile(state.displayInput(), 1), groups, classes, workbench.timeColumn() != null);
+                quantile(state.displayInput(), 1), groups, classes, workbench.timeColumn() != null,
+                LoadPanel.lines(workbench.loadNotes()).size());
     }
 
     FrameInput frameInput() {
@@ -389,7 +390,7 @@ public final class Explorer implements AutoCloseable {
         List<String> classes = kindOf(state.response()) == ColumnKind.CATEGORY
                 ? workbench.labels(state.response()) : List.of();
         return new FrameInput(workbench.source(), workbench.totalRows(), workbench.columns(), heldValues(),
-                results.rowsUsed() == 0 ? null : request(), groups, classes, Double.NaN);
+                results.rowsUsed() == 0 ? null : request(), groups, classes, Double.NaN, workbench.loadNotes());
     }
 
     /** Draws a frame, first taking in a new terminal size (which may ask for a new curve). */

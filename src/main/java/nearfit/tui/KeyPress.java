@@ -46,6 +46,8 @@ public final class KeyPress {
             case PICKER -> picker(fresh, key, cx);
             case TUNING -> tuning(fresh, key, cx);
             case FLAGS -> flagTable(fresh, key, cx);
+            case LOAD -> key.getKeyType() == KeyType.Character && key.getCharacter() == 'L'
+                    ? Step.of(fresh.edit().close().build()) : panel(fresh, key, cx, cx.loadLines());
             case EXPORT -> exportMenu(fresh, key, cx);
             case PROMPT -> Prompts.next(fresh, key);
             case CONFIRM -> confirm(fresh, key);
@@ -100,6 +102,7 @@ public final class KeyPress {
             case '/': return Step.of(b.open(Overlay.PROMPT, Ask.CONDITION).typed(s.condition()).build());
             case 't': return Step.of(b.open(Overlay.TUNING, Ask.NOTHING).cursor(tuningCursor(s, cx)).build());
             case 'F': return Step.of(b.open(Overlay.FLAGS, Ask.NOTHING).build());
+            case 'L': return Step.of(b.open(Overlay.LOAD, Ask.NOTHING).build());
             case 'e': return Step.of(b.open(Overlay.EXPORT, Ask.NOTHING).build());
             case 'm': return Step.of(b.metric(cycle(Metric.values(), s.metric())).build());
             case 'w': return Step.of(b.weighting(cycle(Weighting.values(), s.weighting())).build());

@@ -15,6 +15,7 @@ final class Panels {
                     pickerLines(s, in), s.cursor(), true);
             case TUNING -> tuning(pen, layout, s, r, sketches);
             case FLAGS -> list(pen, layout, flagTitle(r), FlagTable.lines(s, r, in), s.cursor() + 1, true);
+            case LOAD -> list(pen, layout, LoadPanel.title(in.notes()), LoadPanel.lines(in.notes()), s.cursor(), false);
             case EXPORT -> list(pen, layout, "export (1-4 or Enter, Esc)", exportLines(), s.cursor(), true);
             case PROMPT -> prompt(pen, layout, s);
             case CONFIRM -> prompt(pen, layout, s.typed() + " exists. Replace it? y replaces, any other key keeps it");

@@ -10,6 +10,8 @@ import java.util.TreeMap;
 final class ScreenPainter {
     private static final String KEYS = "? help  q quit  +/- k  t tuning  F flagged  f marks  x/y/i columns  "
             + "g group  / condition  e export  arrows crosshair";
+    /** The keys line with the load report, for windows wide enough to show it whole. */
+    private static final String KEYS_WIDE = KEYS.replace("e export", "e export  L load");
 
     private ScreenPainter() {
     }
@@ -40,7 +42,8 @@ final class ScreenPainter {
         }
         pen.text(0, layout.statusRow(), Figures.fit(status(s, r, in), layout.width(), pen.look().ascii()),
                 s.message().isEmpty() && r.failure().isEmpty() ? Ink.TEXT : Ink.WARNING);
-        pen.text(0, layout.keyRow(), Figures.fit(KEYS, layout.width(), pen.look().ascii()), Ink.LABEL);
+        String keys = KEYS_WIDE.length() <= layout.width() ? KEYS_WIDE : KEYS;
+        pen.text(0, layout.keyRow(), Figures.fit(keys, layout.width(), pen.look().ascii()), Ink.LABEL);
         Panels.paint(pen, layout, s, r, in, sketches);
     }
 
@@ -68,6 +71,11 @@ final class ScreenPainter {
                 .append("  rows ").append(Figures.count(r.rowsUsed())).append(" of ").append(Figures.count(in.totalRows()));
         if (!s.condition().isEmpty()) {
             one.append("  where ").append(s.condition());
+        }
+        int notes = in.notes().count();
+        if (notes > 0) {
+            // Short, and before the job states, so that it survives a narrow window.
+            one.append("  (").append(notes).append(notes == 1 ? " load note, L)" : " load notes, L)");
         }
         one.append("  |  ").append(tuningState(r));
         if (!Double.isNaN(r.flagsProgress())) {

@@ -21,6 +21,9 @@ public interface Workbench {
     /** Rows in the file. */
     long totalRows();
 
+    /** What the loader found: rows read, ragged lines, blank and bad cells per column. */
+    LoadNotes loadNotes();
+
     /** The columns in file order. */
     List<ColumnInfo> columns();
 

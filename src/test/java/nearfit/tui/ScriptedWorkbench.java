@@ -11,6 +11,7 @@ import java.util.concurrent.atomic.AtomicInteger;
 import nearfit.knn.FlagResult;
 import nearfit.knn.FlagScale;
 import nearfit.knn.TuningTable;
+import nearfit.table.LoadReport;
 import nearfit.table.NearfitException;
 
 /**
@@ -33,6 +34,12 @@ class ScriptedWorkbench implements Workbench {
     @Override
     public long totalRows() {
         return 1000;
+    }
+
+    @Override
+    public LoadNotes loadNotes() {
+        return new LoadNotes(new LoadReport("site-test.csv", 1000, 40_000, ',', true, false, 0, 0, List.of(), 0,
+                List.of(), 0), List.of());
     }
 
     @Override
