@@ -124,12 +124,14 @@ public final class Explorer implements AutoCloseable {
 
     /** Waits until the background work of the current state is done, applies its results and draws. */
     public void settle() throws IOException, InterruptedException {
-        // A finished curve starts tuning and flags, so wait again until draining starts nothing new.
+        // A finished curve starts tuning and flags, so wait again until draining starts nothing new. Jobs that
+        // end between the frame and the check leave their results queued, so the queue must be empty too (a
+        // scripted job can finish that fast; a test once saw no flags after settling).
         do {
             jobs.awaitIdle(120_000);
             drainEvents();
             draw();
-        } while (jobs.busy());
+        } while (jobs.busy() || !events.isEmpty());
     }
 
     /** Waits until the curve of the current state is in and drawn, leaving tuning and flags running. */
