@@ -128,4 +128,40 @@ class LoadPanelTest {
         assertFalse(power.blankOnly());
         assertEquals(List.of(2L, 3L, 4L), power.firstLines());
     }
+
+    /** The six malformed lines of the default demo log, as data-demo/README.md lists them (fault 7). */
+    private static final List<Long> DEMO_MALFORMED = List.of(30739L, 88849L, 158901L, 221216L, 289586L, 375196L);
+
+    @Test
+    void theDemoLogsPanelListsItsSixMalformedLines() throws Exception {
+        // The panel's lines straight from the workbench: the explorer's tuning and flags on 420 480 rows would
+        // take the test from seconds to half a minute.
+        Workbench wb = CoreWorkbench.open(demoLog(), "site-log.csv.gz", JobControl.NONE);
+        String panel = String.join("\n", LoadPanel.lines(wb.loadNotes()));
+        assertTrue(panel.contains("420,480 data rows read"), panel);
+        for (long line : DEMO_MALFORMED) {
+            assertTrue(panel.contains("line " + line + ":") || panel.contains(" " + line + " \"ERR\""),
+                    "line " + line + " in the panel:\n" + panel);
+        }
+        // data-demo/README.md: 3008 blank cells in the default file, plus the cells padded into its two short
+        // lines (rotor_rpm on line 30739, five fields on line 221216).
+        long blank = 0;
+        for (ColumnGaps g : wb.loadNotes().columns()) {
+            blank += g.blank();
+        }
+        assertEquals(3008 + 1 + 5, blank);
+    }
+
+    /** The demo log of the build (scripts/test makes it), or one generated here with the same script. */
+    private Path demoLog() throws Exception {
+        Path built = Path.of("data-demo", "site-log.csv.gz");
+        if (Files.isRegularFile(built)) {
+            return built;
+        }
+        Path out = dir.resolve("site-log.csv.gz");
+        Process p = new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                "--source", "17", "scripts/make-demo-log", "--out", out.toString()).inheritIO().start();
+        assertEquals(0, p.waitFor());
+        return out;
+    }
 }
