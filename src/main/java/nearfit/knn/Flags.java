@@ -38,17 +38,9 @@ public final class Flags {
             for (int r = from; r < to; r++) {
                 int i = order[r];
                 System.arraycopy(model.coords(), i * d, q, 0, d);
-                sr.find(q, k, i);
-                LocalEstimator est = sr.estimator();
-                est.load(sr.list(), y);
-                est.prepare(s.weighting(), k);
-                fit[i] = est.fit(k);
+                fit[i] = sr.fitLeavingOut(q, k, i, scale);
                 res[i] = y[i] - fit[i];
-                if (scale == FlagScale.LOCAL_SD) {
-                    local[i] = est.sd(k, fit[i]);
-                } else if (scale == FlagScale.LOCAL_MAD) {
-                    local[i] = InputTransform.MAD_TO_SD * est.mad(k);
-                }
+                local[i] = sr.localScale();
             }
         }, progress);
         double[] sorted = res.clone();

@@ -14,15 +14,30 @@ public final class KnnModel {
     private final double[] coords;
     private final NeighborIndex index;
     private final double[] classValues;
+    private final TiedRuns tiedRuns;
 
     private KnnModel(ReferenceData data, KnnSettings settings, InputTransform transform, double[] coords,
-                     NeighborIndex index) {
+                     NeighborIndex index, TiedRuns tiedRuns) {
         this.data = data;
         this.settings = settings;
         this.transform = transform;
         this.coords = coords;
         this.index = index;
         this.classValues = data.isCategory() ? codesAsValues(data.classes()) : null;
+        this.tiedRuns = tiedRuns;
+    }
+
+    /** The long tied runs of a one-input index over a numeric response, or null. */
+    private static TiedRuns tiedRunsOf(NeighborIndex index, ReferenceData data) {
+        if (index instanceof SortedIndex sorted && !data.isCategory()) {
+            return TiedRuns.of(sorted.coordinates(), data.response(), sorted.metric());
+        }
+        return null;
+    }
+
+    /** The long tied runs of the index (one input, numeric response), or null: see {@link TiedRuns}. */
+    TiedRuns tiedRuns() {
+        return tiedRuns;
     }
 
     private static double[] codesAsValues(int[] codes) {
@@ -61,7 +76,7 @@ public final class KnnModel {
         }
         double[] coords = transform.pack(data);
         NeighborIndex index = NeighborIndex.build(coords, data.dimensions(), settings.metric(), settings.threads());
-        return new KnnModel(data, settings, transform, coords, index);
+        return new KnnModel(data, settings, transform, coords, index, tiedRunsOf(index, data));
     }
 
     /** Which columns left the rows out, e.g. {@code power_kw is missing in all 30 rows}. */
@@ -95,7 +110,7 @@ public final class KnnModel {
     public KnnModel withSettings(KnnSettings s) {
         if (s.sameIndexAs(settings)) {
             checkK(s.k(), data.size());
-            return new KnnModel(data, s, transform, coords, index);
+            return new KnnModel(data, s, transform, coords, index, tiedRuns);
         }
         return fit(data, s);
     }

@@ -12,6 +12,7 @@ public final class Searcher {
     private final double[] coords;
     private final double[] shares;
     private final double[] nearest;
+    private double localScale = Double.NaN;
 
     Searcher(KnnModel model) {
         this.model = model;
@@ -93,30 +94,87 @@ public final class Searcher {
         }
     }
 
-    /** The full estimate at scaled coordinates q into slot i of out. */
+    /**
+     * The full estimate at scaled coordinates q into slot i of out, position {@code exclude} left
+     * out (none when negative). Neighbours that are exactly one long tied run are summed from the
+     * run's totals ({@link TiedRuns}), the others row by row.
+     */
     void estimateAt(double[] q, int exclude, Estimates out, int i) {
         KnnSettings s = model.settings();
         int k = s.k();
-        find(q, k, exclude);
-        LocalEstimator est = estimator;
-        est.load(list, model.data().response());
-        est.prepare(s.weighting(), k);
-        double fit = est.fit(k);
-        double sd = est.sd(k, fit);
+        Band band = s.band();
+        TiedRuns runs = model.tiedRuns();
+        int run = runs == null ? -1 : runs.runFor(q[0], k, exclude);
+        double fit;
+        double sd;
+        double low = Double.NaN;
+        double high = Double.NaN;
+        double key;
+        int counted;
+        if (run >= 0) {
+            fit = runs.mean(run, exclude);
+            sd = runs.sd(run, exclude);
+            if (band.isQuantile()) {
+                low = runs.quantile(run, exclude, band.lowProbability());
+                high = runs.quantile(run, exclude, band.highProbability());
+            }
+            key = runs.key(run, q[0]);
+            counted = runs.size(run, exclude);
+        } else {
+            find(q, k, exclude);
+            LocalEstimator est = estimator;
+            est.load(list, model.data().response());
+            est.prepare(s.weighting(), k);
+            fit = est.fit(k);
+            sd = est.sd(k, fit);
+            if (band.isQuantile()) {
+                low = est.quantile(k, band.lowProbability());
+                high = est.quantile(k, band.highProbability());
+            }
+            key = est.kthKey(k);
+            counted = est.counted(k);
+        }
+        if (band == Band.SD2) {
+            low = fit - 2 * sd;
+            high = fit + 2 * sd;
+        }
         out.fit()[i] = fit;
         out.localSd()[i] = sd;
-        Band band = s.band();
-        if (band.isQuantile()) {
-            out.bandLow()[i] = est.quantile(k, band.lowProbability());
-            out.bandHigh()[i] = est.quantile(k, band.highProbability());
-        } else if (band == Band.SD2) {
-            out.bandLow()[i] = fit - 2 * sd;
-            out.bandHigh()[i] = fit + 2 * sd;
-        } else {
-            out.bandLow()[i] = Double.NaN;
-            out.bandHigh()[i] = Double.NaN;
+        out.bandLow()[i] = low;
+        out.bandHigh()[i] = high;
+        out.windowWidth()[i] = model.windowWidthOfKey(key);
+        out.neighbourCount()[i] = counted;
+    }
+
+    /**
+     * The fit at scaled coordinates q for k with position {@code exclude} left out; afterwards
+     * {@link #localScale()} holds the neighbours' spread the flag scale asks for (their SD, or
+     * 1.4826 times their MAD; NaN for the global scale). Long tied runs are summed from their
+     * totals, except for the local MAD, which walks the rows.
+     */
+    double fitLeavingOut(double[] q, int k, int exclude, FlagScale scale) {
+        TiedRuns runs = model.tiedRuns();
+        int run = runs == null || scale == FlagScale.LOCAL_MAD ? -1 : runs.runFor(q[0], k, exclude);
+        if (run >= 0) {
+            localScale = scale == FlagScale.LOCAL_SD ? runs.sd(run, exclude) : Double.NaN;
+            return runs.mean(run, exclude);
         }
-        out.windowWidth()[i] = model.windowWidthOfKey(est.kthKey(k));
-        out.neighbourCount()[i] = est.counted(k);
+        find(q, k, exclude);
+        estimator.load(list, model.data().response());
+        estimator.prepare(model.settings().weighting(), k);
+        double fit = estimator.fit(k);
+        if (scale == FlagScale.LOCAL_SD) {
+            localScale = estimator.sd(k, fit);
+        } else if (scale == FlagScale.LOCAL_MAD) {
+            localScale = InputTransform.MAD_TO_SD * estimator.mad(k);
+        } else {
+            localScale = Double.NaN;
+        }
+        return fit;
+    }
+
+    /** The local spread of the last {@link #fitLeavingOut} call. */
+    double localScale() {
+        return localScale;
     }
 }

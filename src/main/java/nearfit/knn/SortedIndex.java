@@ -141,6 +141,11 @@ public final class SortedIndex implements NeighborIndex {
     }
 
     private int lowerBound(double q) {
+        return lowerBound(x, q);
+    }
+
+    /** The first position whose coordinate is not below q (x.length when none). */
+    static int lowerBound(double[] x, double q) {
         int lo = 0;
         int hi = x.length;
         while (lo < hi) {
@@ -152,6 +157,11 @@ public final class SortedIndex implements NeighborIndex {
             }
         }
         return lo;
+    }
+
+    /** The ascending coordinates (the stored array). */
+    double[] coordinates() {
+        return x;
     }
 
     @Override

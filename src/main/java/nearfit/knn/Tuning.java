@@ -132,7 +132,8 @@ public final class Tuning {
         int chunks = Workers.chunks(rows.length);
         int[] order = spatialOrder(model.coords(), d, rows);
         double[][] partial = new double[chunks][];
-        Workers.run(rows.length, model.settings().threads(), () -> new RowPass(model, index, map, kmax), (pass, c, from, to) -> {
+        TiedRuns runs = tiedRunsFor(model, index, map);
+        Workers.run(rows.length, model.settings().threads(), () -> new RowPass(model, index, map, kmax, runs), (pass, c, from, to) -> {
             double[] sums = new double[kmax * SUMS];
             double[] q = new double[d];
             for (int r = from; r < to; r++) {
@@ -149,6 +150,17 @@ public final class Tuning {
             }
         }
         return total;
+    }
+
+    /** The long tied runs of the searched index: the model's own, or those of a fold's index. */
+    private static TiedRuns tiedRunsFor(KnnModel model, NeighborIndex index, int[] map) {
+        if (map == null) {
+            return model.tiedRuns();
+        }
+        if (index instanceof SortedIndex sorted && !model.data().isCategory()) {
+            return TiedRuns.of(sorted.coordinates(), RowPass.gather(model.data().response(), map), sorted.metric());
+        }
+        return null;
     }
 
     /**
@@ -252,8 +264,10 @@ public final class Tuning {
         final LocalEstimator est;
         final double[] shares;
         final double[] nearest;
+        final TiedRuns runs;
 
-        RowPass(KnnModel model, NeighborIndex index, int[] map, int kmax) {
+        RowPass(KnnModel model, NeighborIndex index, int[] map, int kmax, TiedRuns runs) {
+            this.runs = runs;
             this.index = index;
             this.map = map;
             this.kmax = kmax;
@@ -269,7 +283,7 @@ public final class Tuning {
             this.indexValues = map == null ? v : gather(v, map);
         }
 
-        private static double[] gather(double[] v, int[] map) {
+        static double[] gather(double[] v, int[] map) {
             double[] g = new double[map.length];
             for (int i = 0; i < map.length; i++) {
                 g[i] = v[map[i]];
@@ -278,6 +292,18 @@ public final class Tuning {
         }
 
         void run(double[] q, int exclude, int pos, double[] sums) {
+            int run = runs == null ? -1 : runs.runFor(q[0], kmax, exclude);
+            if (run >= 0) {
+                // the run holds every counted neighbour for each k up to kmax: one fit for all k
+                double e = y[pos] - runs.mean(run, exclude);
+                double e2 = e * e;
+                for (int o = 0; o < kmax * SUMS; o += SUMS) {
+                    sums[o] += e2;
+                    sums[o + 1] += e2 * e2;
+                    sums[o + 2] += Math.abs(e);
+                }
+                return;
+            }
             boolean tricube = weighting == Weighting.TRICUBE;
             int available = index.size() - (exclude >= 0 ? 1 : 0);
             int want = tricube ? Math.min(kmax + 1, available) : kmax;
