@@ -110,9 +110,10 @@ public final class ReferenceData {
             }
         }
         kept = Arrays.copyOf(kept, m);
-        canonicalOrder(kept, in, y, codes, rowIds);
-        double[][] keptIn = new double[d][m];
-        for (int j = 0; j < d; j++) {
+        double[][] keptIn = new double[d][];
+        keptIn[0] = canonicalOrder(kept, in, y, codes, rowIds);
+        for (int j = 1; j < d; j++) {
+            keptIn[j] = new double[m];
             double[] src = in[j];
             double[] dst = keptIn[j];
             for (int i = 0; i < m; i++) {
@@ -135,31 +136,36 @@ public final class ReferenceData {
     }
 
     /**
-     * Sorts the kept row indexes lexicographically by input 0, ..., input d-1, response, row id:
-     * a radix sort on input 0, then a comparison sort inside each run of equal input-0 values
-     * (runs are short for measured data, long for coarse data; both stay O(n log n)). A long run's
-     * remaining keys are first copied into scratch arrays, so its sort compares values that sit
-     * together in cache instead of reaching into the whole columns (rounded 10M-row inputs hold
-     * thousands of rows per value, and those scattered reads dominated).
+     * Sorts the kept row indexes lexicographically by input 0, ..., input d-1, response, row id.
+     * First by input 0 alone: each row becomes one long, the top 32 bits of its value's sortable
+     * form above its index, sorted on all cores ({@link ParallelSort}); rows whose top bits
+     * agree but whose values differ are then put in value order. Then a comparison sort inside each
+     * run of equal input-0 values by the remaining keys, so the order within a run need not be
+     * stable. A long run's remaining keys are first copied into scratch arrays, so its sort compares
+     * values that sit together in cache instead of reaching into the whole columns (rounded 10M-row
+     * inputs hold thousands of rows per value, and those scattered reads dominated).
      */
-    private static void canonicalOrder(int[] kept, double[][] in, double[] y, int[] codes, int[] rowIds) {
+    private static double[] canonicalOrder(int[] kept, double[][] in, double[] y, int[] codes, int[] rowIds) {
         int m = kept.length;
-        long[] key = new long[m];
         double[] x0 = in[0];
+        long[] packed = new long[m];
         for (int i = 0; i < m; i++) {
-            key[i] = RadixSort.sortableBits(x0[kept[i]]);
+            long top = RadixSort.sortableBits(x0[kept[i]]) >>> 32; // unsigned order of the value
+            packed[i] = (top ^ 0x8000_0000L) << 32 | i; // signed order of the long = that order
         }
-        int[] perm = RadixSort.order(key);
-        key = null;
+        ParallelSort.sort(packed, Runtime.getRuntime().availableProcessors());
         int[] order = new int[m];
+        double[] sorted = new double[m]; // input 0 in the order being built: one scattered pass only
         for (int i = 0; i < m; i++) {
-            order[i] = kept[perm[i]];
+            order[i] = kept[(int) packed[i]];
+            sorted[i] = x0[order[i]] + 0.0;
         }
-        perm = null;
+        orderEqualTopBits(order, sorted, packed);
+        packed = null;
         RunSorter runs = new RunSorter(in, y, codes, rowIds);
         int from = 0;
         for (int i = 1; i <= m; i++) {
-            if (i == m || x0[order[i]] + 0.0 != x0[order[from]] + 0.0) {
+            if (i == m || sorted[i] != sorted[from]) {
                 if (i - from > 1) {
                     runs.sort(order, from, i);
                 }
@@ -167,6 +173,50 @@ public final class ReferenceData {
             }
         }
         System.arraycopy(order, 0, kept, 0, m);
+        return sorted;
+    }
+
+    /**
+     * Within each group of rows whose values share their top 32 bits (packed sorted), puts the
+     * rows and their values ({@code sorted}, in step with {@code order}) in ascending order of the
+     * full value, equal values by row index.
+     */
+    private static void orderEqualTopBits(int[] order, double[] sorted, long[] packed) {
+        int m = order.length;
+        double[] value = new double[0];
+        double[] slot = new double[0];
+        int from = 0;
+        for (int i = 1; i <= m; i++) {
+            if (i < m && packed[i] >>> 32 == packed[from] >>> 32) {
+                continue;
+            }
+            int len = i - from;
+            if (len > 1 && !allEqual(sorted, from, i)) {
+                if (slot.length < len) {
+                    value = new double[Math.max(len, 2 * slot.length)];
+                    slot = new double[value.length];
+                }
+                for (int t = 0; t < len; t++) {
+                    value[t] = sorted[from + t];
+                    slot[t] = order[from + t];
+                }
+                PairSort.sort(value, slot, 0, len);
+                for (int t = 0; t < len; t++) {
+                    sorted[from + t] = value[t];
+                    order[from + t] = (int) slot[t];
+                }
+            }
+            from = i;
+        }
+    }
+
+    private static boolean allEqual(double[] v, int from, int to) {
+        for (int t = from + 1; t < to; t++) {
+            if (v[t] != v[from]) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** Sorts runs of equal input 0 by the remaining keys: inputs 1..d-1, response, row id. */
