@@ -1,6 +1,5 @@
 package nearfit.knn;
 
-import java.util.Arrays;
 import nearfit.table.NearfitException;
 
 /**
@@ -43,14 +42,12 @@ public final class Flags {
                 local[i] = sr.localScale();
             }
         }, progress);
-        double[] sorted = res.clone();
-        Arrays.sort(sorted);
-        double median = Quantiles.sortedQuantile(sorted, n, 0.5);
+        double[] scratch = res.clone();
+        double median = Quantiles.median(scratch, n);
         for (int i = 0; i < n; i++) {
-            sorted[i] = Math.abs(res[i] - median);
+            scratch[i] = Math.abs(res[i] - median);
         }
-        Arrays.sort(sorted);
-        double mad = InputTransform.MAD_TO_SD * Quantiles.sortedQuantile(sorted, n, 0.5);
+        double mad = InputTransform.MAD_TO_SD * Quantiles.median(scratch, n);
         double[] z = new double[n];
         boolean[] flagged = new boolean[n];
         int count = 0;

@@ -152,9 +152,7 @@ public final class KnnModel {
 
     /** The class vote at one raw point; category response only. */
     public ClassVote vote(double... point) {
-        if (!data.isCategory()) {
-            throw new NearfitException("the response " + data.responseName() + " is a number, not a category");
-        }
+        requireCategory();
         return searcher().vote(point);
     }
 
@@ -178,6 +176,33 @@ public final class KnnModel {
                     markMissing(out, i);
                 } else {
                     s.estimateAt(p, -1, out, i);
+                }
+            }
+        }, progress);
+        return out;
+    }
+
+    /**
+     * Class votes at many raw points given as one column per input, in parallel on
+     * {@link KnnSettings#threads()} threads; category response only.
+     */
+    public ClassVotes voteAll(double[][] columns, Progress progress) {
+        requireCategory();
+        int n = columns[0].length;
+        int d = data.dimensions();
+        double[] q = transformAll(columns);
+        int[] order = QueryOrder.of(q, d, n);
+        ClassVotes out = ClassVotes.ofSize(n);
+        Workers.run(n, settings.threads(), () -> new Object[] {searcher(), new double[d]}, (sc, c, from, to) -> {
+            Searcher s = (Searcher) sc[0];
+            double[] p = (double[]) sc[1];
+            for (int r = from; r < to; r++) {
+                int i = order[r];
+                if (!point(q, i, p)) {
+                    out.winner()[i] = -1;
+                    out.share()[i] = Double.NaN;
+                } else {
+                    s.voteAt(p, out, i);
                 }
             }
         }, progress);
@@ -282,6 +307,12 @@ public final class KnnModel {
             return dist / w * transform.scale()[0];
         }
         return dist;
+    }
+
+    private void requireCategory() {
+        if (!data.isCategory()) {
+            throw new NearfitException("the response " + data.responseName() + " is a number, not a category");
+        }
     }
 
     private void requireNumeric() {

@@ -1,7 +1,6 @@
 package nearfit.knn;
 
 import it.unimi.dsi.fastutil.ints.IntArrays;
-import it.unimi.dsi.fastutil.ints.IntComparator;
 import java.util.Arrays;
 import nearfit.table.NearfitException;
 
@@ -111,9 +110,10 @@ public final class ReferenceData {
             }
         }
         kept = Arrays.copyOf(kept, m);
-        canonicalOrder(kept, in, y, codes, rowIds);
-        double[][] keptIn = new double[d][m];
-        for (int j = 0; j < d; j++) {
+        double[][] keptIn = new double[d][];
+        keptIn[0] = canonicalOrder(kept, in, y, codes, rowIds);
+        for (int j = 1; j < d; j++) {
+            keptIn[j] = new double[m];
             double[] src = in[j];
             double[] dst = keptIn[j];
             for (int i = 0; i < m; i++) {
@@ -136,45 +136,173 @@ public final class ReferenceData {
     }
 
     /**
-     * Sorts the kept row indexes lexicographically by input 0, ..., input d-1, response, row id:
-     * a radix sort on input 0, then a comparison sort inside each run of equal input-0 values
-     * (runs are short for measured data, long for coarse data; both stay O(n log n)).
+     * Sorts the kept row indexes lexicographically by input 0, ..., input d-1, response, row id.
+     * First by input 0 alone: each row becomes one long, the top 32 bits of its value's sortable
+     * form above its index, sorted on all cores ({@link ParallelSort}); rows whose top bits
+     * agree but whose values differ are then put in value order. Then a comparison sort inside each
+     * run of equal input-0 values by the remaining keys, so the order within a run need not be
+     * stable. A long run's remaining keys are first copied into scratch arrays, so its sort compares
+     * values that sit together in cache instead of reaching into the whole columns (rounded 10M-row
+     * inputs hold thousands of rows per value, and those scattered reads dominated).
      */
-    private static void canonicalOrder(int[] kept, double[][] in, double[] y, int[] codes, int[] rowIds) {
+    private static double[] canonicalOrder(int[] kept, double[][] in, double[] y, int[] codes, int[] rowIds) {
         int m = kept.length;
-        long[] key = new long[m];
         double[] x0 = in[0];
+        long[] packed = new long[m];
         for (int i = 0; i < m; i++) {
-            key[i] = RadixSort.sortableBits(x0[kept[i]]);
+            long top = RadixSort.sortableBits(x0[kept[i]]) >>> 32; // unsigned order of the value
+            packed[i] = (top ^ 0x8000_0000L) << 32 | i; // signed order of the long = that order
         }
-        int[] perm = RadixSort.order(key);
+        ParallelSort.sort(packed, Runtime.getRuntime().availableProcessors());
         int[] order = new int[m];
+        double[] sorted = new double[m]; // input 0 in the order being built: one scattered pass only
         for (int i = 0; i < m; i++) {
-            order[i] = kept[perm[i]];
+            order[i] = kept[(int) packed[i]];
+            sorted[i] = x0[order[i]] + 0.0;
         }
-        IntComparator rest = (a, b) -> {
-            for (int j = 1; j < in.length; j++) {
-                int c = Double.compare(in[j][a] + 0.0, in[j][b] + 0.0);
-                if (c != 0) {
-                    return c;
-                }
-            }
-            int c = y != null ? Double.compare(y[a] + 0.0, y[b] + 0.0) : Integer.compare(codes[a], codes[b]);
-            if (c != 0) {
-                return c;
-            }
-            return rowIds == null ? Integer.compare(a, b) : Integer.compare(rowIds[a], rowIds[b]);
-        };
+        orderEqualTopBits(order, sorted, packed);
+        packed = null;
+        RunSorter runs = new RunSorter(in, y, codes, rowIds);
         int from = 0;
         for (int i = 1; i <= m; i++) {
-            if (i == m || x0[order[i]] + 0.0 != x0[order[from]] + 0.0) {
+            if (i == m || sorted[i] != sorted[from]) {
                 if (i - from > 1) {
-                    IntArrays.quickSort(order, from, i, rest);
+                    runs.sort(order, from, i);
                 }
                 from = i;
             }
         }
         System.arraycopy(order, 0, kept, 0, m);
+        return sorted;
+    }
+
+    /**
+     * Within each group of rows whose values share their top 32 bits (packed sorted), puts the
+     * rows and their values ({@code sorted}, in step with {@code order}) in ascending order of the
+     * full value, equal values by row index.
+     */
+    private static void orderEqualTopBits(int[] order, double[] sorted, long[] packed) {
+        int m = order.length;
+        double[] value = new double[0];
+        double[] slot = new double[0];
+        int from = 0;
+        for (int i = 1; i <= m; i++) {
+            if (i < m && packed[i] >>> 32 == packed[from] >>> 32) {
+                continue;
+            }
+            int len = i - from;
+            if (len > 1 && !allEqual(sorted, from, i)) {
+                if (slot.length < len) {
+                    value = new double[Math.max(len, 2 * slot.length)];
+                    slot = new double[value.length];
+                }
+                for (int t = 0; t < len; t++) {
+                    value[t] = sorted[from + t];
+                    slot[t] = order[from + t];
+                }
+                PairSort.sort(value, slot, 0, len);
+                for (int t = 0; t < len; t++) {
+                    sorted[from + t] = value[t];
+                    order[from + t] = (int) slot[t];
+                }
+            }
+            from = i;
+        }
+    }
+
+    private static boolean allEqual(double[] v, int from, int to) {
+        for (int t = from + 1; t < to; t++) {
+            if (v[t] != v[from]) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /** Sorts runs of equal input 0 by the remaining keys: inputs 1..d-1, response, row id. */
+    private static final class RunSorter {
+        private final double[][] in;
+        private final double[] y;
+        private final int[] codes;
+        private final int[] rowIds;
+        private double[][] cols = new double[0][];
+        private int[] ids = new int[0];
+        private int[] local = new int[0];
+        private int[] saved = new int[0];
+        private double[] position = new double[0];
+
+        RunSorter(double[][] in, double[] y, int[] codes, int[] rowIds) {
+            this.in = in;
+            this.y = y;
+            this.codes = codes;
+            this.rowIds = rowIds;
+        }
+
+        void sort(int[] order, int from, int to) {
+            int len = to - from;
+            int keys = in.length; // inputs 1..d-1, then the response
+            if (cols.length == 0 || cols[0].length < len) {
+                int cap = Math.max(len, 2 * ids.length);
+                cols = new double[keys][cap];
+                ids = new int[cap];
+                local = new int[cap];
+                saved = new int[cap];
+            }
+            for (int t = 0; t < len; t++) {
+                int row = order[from + t];
+                for (int j = 1; j < keys; j++) {
+                    cols[j - 1][t] = in[j][row] + 0.0;
+                }
+                cols[keys - 1][t] = y != null ? y[row] + 0.0 : codes[row];
+                ids[t] = rowIds == null ? row : rowIds[row];
+                local[t] = t;
+                saved[t] = row;
+            }
+            if (keys == 1 && ascending(ids, len)) {
+                sortByResponse(order, from, len);
+                return;
+            }
+            double[][] c = cols;
+            int[] id = ids;
+            IntArrays.quickSort(local, 0, len, (a, b) -> {
+                for (double[] col : c) {
+                    int r = Double.compare(col[a], col[b]);
+                    if (r != 0) {
+                        return r;
+                    }
+                }
+                return Integer.compare(id[a], id[b]);
+            });
+            for (int t = 0; t < len; t++) {
+                order[from + t] = saved[local[t]];
+            }
+        }
+
+        /**
+         * One input: sorts by (response, position in the run), which is (response, row id) because
+         * the row ids ascend along the run; primitive pairs, no comparator.
+         */
+        private void sortByResponse(int[] order, int from, int len) {
+            if (position.length < len) {
+                position = new double[cols[0].length];
+            }
+            for (int t = 0; t < len; t++) {
+                position[t] = t;
+            }
+            PairSort.sort(cols[0], position, 0, len);
+            for (int t = 0; t < len; t++) {
+                order[from + t] = saved[(int) position[t]];
+            }
+        }
+
+        private static boolean ascending(int[] a, int len) {
+            for (int t = 1; t < len; t++) {
+                if (a[t] <= a[t - 1]) {
+                    return false;
+                }
+            }
+            return true;
+        }
     }
 
     /** Number of kept rows. */

@@ -58,6 +58,18 @@ public final class Searcher {
         return new ClassVote(winner, shares.clone(), estimator.counted(k));
     }
 
+    /** The class vote at scaled coordinates q into slot i of out. */
+    void voteAt(double[] q, ClassVotes out, int i) {
+        int k = model.settings().k();
+        find(q, k, -1);
+        estimator.load(list, model.classValues());
+        estimator.prepare(model.settings().weighting(), k);
+        int winner = estimator.vote(k, shares, nearest);
+        out.winner()[i] = winner;
+        out.share()[i] = shares[winner];
+        out.neighbourCount()[i] = estimator.counted(k);
+    }
+
     /** Transforms a raw point into the scratch coordinates. */
     double[] transformed(double[] raw) {
         model.transform().apply(raw, coords);

@@ -21,6 +21,8 @@
  *
  * Estimate e = model.estimate(9.5, 1.22);             // fit, band, local SD, window width, count
  * Curve c = model.curve(0, new double[] {0, 1.22}, grid, Progress.NONE);  // along wind_speed
+ * Estimates many = model.estimateAll(columns, progress);  // one column per input, all cores
+ * // a category response: model.vote(point) (ClassVote), model.voteAll(columns, progress) (ClassVotes)
  *
  * TuningTable t = Tuning.leaveOneOut(model, 100, progress);   // all k in 1..100, one pass
  * KnnModel tuned = model.withSettings(settings.withK(t.oneSeK()));  // keeps the index
@@ -40,6 +42,11 @@
  * <li><b>Determinism.</b> Reference rows are kept in a canonical order (by inputs, then response)
  *     and all sums run in orders fixed by the data, so shuffling the rows or changing the thread
  *     count changes no result, bit for bit.</li>
+ * <li><b>Long tied runs.</b> With one input, a query whose counted neighbours are exactly one
+ *     run of at least 64 equal coordinates (a rounded sensor) is answered from the run's totals in
+ *     O(log n): every weighting gives such a run equal weights, so fit, local SD and band are the
+ *     run's mean, SD and definition-7 quantiles, equal to the row-by-row result up to rounding
+ *     (the local MAD still walks the rows).</li>
  * <li><b>Units.</b> Window width is in the input's own units with one input and in scaled units
  *     with several. Distances in {@link nearfit.knn.NeighborList} are keys (squared for Euclidean).</li>
  * <li><b>Threads.</b> Models and indexes are immutable and shared; a {@link nearfit.knn.Searcher}

@@ -14,6 +14,7 @@ import nearfit.knn.CancelledException;
 import nearfit.knn.ClassVote;
 import nearfit.knn.Curve;
 import nearfit.knn.Estimates;
+import nearfit.knn.FlagResult;
 import nearfit.knn.Flags;
 import nearfit.knn.KnnModel;
 import nearfit.knn.Tuning;
@@ -50,6 +51,7 @@ public final class CoreWorkbench implements Workbench {
     private final String timeColumn;
     private final References references;
     private final ScenePoints points;
+    private final LoadNotes notes;
     private PointLayer pointLayer;
 
     private CoreWorkbench(Table table, String source) {
@@ -73,6 +75,7 @@ public final class CoreWorkbench implements Workbench {
         this.timeColumn = time;
         this.references = new References(table);
         this.points = new ScenePoints(table, references);
+        this.notes = LoadNotes.of(table);
     }
 
     /** Loads a file with the table package's loader, reporting progress and stopping when cancelled. */
@@ -106,6 +109,11 @@ public final class CoreWorkbench implements Workbench {
     @Override
     public long totalRows() {
         return table.rowCount();
+    }
+
+    @Override
+    public LoadNotes loadNotes() {
+        return notes;
     }
 
     @Override
@@ -180,34 +188,27 @@ public final class CoreWorkbench implements Workbench {
     }
 
     @Override
-    public TuningResult tune(ModelSettings m, JobControl control) {
+    public TuningTable tune(ModelSettings m, JobControl control) {
         KnnModel model = references.model(m.withK(1), null, -1).withSettings(KnnChoices.longSettings(m.withK(1)));
         int kmax = Math.min(TUNING_KMAX, model.data().size() - 1);
         if (kmax < 1) {
             throw new NearfitException("tuning needs at least two reference rows");
         }
         try {
-            TuningTable t = Tuning.leaveOneOut(model, kmax, KnnChoices.progress(control));
-            boolean category = model.data().isCategory();
-            int[] k = new int[t.kmax()];
-            for (int i = 0; i < k.length; i++) {
-                k[i] = i + 1;
-            }
-            return new TuningResult(k, category ? t.errorRate() : t.rmse(), category ? t.errorRateSe() : t.rmseSe(),
-                    t.bestK(), t.oneSeK());
+            return Tuning.leaveOneOut(model, kmax, KnnChoices.progress(control));
         } catch (CancelledException e) {
             throw new CancellationException("tuning superseded");
         }
     }
 
     @Override
-    public FlagResult flags(ModelSettings m, String groupColumn, JobControl control) {
+    public FlaggedRows flags(ModelSettings m, String groupColumn, JobControl control) {
         KnnModel model = references.model(m, null, -1).withSettings(KnnChoices.longSettings(m));
         if (model.data().isCategory()) {
-            return new FlagResult(0, 0, Double.NaN, Double.NaN, List.of());
+            return FlaggedRows.forCategory();
         }
         try {
-            nearfit.knn.FlagResult f = Flags.leaveOneOut(model, KnnChoices.progress(control));
+            FlagResult f = Flags.leaveOneOut(model, KnnChoices.progress(control));
             references.keepFlags(m, f);
             return FlaggedRows.of(table, model, f, timeColumn, groupColumn);
         } catch (CancelledException e) {
@@ -246,12 +247,12 @@ public final class CoreWorkbench implements Workbench {
     }
 
     @Override
-    public Cells tuningChart(TuningResult t, int currentK, int width, int height, boolean ascii) {
-        double[] k = new double[t.k().length];
+    public Cells tuningChart(TuningTable t, int currentK, int width, int height, boolean ascii) {
+        double[] k = new double[t.kmax()];
         for (int i = 0; i < k.length; i++) {
-            k[i] = t.k()[i];
+            k[i] = i + 1;
         }
-        TuningScene s = new TuningScene(k, t.rmse(), t.se(), t.bestK(), t.oneSeK(), "");
+        TuningScene s = new TuningScene(k, TuningCriterion.values(t), TuningCriterion.se(t), t.bestK(), t.oneSeK(), "");
         return new GridCells(TuningChart.compose(s, width, height, ascii ? CanvasKind.ASCII : CanvasKind.BRAILLE));
     }
 

@@ -124,12 +124,14 @@ public final class Explorer implements AutoCloseable {
 
     /** Waits until the background work of the current state is done, applies its results and draws. */
     public void settle() throws IOException, InterruptedException {
-        // A finished curve starts tuning and flags, so wait again until draining starts nothing new.
+        // A finished curve starts tuning and flags, so wait again until draining starts nothing new. Jobs that
+        // end between the frame and the check leave their results queued, so the queue must be empty too (a
+        // scripted job can finish that fast; a test once saw no flags after settling).
         do {
             jobs.awaitIdle(120_000);
             drainEvents();
             draw();
-        } while (jobs.busy());
+        } while (jobs.busy() || !events.isEmpty());
     }
 
     /** Waits until the curve of the current state is in and drawn, leaving tuning and flags running. */
@@ -261,8 +263,8 @@ public final class Explorer implements AutoCloseable {
         }
         switch (d.kind()) {
             case CURVE -> results = results.withCurve((CurveResult) d.value(), Double.NaN);
-            case TUNING -> results = results.withTuning((TuningResult) d.value(), Double.NaN);
-            case FLAGS -> results = results.withFlags((FlagResult) d.value(), Double.NaN);
+            case TUNING -> results = results.withTuning((nearfit.knn.TuningTable) d.value(), Double.NaN);
+            case FLAGS -> results = results.withFlags((FlaggedRows) d.value(), Double.NaN);
         }
     }
 
@@ -381,7 +383,8 @@ public final class Explorer implements AutoCloseable {
         int groups = state.groupColumn() == null ? 0 : workbench.labels(state.groupColumn()).size();
         int classes = kindOf(state.response()) == ColumnKind.CATEGORY ? workbench.labels(state.response()).size() : 0;
         return new KeyContext(workbench.columns(), results, quantile(state.displayInput(), 0),
-                quantile(state.displayInput(), 1), groups, classes, workbench.timeColumn() != null);
+                quantile(state.displayInput(), 1), groups, classes, workbench.timeColumn() != null,
+                LoadPanel.lines(workbench.loadNotes()).size());
     }
 
     FrameInput frameInput() {
@@ -389,7 +392,7 @@ public final class Explorer implements AutoCloseable {
         List<String> classes = kindOf(state.response()) == ColumnKind.CATEGORY
                 ? workbench.labels(state.response()) : List.of();
         return new FrameInput(workbench.source(), workbench.totalRows(), workbench.columns(), heldValues(),
-                results.rowsUsed() == 0 ? null : request(), groups, classes, Double.NaN);
+                results.rowsUsed() == 0 ? null : request(), groups, classes, Double.NaN, workbench.loadNotes());
     }
 
     /** Draws a frame, first taking in a new terminal size (which may ask for a new curve). */

@@ -90,14 +90,14 @@ final class Exporter {
         w.flush();
     }
 
-    static void flagsCsv(ViewState s, FlagResult f, OutputStream out) throws IOException {
+    static void flagsCsv(ViewState s, FlaggedRows f, OutputStream out) throws IOException {
         Writer w = new OutputStreamWriter(out, StandardCharsets.UTF_8);
         StringBuilder head = new StringBuilder("line,time,group");
         for (String in : s.inputs()) {
             head.append(',').append(cell(in));
         }
         w.write(head.append(',').append(cell(s.response())).append(",fit,residual,z\r\n").toString());
-        for (FlaggedRow row : f.flagged()) {
+        for (FlaggedRow row : f.rows()) {
             StringBuilder sb = new StringBuilder().append(row.line()).append(',').append(cell(row.time()))
                     .append(',').append(cell(row.group()));
             for (double v : row.inputs()) {

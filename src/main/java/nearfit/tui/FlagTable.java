@@ -20,7 +20,7 @@ final class FlagTable {
         if (r.flags() == null) {
             return out;
         }
-        for (FlaggedRow f : r.flags().flagged()) {
+        for (FlaggedRow f : r.flags().rows()) {
             StringBuilder sb = new StringBuilder(String.format(Locale.ROOT, "%9d  %-20s  %-8s", f.line(),
                     cut(f.time(), 20), cut(f.group(), 8)));
             for (double v : f.inputs()) {

@@ -5,19 +5,47 @@ import java.util.ArrayList;
 import java.util.List;
 
 import it.unimi.dsi.fastutil.ints.IntArrays;
+import nearfit.knn.FlagResult;
+import nearfit.knn.FlagScale;
 import nearfit.knn.KnnModel;
+import nearfit.knn.KnnSettings;
 import nearfit.knn.ReferenceData;
 import nearfit.table.CategoryColumn;
 import nearfit.table.Table;
 import nearfit.table.TimeColumn;
 
-/** The knn package's leave-one-out flags as the rows of the explorer's flagged table, largest |z| first. */
-final class FlaggedRows {
-    private FlaggedRows() {
+/**
+ * The knn package's leave-one-out flags with the flagged rows as the explorer lists them, largest |z| first.
+ *
+ * @param result  the core's flags over every reference row; no rows for a category response
+ * @param looRmse {@code result.looRmse()}, kept since that is a pass over the rows
+ * @param rows    the flagged rows with their lines, times and group labels, largest |z| first
+ */
+public record FlaggedRows(FlagResult result, double looRmse, List<FlaggedRow> rows) {
+    /** Copies the list so that the record stays immutable. */
+    public FlaggedRows {
+        rows = List.copyOf(rows);
     }
 
-    static FlagResult of(Table table, KnnModel model, nearfit.knn.FlagResult f, String timeColumn,
-            String groupColumn) {
+    /** No flags: leave-one-out flags do not apply to a category response. */
+    static FlaggedRows forCategory() {
+        double[] none = new double[0];
+        FlagResult empty = new FlagResult(new int[0], none, none, none, new boolean[0], 0, Double.NaN, Double.NaN,
+                FlagScale.LOCAL_SD, KnnSettings.DEFAULT_FLAG_THRESHOLD);
+        return new FlaggedRows(empty, Double.NaN, List.of());
+    }
+
+    /** The reference rows examined; 0 when flags do not apply. */
+    public int examined() {
+        return result.rowIds().length;
+    }
+
+    /** The flagged share of the examined rows, 0 when there are none. */
+    public double share() {
+        return examined() == 0 ? 0 : (double) result.flaggedCount() / examined();
+    }
+
+    static FlaggedRows of(Table table, KnnModel model, FlagResult f, String timeColumn, String groupColumn) {
         int[] order = new int[f.flaggedCount()];
         int n = 0;
         for (int i = 0; i < f.flagged().length; i++) {
@@ -47,6 +75,6 @@ final class FlaggedRows {
             rows.add(new FlaggedRow(row, table.lineOf(row), when, label, inputs, data.response()[i], f.looFit()[i],
                     f.residual()[i], z[i]));
         }
-        return new FlagResult(f.rowIds().length, n, f.looRmse(), f.threshold(), rows);
+        return new FlaggedRows(f, f.looRmse(), rows);
     }
 }

@@ -15,9 +15,11 @@ import java.util.Map;
  * @param groupLabels labels of the group column, empty without one
  * @param classLabels labels of a category response, empty for a number response
  * @param loading     load progress from 0 to 1, NaN once loaded
+ * @param notes       what the loader found in the file
  */
 public record FrameInput(String source, long totalRows, List<ColumnInfo> columns, Map<String, Double> heldValues,
-        CurveRequest request, List<String> groupLabels, List<String> classLabels, double loading) {
+        CurveRequest request, List<String> groupLabels, List<String> classLabels, double loading,
+        LoadNotes notes) {
     public FrameInput {
         columns = List.copyOf(columns);
         heldValues = Map.copyOf(heldValues);

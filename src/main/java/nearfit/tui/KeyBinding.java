@@ -18,6 +18,7 @@ public enum KeyBinding {
     BAND("b", "next band"),
     FLAG_MARKS("f", "flag marks on or off"),
     FLAG_TABLE("F", "flagged-rows table (Enter jumps to the row)"),
+    LOAD_REPORT("L", "load report: rows read, ragged lines, blank and bad cells per column with their lines"),
     RESIDUALS("r", "residuals instead of the response"),
     OVER_TIME("T", "residuals over time"),
     GROUP("g", "choose the group column"),
@@ -30,8 +31,7 @@ public enum KeyBinding {
     ZOOM_OUT("[", "zoom out"),
     WHOLE("0", "the whole data"),
     HELD("v", "choose which extra input is held fixed"),
-    HELD_DOWN("<", "held value down a 5 % quantile step"),
-    HELD_UP(">", "held value up a 5 % quantile step"),
+    HELD_STEP("< >", "held value down or up a 5 % quantile step"),
     NEAR_HELD("h", "only rows near the held values"),
     CONDITION("/", "row condition: column op value [and ...], ops = != < <= > >=, times as ISO dates"),
     EXPORT("e", "export the curve, the flagged rows, the plot as PNG or as text");

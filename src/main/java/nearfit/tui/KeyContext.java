@@ -12,9 +12,10 @@ import java.util.List;
  * @param groupCount  labels in the group column, 0 without one
  * @param classCount  labels in a category response, 0 for a number response
  * @param hasTime     whether the table has a time column
+ * @param loadLines   lines in the load-report panel
  */
 public record KeyContext(List<ColumnInfo> columns, Results results, double dataFrom, double dataTo,
-        int groupCount, int classCount, boolean hasTime) {
+        int groupCount, int classCount, boolean hasTime, int loadLines) {
     public KeyContext {
         columns = List.copyOf(columns);
     }

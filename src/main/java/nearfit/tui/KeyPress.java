@@ -8,6 +8,12 @@ import java.util.Map;
 import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.input.KeyType;
 
+import nearfit.knn.Band;
+import nearfit.knn.Metric;
+import nearfit.knn.Scaling;
+import nearfit.knn.TuningTable;
+import nearfit.knn.Weighting;
+
 /**
  * The explorer's key map as a pure function: a state, a key and what the key may consult give the next state
  * and any effect. Nothing here computes statistics or touches the terminal.
@@ -40,6 +46,8 @@ public final class KeyPress {
             case PICKER -> picker(fresh, key, cx);
             case TUNING -> tuning(fresh, key, cx);
             case FLAGS -> flagTable(fresh, key, cx);
+            case LOAD -> key.getKeyType() == KeyType.Character && key.getCharacter() == 'L'
+                    ? Step.of(fresh.edit().close().build()) : panel(fresh, key, cx, cx.loadLines());
             case EXPORT -> exportMenu(fresh, key, cx);
             case PROMPT -> Prompts.next(fresh, key);
             case CONFIRM -> confirm(fresh, key);
@@ -94,11 +102,12 @@ public final class KeyPress {
             case '/': return Step.of(b.open(Overlay.PROMPT, Ask.CONDITION).typed(s.condition()).build());
             case 't': return Step.of(b.open(Overlay.TUNING, Ask.NOTHING).cursor(tuningCursor(s, cx)).build());
             case 'F': return Step.of(b.open(Overlay.FLAGS, Ask.NOTHING).build());
+            case 'L': return Step.of(b.open(Overlay.LOAD, Ask.NOTHING).build());
             case 'e': return Step.of(b.open(Overlay.EXPORT, Ask.NOTHING).build());
             case 'm': return Step.of(b.metric(cycle(Metric.values(), s.metric())).build());
             case 'w': return Step.of(b.weighting(cycle(Weighting.values(), s.weighting())).build());
             case 's': return Step.of(b.scaling(cycle(Scaling.values(), s.scaling())).build());
-            case 'b': return Step.of(b.band(cycle(BandKind.values(), s.band())).build());
+            case 'b': return Step.of(b.band(cycle(Band.values(), s.band())).build());
             case 'f': return Step.of(b.flagMarks(!s.flagMarks()).build());
             case 'r': return Step.of(b.mode(s.mode() == PlotMode.RESIDUALS ? PlotMode.RESPONSE : PlotMode.RESIDUALS)
                     .build());
@@ -172,12 +181,8 @@ public final class KeyPress {
     }
 
     private static int tuningCursor(ViewState s, KeyContext cx) {
-        TuningResult t = cx.results().tuning();
-        if (t == null) {
-            return 0;
-        }
-        int i = t.indexOf(s.k());
-        return Math.max(0, i);
+        TuningTable t = cx.results().tuning();
+        return t == null ? 0 : TuningCriterion.line(t, s.k());
     }
 
     private static Step picker(ViewState s, KeyStroke key, KeyContext cx) {
@@ -195,16 +200,16 @@ public final class KeyPress {
     }
 
     private static Step tuning(ViewState s, KeyStroke key, KeyContext cx) {
-        TuningResult t = cx.results().tuning();
-        int lines = t == null ? 0 : t.k().length;
-        if (t != null && key.getKeyType() == KeyType.Enter) {
-            return Step.of(s.edit().k(t.k()[Math.min(s.cursor(), lines - 1)]).build());
+        TuningTable t = cx.results().tuning();
+        int lines = t == null ? 0 : t.kmax();
+        if (t != null && lines > 0 && key.getKeyType() == KeyType.Enter) {
+            return Step.of(s.edit().k(Math.min(s.cursor(), lines - 1) + 1).build());
         }
         if (t != null && key.getKeyType() == KeyType.Character && key.getCharacter() == '*') {
-            return Step.of(s.edit().k(t.bestK()).cursor(t.indexOf(t.bestK())).build());
+            return Step.of(s.edit().k(t.bestK()).cursor(TuningCriterion.line(t, t.bestK())).build());
         }
         if (t != null && key.getKeyType() == KeyType.Character && key.getCharacter() == '1') {
-            return Step.of(s.edit().k(t.oneSeK()).cursor(t.indexOf(t.oneSeK())).build());
+            return Step.of(s.edit().k(t.oneSeK()).cursor(TuningCriterion.line(t, t.oneSeK())).build());
         }
         if (key.getKeyType() == KeyType.Character && key.getCharacter() == 't') {
             return Step.of(s.edit().close().build());
@@ -213,10 +218,10 @@ public final class KeyPress {
     }
 
     private static Step flagTable(ViewState s, KeyStroke key, KeyContext cx) {
-        FlagResult f = cx.results().flags();
-        int lines = f == null ? 0 : f.flagged().size();
+        FlaggedRows f = cx.results().flags();
+        int lines = f == null ? 0 : f.rows().size();
         if (f != null && lines > 0 && key.getKeyType() == KeyType.Enter) {
-            FlaggedRow row = f.flagged().get(Math.min(s.cursor(), lines - 1));
+            FlaggedRow row = f.rows().get(Math.min(s.cursor(), lines - 1));
             double x = row.inputs().get(s.inputs().indexOf(s.displayInput()));
             double whole = cx.dataTo() - cx.dataFrom();
             double at = whole > 0 ? (x - cx.dataFrom()) / whole : 0.5;

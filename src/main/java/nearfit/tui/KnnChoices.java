@@ -1,6 +1,5 @@
 package nearfit.tui;
 
-import nearfit.knn.Band;
 import nearfit.knn.FlagScale;
 import nearfit.knn.KnnSettings;
 
@@ -18,8 +17,8 @@ final class KnnChoices {
      * tiny, and the global scale flagged about 10 % of the demo site's rows.
      */
     static KnnSettings settings(ModelSettings m) {
-        return new KnnSettings(m.k(), metric(m.metric()), weighting(m.weighting()), scaling(m.scaling()),
-                band(m.band()), KnnSettings.DEFAULT_FLAG_THRESHOLD, FlagScale.LOCAL_SD, THREADS);
+        return new KnnSettings(m.k(), m.metric(), m.weighting(), m.scaling(),
+                m.band(), KnnSettings.DEFAULT_FLAG_THRESHOLD, FlagScale.LOCAL_SD, THREADS);
     }
 
     /**
@@ -29,41 +28,6 @@ final class KnnChoices {
      */
     static KnnSettings longSettings(ModelSettings m) {
         return settings(m);
-    }
-
-    static nearfit.knn.Metric metric(Metric m) {
-        return switch (m) {
-            case EUCLIDEAN -> nearfit.knn.Metric.EUCLIDEAN;
-            case MANHATTAN -> nearfit.knn.Metric.MANHATTAN;
-            case CHEBYSHEV -> nearfit.knn.Metric.CHEBYSHEV;
-            case MAHALANOBIS -> nearfit.knn.Metric.MAHALANOBIS;
-        };
-    }
-
-    static nearfit.knn.Weighting weighting(Weighting w) {
-        return switch (w) {
-            case EQUAL -> nearfit.knn.Weighting.UNIFORM;
-            case INVERSE -> nearfit.knn.Weighting.INVERSE;
-            case TRICUBE -> nearfit.knn.Weighting.TRICUBE;
-        };
-    }
-
-    static nearfit.knn.Scaling scaling(Scaling s) {
-        return switch (s) {
-            case STANDARD -> nearfit.knn.Scaling.Z;
-            case ROBUST -> nearfit.knn.Scaling.ROBUST;
-            case RANGE -> nearfit.knn.Scaling.RANGE;
-            case NONE -> nearfit.knn.Scaling.NONE;
-        };
-    }
-
-    static Band band(BandKind b) {
-        return switch (b) {
-            case QUANTILE_10_90 -> Band.Q10_Q90;
-            case QUANTILE_05_95 -> Band.Q05_Q95;
-            case TWO_SD -> Band.SD2;
-            case OFF -> Band.NONE;
-        };
     }
 
     /** A knn progress that reports to and is cancelled by an explorer job. */

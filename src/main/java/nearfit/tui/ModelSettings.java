@@ -2,6 +2,11 @@ package nearfit.tui;
 
 import java.util.List;
 
+import nearfit.knn.Band;
+import nearfit.knn.Metric;
+import nearfit.knn.Scaling;
+import nearfit.knn.Weighting;
+
 /**
  * What a fit depends on: the rows, the response, the inputs and the estimator's settings.
  * Two equal settings give the same fit, so the explorer uses this record as the key of its jobs.
@@ -16,7 +21,7 @@ import java.util.List;
  * @param band      the band around the curve
  */
 public record ModelSettings(String condition, String response, List<String> inputs, int k, Metric metric,
-        Weighting weighting, Scaling scaling, BandKind band) {
+        Weighting weighting, Scaling scaling, Band band) {
     /** Copies the inputs so that the record stays immutable. */
     public ModelSettings {
         inputs = List.copyOf(inputs);

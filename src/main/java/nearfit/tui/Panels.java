@@ -15,6 +15,7 @@ final class Panels {
                     pickerLines(s, in), s.cursor(), true);
             case TUNING -> tuning(pen, layout, s, r, sketches);
             case FLAGS -> list(pen, layout, flagTitle(r), FlagTable.lines(s, r, in), s.cursor() + 1, true);
+            case LOAD -> list(pen, layout, LoadPanel.title(in.notes()), LoadPanel.lines(in.notes()), s.cursor(), false);
             case EXPORT -> list(pen, layout, "export (1-4 or Enter, Esc)", exportLines(), s.cursor(), true);
             case PROMPT -> prompt(pen, layout, s);
             case CONFIRM -> prompt(pen, layout, s.typed() + " exists. Replace it? y replaces, any other key keeps it");
@@ -58,8 +59,8 @@ final class Panels {
         }
         String updating = Double.isNaN(r.flagsProgress()) ? ""
                 : " (updating " + Math.round(100 * r.flagsProgress()) + " %)";
-        return "flagged rows" + updating + ": " + Figures.count(r.flags().flaggedCount()) + " with |z| > "
-                + Figures.value(r.flags().threshold()) + ", largest first (Enter jumps, Esc)";
+        return "flagged rows" + updating + ": " + Figures.count(r.flags().result().flaggedCount()) + " with |z| > "
+                + Figures.value(r.flags().result().threshold()) + ", largest first (Enter jumps, Esc)";
     }
 
     /**
@@ -88,7 +89,7 @@ final class Panels {
         int row = layout.plotTop();
         int h = layout.plotHeight();
         int w = layout.width() - 4;
-        TuningResult t = r.tuning();
+        nearfit.knn.TuningTable t = r.tuning();
         String title = t == null ? "tuning: " + ScreenPainter.tuningState(r)
                 : "tuning: RMSE against log k (Enter adopts, * lowest, 1 one-SE, Esc)";
         pen.box(2, row, w, h, title);
@@ -100,13 +101,12 @@ final class Panels {
         pen.cells(sketches.chart(t, s.k(), chartWidth, h - 2, pen.look().ascii()), 3, row + 1);
         List<String> lines = new ArrayList<>();
         lines.add("   k        RMSE        SE");
-        for (int i = 0; i < t.k().length; i++) {
-            String mark = t.k()[i] == t.bestK() ? "*" : t.k()[i] == t.oneSeK() ? "1" : " ";
-            if (t.k()[i] == t.bestK() && t.bestK() == t.oneSeK()) {
-                mark = "*";
-            }
-            lines.add(String.format(java.util.Locale.ROOT, "%s%5d  %10s  %8s%s", mark, t.k()[i],
-                    Figures.value(t.rmse()[i]), Figures.value(t.se()[i]), t.k()[i] == s.k() ? " <" : ""));
+        double[] value = TuningCriterion.values(t);
+        double[] se = TuningCriterion.se(t);
+        for (int k = 1; k <= t.kmax(); k++) {
+            String mark = k == t.bestK() ? "*" : k == t.oneSeK() ? "1" : " ";
+            lines.add(String.format(java.util.Locale.ROOT, "%s%5d  %10s  %8s%s", mark, k,
+                    Figures.value(value[k - 1]), Figures.value(se[k - 1]), k == s.k() ? " <" : ""));
         }
         int visible = h - 2;
         int cursorLine = s.cursor() + 1;

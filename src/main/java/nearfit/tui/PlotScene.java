@@ -15,6 +15,6 @@ package nearfit.tui;
  * @param markedRow    a row to mark (jumped to from the flagged table), -1 for none
  * @param ascii        whether to draw with plain ASCII instead of braille
  */
-public record PlotScene(ModelSettings model, CurveRequest request, CurveResult curve, FlagResult flags,
+public record PlotScene(ModelSettings model, CurveRequest request, CurveResult curve, FlaggedRows flags,
         PlotMode mode, boolean flagMarks, double crosshairX, java.util.Map<String, Double> heldQuantile, boolean nearHeldOnly, int markedRow, boolean ascii) {
 }

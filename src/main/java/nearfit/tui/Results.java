@@ -1,5 +1,7 @@
 package nearfit.tui;
 
+import nearfit.knn.TuningTable;
+
 /**
  * The latest results of the background jobs, each for the settings it was asked for; a frame is drawn from
  * a {@link ViewState} and this value. Progress is NaN when that job is not running.
@@ -13,8 +15,8 @@ package nearfit.tui;
  * @param rowsUsed       rows satisfying the row condition
  * @param failure        the last job failure as one line, empty for none
  */
-public record Results(CurveResult curve, double curveProgress, TuningResult tuning, double tuningProgress,
-        FlagResult flags, double flagsProgress, int rowsUsed, String failure) {
+public record Results(CurveResult curve, double curveProgress, TuningTable tuning, double tuningProgress,
+        FlaggedRows flags, double flagsProgress, int rowsUsed, String failure) {
     /** No results yet. */
     public static Results none(int rowsUsed) {
         return new Results(null, Double.NaN, null, Double.NaN, null, Double.NaN, rowsUsed, "");
@@ -24,11 +26,11 @@ public record Results(CurveResult curve, double curveProgress, TuningResult tuni
         return new Results(c, progress, tuning, tuningProgress, flags, flagsProgress, rowsUsed, failure);
     }
 
-    public Results withTuning(TuningResult t, double progress) {
+    public Results withTuning(TuningTable t, double progress) {
         return new Results(curve, curveProgress, t, progress, flags, flagsProgress, rowsUsed, failure);
     }
 
-    public Results withFlags(FlagResult f, double progress) {
+    public Results withFlags(FlaggedRows f, double progress) {
         return new Results(curve, curveProgress, tuning, tuningProgress, f, progress, rowsUsed, failure);
     }
 

@@ -86,7 +86,7 @@ final class ScenePoints {
                 b.band(c.x(), c.bandLow(), c.bandHigh(), Scene.BandStyle.LINES);
             }
         }
-        if (s.flagMarks() && s.flags() != null && !s.flags().flagged().isEmpty()) {
+        if (s.flagMarks() && s.flags() != null && !s.flags().rows().isEmpty()) {
             marks(b, s, residuals);
         }
         if (s.mode() != PlotMode.RESIDUALS_OVER_TIME && !Double.isNaN(s.crosshairX())) {
@@ -96,7 +96,7 @@ final class ScenePoints {
     }
 
     private void marks(Scene.Builder b, PlotScene s, boolean residuals) {
-        List<FlaggedRow> f = s.flags().flagged();
+        List<FlaggedRow> f = s.flags().rows();
         int display = s.model().inputs().indexOf(s.request().displayInput());
         double[] fx = new double[f.size()];
         double[] fy = new double[f.size()];

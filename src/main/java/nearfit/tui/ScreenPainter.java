@@ -10,6 +10,8 @@ import java.util.TreeMap;
 final class ScreenPainter {
     private static final String KEYS = "? help  q quit  +/- k  t tuning  F flagged  f marks  x/y/i columns  "
             + "g group  / condition  e export  arrows crosshair";
+    /** The keys line with the load report, for windows wide enough to show it whole. */
+    private static final String KEYS_WIDE = KEYS.replace("e export", "e export  L load");
 
     private ScreenPainter() {
     }
@@ -40,7 +42,8 @@ final class ScreenPainter {
         }
         pen.text(0, layout.statusRow(), Figures.fit(status(s, r, in), layout.width(), pen.look().ascii()),
                 s.message().isEmpty() && r.failure().isEmpty() ? Ink.TEXT : Ink.WARNING);
-        pen.text(0, layout.keyRow(), Figures.fit(KEYS, layout.width(), pen.look().ascii()), Ink.LABEL);
+        String keys = KEYS_WIDE.length() <= layout.width() ? KEYS_WIDE : KEYS;
+        pen.text(0, layout.keyRow(), Figures.fit(keys, layout.width(), pen.look().ascii()), Ink.LABEL);
         Panels.paint(pen, layout, s, r, in, sketches);
     }
 
@@ -68,6 +71,11 @@ final class ScreenPainter {
                 .append("  rows ").append(Figures.count(r.rowsUsed())).append(" of ").append(Figures.count(in.totalRows()));
         if (!s.condition().isEmpty()) {
             one.append("  where ").append(s.condition());
+        }
+        int notes = in.notes().count();
+        if (notes > 0) {
+            // Short, and before the job states, so that it survives a narrow window.
+            one.append("  (").append(notes).append(notes == 1 ? " load note, L)" : " load notes, L)");
         }
         one.append("  |  ").append(tuningState(r));
         if (!Double.isNaN(r.flagsProgress())) {
@@ -116,8 +124,8 @@ final class ScreenPainter {
         if (s.mode() != PlotMode.RESPONSE) {
             sb.append(s.mode() == PlotMode.RESIDUALS ? "  residuals" : "  residuals over time");
         }
-        sb.append("  ").append(s.metric().label()).append(", weights ").append(s.weighting().label())
-                .append(", scaling ").append(s.scaling().label()).append(", band ").append(s.band().label());
+        sb.append("  ").append(ChoiceNames.of(s.metric())).append(", weights ").append(ChoiceNames.of(s.weighting()))
+                .append(", scaling ").append(ChoiceNames.of(s.scaling())).append(", band ").append(ChoiceNames.of(s.band()));
         return sb.toString();
     }
 
@@ -127,8 +135,7 @@ final class ScreenPainter {
             return r.flags().looRmse();
         }
         if (r.tuning() != null) {
-            int i = r.tuning().indexOf(s.k());
-            return i < 0 ? Double.NaN : r.tuning().rmse()[i];
+            return TuningCriterion.at(r.tuning(), s.k());
         }
         return Double.NaN;
     }
@@ -161,11 +168,11 @@ final class ScreenPainter {
             sb.append("fitting ...");
         }
         sb.append("  |  LOO RMSE ").append(Figures.value(looRmse(s, r)));
-        FlagResult f = r.flags();
-        if (f != null && f.rows() == 0) {
+        FlaggedRows f = r.flags();
+        if (f != null && f.examined() == 0) {
             sb.append("  |  no flags for a category response");
         } else if (f != null) {
-            sb.append("  |  flagged ").append(Figures.count(f.flaggedCount())).append(" (")
+            sb.append("  |  flagged ").append(Figures.count(f.result().flaggedCount())).append(" (")
                     .append(Figures.percent(f.share())).append(')');
             if (!Double.isNaN(r.flagsProgress())) {
                 sb.append(" updating ").append(Math.round(100 * r.flagsProgress())).append(" %");

@@ -20,7 +20,7 @@ final class Sketches {
         // frame drawn right after a k change, still with the old curve, reuses the composed plot.
         ModelSettings m = scene.model();
         ModelSettings shape = new ModelSettings(m.condition(), m.response(), m.inputs(), 1, m.metric(),
-                Weighting.EQUAL, m.scaling(), BandKind.OFF);
+                nearfit.knn.Weighting.UNIFORM, m.scaling(), nearfit.knn.Band.NONE);
         Object key = java.util.Arrays.asList(shape, scene.request(), scene.curve(), scene.flags(), scene.mode(),
                 scene.flagMarks(), scene.crosshairX(), scene.heldQuantile(), scene.nearHeldOnly(), scene.markedRow(),
                 scene.ascii(), width, height);
@@ -31,7 +31,7 @@ final class Sketches {
         return plot;
     }
 
-    Cells chart(TuningResult tuning, int k, int width, int height, boolean ascii) {
+    Cells chart(nearfit.knn.TuningTable tuning, int k, int width, int height, boolean ascii) {
         Object key = java.util.Arrays.asList(tuning, k, width, height, ascii);
         if (!key.equals(chartKey)) {
             chart = workbench.tuningChart(tuning, k, width, height, ascii);

@@ -115,16 +115,27 @@ public final class TerminalSession {
                 return;
             }
             stopped = true;
+            // No input drain: stopScreen() first polls the input, and under SIGTERM that can fail (the
+            // terminal library's own shutdown hook may restore the tty at the same moment), which skipped
+            // leaving the alternate screen and left the last frame on the user's shell.
             try {
-                screen.stopScreen();
+                screen.stopScreen(false);
             } catch (IOException | RuntimeException e) {
-                // Nothing more can be done for a terminal that is gone.
+                leavePrivateMode();
             }
         }
         try {
             screen.getTerminal().close();
         } catch (IOException | RuntimeException e) {
             // As above.
+        }
+    }
+
+    private void leavePrivateMode() {
+        try {
+            screen.getTerminal().exitPrivateMode();
+        } catch (IOException | RuntimeException e) {
+            // Nothing more can be done for a terminal that is gone.
         }
     }
 

@@ -3,6 +3,11 @@ package nearfit.tui;
 import java.util.List;
 import java.util.Map;
 
+import nearfit.knn.Band;
+import nearfit.knn.Metric;
+import nearfit.knn.Scaling;
+import nearfit.knn.Weighting;
+
 /**
  * Everything the explorer shows, as one immutable value: a key press makes a new state
  * ({@link KeyPress#next}), and a frame is drawn from a state and the latest results alone.
@@ -38,7 +43,7 @@ import java.util.Map;
  * @param quit          whether the explorer should end
  */
 public record ViewState(String condition, String response, List<String> inputs, String displayInput, int k,
-        Metric metric, Weighting weighting, Scaling scaling, BandKind band, boolean flagMarks, PlotMode mode,
+        Metric metric, Weighting weighting, Scaling scaling, Band band, boolean flagMarks, PlotMode mode,
         String groupColumn, int group, boolean compare, int responseClass, double zoomFrom, double zoomTo,
         double crosshair, Map<String, Double> heldQuantile, String heldInput, boolean nearHeldOnly, int markedRow,
         Overlay overlay, Ask ask, int cursor, String typed, ExportKind export, String message, boolean quit) {
@@ -55,8 +60,8 @@ public record ViewState(String condition, String response, List<String> inputs, 
         for (int i = 1; i < inputs.size(); i++) {
             held.put(inputs.get(i), 0.5);
         }
-        return new ViewState("", response, inputs, inputs.get(0), k, Metric.EUCLIDEAN, Weighting.EQUAL,
-                Scaling.STANDARD, BandKind.QUANTILE_10_90, true, PlotMode.RESPONSE, null, -1, false, 0,
+        return new ViewState("", response, inputs, inputs.get(0), k, Metric.EUCLIDEAN, Weighting.UNIFORM,
+                Scaling.Z, Band.Q10_Q90, true, PlotMode.RESPONSE, null, -1, false, 0,
                 Double.NaN, Double.NaN, 0.5, held, inputs.size() > 1 ? inputs.get(1) : null, false, -1,
                 Overlay.NONE, Ask.NOTHING, 0, "", null, "", false);
     }
@@ -86,7 +91,7 @@ public record ViewState(String condition, String response, List<String> inputs, 
         private Metric metric;
         private Weighting weighting;
         private Scaling scaling;
-        private BandKind band;
+        private Band band;
         private boolean flagMarks;
         private PlotMode mode;
         private String groupColumn;
@@ -148,7 +153,7 @@ public record ViewState(String condition, String response, List<String> inputs, 
         public Builder metric(Metric v) { metric = v; return this; }
         public Builder weighting(Weighting v) { weighting = v; return this; }
         public Builder scaling(Scaling v) { scaling = v; return this; }
-        public Builder band(BandKind v) { band = v; return this; }
+        public Builder band(Band v) { band = v; return this; }
         public Builder flagMarks(boolean v) { flagMarks = v; return this; }
         public Builder mode(PlotMode v) { mode = v; return this; }
         public Builder groupColumn(String v) { groupColumn = v; return this; }

@@ -4,6 +4,8 @@ import java.io.IOException;
 import java.io.OutputStream;
 import java.util.List;
 
+import nearfit.knn.TuningTable;
+
 /**
  * The core packages as the explorer sees them: one loaded table and what can be fitted, tuned, flagged and
  * drawn from it. The explorer never computes statistics itself; everything numeric comes from here.
@@ -18,6 +20,9 @@ public interface Workbench {
 
     /** Rows in the file. */
     long totalRows();
+
+    /** What the loader found: rows read, ragged lines, blank and bad cells per column. */
+    LoadNotes loadNotes();
 
     /** The columns in file order. */
     List<ColumnInfo> columns();
@@ -42,10 +47,10 @@ public interface Workbench {
     CurveResult curve(ModelSettings model, CurveRequest request, JobControl control);
 
     /** Leave-one-out tuning over the k ladder; does not depend on {@code model.k()}. */
-    TuningResult tune(ModelSettings model, JobControl control);
+    TuningTable tune(ModelSettings model, JobControl control);
 
     /** Leave-one-out residuals at {@code model.k()} and the rows they flag, labelled by the group column. */
-    FlagResult flags(ModelSettings model, String groupColumn, JobControl control);
+    FlaggedRows flags(ModelSettings model, String groupColumn, JobControl control);
 
     /**
      * The plot (axes, points, curve, band, flags and crosshair) in {@code width} by {@code height} cells, and
@@ -54,7 +59,7 @@ public interface Workbench {
     PlotCells plot(PlotScene scene, int width, int height);
 
     /** RMSE against log k with the lowest and the one-SE k marked. */
-    Cells tuningChart(TuningResult tuning, int currentK, int width, int height, boolean ascii);
+    Cells tuningChart(TuningTable tuning, int currentK, int width, int height, boolean ascii);
 
     /** The plot as a PNG image of {@code width} by {@code height} pixels. */
     void writePng(PlotScene scene, int width, int height, OutputStream out) throws IOException;

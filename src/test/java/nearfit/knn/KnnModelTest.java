@@ -254,6 +254,41 @@ class KnnModelTest {
     }
 
     @Test
+    void batchVotesEqualOnePointVotesOnAnyThreadCountAndMarkMissingPoints() {
+        Random r = new Random(21);
+        int n = 4000;
+        double[][] x = new double[2][n];
+        int[] state = new int[n];
+        for (int i = 0; i < n; i++) {
+            x[0][i] = r.nextInt(30);
+            x[1][i] = r.nextInt(30);
+            state[i] = (x[0][i] + x[1][i] > 30 ? 2 : 0) + (r.nextInt(5) == 0 ? 1 : 0);
+        }
+        ReferenceData d = ReferenceData.category(new String[] {"a", "b"}, x, "state", state, 4, null);
+        KnnModel one = KnnModel.fit(d, KnnSettings.defaults().withK(7).withThreads(1));
+        KnnModel two = one.withSettings(one.settings().withThreads(2));
+        double[][] q = new double[2][500];
+        for (int i = 0; i < 500; i++) {
+            q[0][i] = r.nextDouble() * 30;
+            q[1][i] = r.nextInt(30);
+        }
+        q[0][11] = Double.NaN;
+        ClassVotes a = one.voteAll(q, Progress.NONE);
+        ClassVotes b = two.voteAll(q, Progress.NONE);
+        assertArrayEquals(a.winner(), b.winner());
+        assertArrayEquals(a.share(), b.share());
+        assertEquals(-1, a.winner()[11]);
+        for (int i = 0; i < 500; i++) {
+            if (i != 11) {
+                ClassVote v = one.vote(q[0][i], q[1][i]);
+                assertEquals(v.winner(), a.winner()[i], "winner at " + i);
+                assertEquals(v.shares()[v.winner()], a.share()[i], "share at " + i);
+                assertEquals(v.neighbourCount(), a.neighbourCount()[i], "count at " + i);
+            }
+        }
+    }
+
+    @Test
     void batchNeighboursEqualOnePointSearchesAndMarkMissingPoints() {
         KnnModel m = KnnModel.fit(TuningTest.coarse(12, 3000, 3), KnnSettings.defaults().withK(4));
         Random r = new Random(12);

@@ -91,11 +91,11 @@ class CoreExplorerTest {
     void flaggedRowsCarryTheirSourceLinesAndThePlantedOutliersComeFirst(@TempDir Path dir) throws Exception {
         Workbench wb = load(dir);
         try (VirtualScreen v = open(wb)) {
-            FlagResult f = v.explorer.results().flags();
-            assertTrue(f.flaggedCount() >= 2, "flags: " + f.flaggedCount());
+            FlaggedRows f = v.explorer.results().flags();
+            assertTrue(f.result().flaggedCount() >= 2, "flags: " + f.result().flaggedCount());
             // Rows 100 and 900 of smallLog() have power 5 kW where the curve is far higher; the header is line 1,
             // so data row r sits on line r + 2.
-            List<Long> top = List.of(f.flagged().get(0).line(), f.flagged().get(1).line());
+            List<Long> top = List.of(f.rows().get(0).line(), f.rows().get(1).line());
             assertTrue(top.contains(102L) && top.contains(902L), "largest |z| lines: " + top);
             v.type("F");
             assertTrue(v.text().contains("flagged rows:"), v.text());

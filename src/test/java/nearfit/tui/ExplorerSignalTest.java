@@ -59,9 +59,17 @@ class ExplorerSignalTest {
         tmux("send-keys", "-t", session, "clear; sh " + script, "Enter");
     }
 
+    /** Sends SIGTERM to the child JVM, found by its mark and signalled by its process id alone. */
     private void terminate() throws Exception {
-        Process p = new ProcessBuilder("pkill", "-TERM", "-f", mark).start();
+        Process p = new ProcessBuilder("pgrep", "-f", mark).start();
+        String pids = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8).strip();
         assertEquals(0, p.waitFor(), "a java process marked " + mark);
+        List<String> found = pids.lines().toList();
+        assertEquals(1, found.size(), "one java process marked " + mark + ": " + found);
+        ProcessHandle child = ProcessHandle.of(Long.parseLong(found.get(0)))
+                .orElseThrow(() -> new AssertionError("process " + found.get(0) + " is gone"));
+        // On Unix ProcessHandle.destroy sends SIGTERM (destroyForcibly would send SIGKILL).
+        assertTrue(child.destroy(), "SIGTERM sent to " + child.pid());
     }
 
     private void expectExit(int status) throws Exception {
@@ -123,6 +131,28 @@ class ExplorerSignalTest {
     void ctrlCDuringTuningExits130AndRestoresTheTerminal() throws Exception {
         writeTuningLog();
         interrupt("", "site.csv", s -> s.matches("(?s).*tuning \\d+ %.*"), true);
+    }
+
+    /**
+     * SIGTERM while tuning runs behind the open tuning panel: the shutdown hook restores the terminal while the
+     * explorer's thread may be drawing a frame, which once left the last frame on the screen (fixed: no frame
+     * is sent once the screen is stopped).
+     */
+    @Test
+    void sigtermDuringTuningWithTheTuningPanelOpenExits143AndRestoresTheTerminal() throws Exception {
+        writeTuningLog();
+        try {
+            open();
+            view("", "site.csv");
+            waitFor(s -> s.contains("k=20") && hasBraille(s), "first frame");
+            tmux("send-keys", "-t", session, "t");
+            // The panel's title shows the job's progress until the table is in; flags run first on the same lane.
+            waitFor(s -> s.matches("(?s).*tuning: tuning \\d+ %.*"), "the tuning panel with tuning running");
+            terminate();
+            expectExit(143);
+        } finally {
+            close();
+        }
     }
 
     /** Opens the small log, opens an overlay with {@code key}, waits for {@code shown}, then Ctrl-C. */

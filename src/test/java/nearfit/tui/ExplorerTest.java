@@ -68,7 +68,7 @@ class ExplorerTest {
             String panel = v.text();
             assertTrue(panel.contains("RMSE against log k") && panel.contains("chart best 15"), panel);
             v.key(KeyType.ArrowDown).key(KeyType.Enter);
-            assertTrue(v.row(1).contains("k=30"), "the line below k=20 is k=30: " + v.row(1));
+            assertTrue(v.row(1).contains("k=21"), "the line below k=20 is k=21: " + v.row(1));
             v.type("*");
             assertTrue(v.row(1).contains("k=15"), v.row(1));
             v.type("1");

@@ -14,7 +14,7 @@ import com.googlecode.lanterna.input.KeyType;
 
 class KeyPressTest {
     private final ScriptedWorkbench wb = new ScriptedWorkbench();
-    private final KeyContext cx = new KeyContext(wb.columns(), Results.none(1000), 0, 25, 3, 0, true);
+    private final KeyContext cx = new KeyContext(wb.columns(), Results.none(1000), 0, 25, 3, 0, true, 5);
     private final ViewState two = ViewState.initial("power_kw", List.of("wind_ms", "air_temp_c"), 20);
 
     private static KeyStroke ch(char c) {

@@ -8,6 +8,10 @@ import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicInteger;
 
+import nearfit.knn.FlagResult;
+import nearfit.knn.FlagScale;
+import nearfit.knn.TuningTable;
+import nearfit.table.LoadReport;
 import nearfit.table.NearfitException;
 
 /**
@@ -30,6 +34,12 @@ class ScriptedWorkbench implements Workbench {
     @Override
     public long totalRows() {
         return 1000;
+    }
+
+    @Override
+    public LoadNotes loadNotes() {
+        return new LoadNotes(new LoadReport("site-test.csv", 1000, 40_000, ',', true, false, 0, 0, List.of(), 0,
+                List.of(), 0), List.of());
     }
 
     @Override
@@ -94,19 +104,43 @@ class ScriptedWorkbench implements Workbench {
     }
 
     @Override
-    public TuningResult tune(ModelSettings model, JobControl control) {
+    public TuningTable tune(ModelSettings model, JobControl control) {
         tuneCalls.incrementAndGet();
         control.progress(0.5);
-        return new TuningResult(new int[] {1, 2, 3, 5, 7, 10, 15, 20, 30, 50}, new double[] {9, 8, 7, 6, 5, 4.5, 4,
-            4.2, 4.4, 5}, new double[] {0.5, 0.5, 0.5, 0.5, 0.5, 0.5, 0.5, 0.5, 0.5, 0.5}, 15, 30);
+        // k = 1 to 50: RMSE falls from 9 to 4 at k = 15, rises to 4.4 at k = 30, then jumps above 4.5, so with
+        // SE 0.5 the lowest k is 15 and the one-SE k is 30.
+        int kmax = 50;
+        double[] rmse = new double[kmax];
+        double[] se = new double[kmax];
+        double[] none = new double[kmax];
+        java.util.Arrays.fill(none, Double.NaN);
+        for (int k = 1; k <= kmax; k++) {
+            rmse[k - 1] = k <= 15 ? 4 + (15 - k) * (5.0 / 14) : k <= 30 ? 4 + (k - 15) * (0.4 / 15) : 4.6 + (k - 30) * 0.02;
+            se[k - 1] = 0.5;
+        }
+        return new TuningTable("leave-one-out", 1000, 1000, rmse, se, none, none, none, none, none, none, 15, 30);
     }
 
     @Override
-    public FlagResult flags(ModelSettings model, String groupColumn, JobControl control) {
+    public FlaggedRows flags(ModelSettings model, String groupColumn, JobControl control) {
         List<FlaggedRow> rows = new ArrayList<>();
         rows.add(new FlaggedRow(41, 43, "2026-03-02T10:10:00Z", "T02", List.of(12.5), 300, 1900, -1600, -7.5));
         rows.add(new FlaggedRow(7, 9, "2026-03-01T01:10:00Z", "T01", List.of(5.0), 900, 400, 500, 4.1));
-        return new FlagResult(1000, rows.size(), 85.25, 3.5, rows);
+        int n = 1000;
+        int[] ids = new int[n];
+        double[] z = new double[n];
+        boolean[] flagged = new boolean[n];
+        for (int i = 0; i < n; i++) {
+            ids[i] = i;
+        }
+        z[41] = -7.5;
+        z[7] = 4.1;
+        flagged[41] = true;
+        flagged[7] = true;
+        // The residual columns are not read by the screen; the RMSE shown is the one given here.
+        double[] zeros = new double[n];
+        FlagResult f = new FlagResult(ids, zeros, zeros, z, flagged, rows.size(), 0, 1, FlagScale.LOCAL_SD, 3.5);
+        return new FlaggedRows(f, 85.25, rows);
     }
 
     @Override
@@ -118,7 +152,7 @@ class ScriptedWorkbench implements Workbench {
     }
 
     @Override
-    public Cells tuningChart(TuningResult tuning, int currentK, int width, int height, boolean ascii) {
+    public Cells tuningChart(TuningTable tuning, int currentK, int width, int height, boolean ascii) {
         return new TextCells(width, height, "chart best " + tuning.bestK(), '.');
     }
 
