@@ -79,38 +79,45 @@ final class CheckCommand implements Callable<Integer> {
                     + " is a category (use predict for class votes)");
         }
         RestoredModel restored = RestoredModel.of(stored, model.over(stored.settings()), model.threads());
-        ScoredRows scored = ScoredRows.score(restored, file, model, spec.commandLine().getErr());
-        if (scored.read().response() == null) {
+        ScoredRows scored = ScoredRows.open(restored, file, model, spec.commandLine().getErr());
+        if (!scored.hasResponse()) {
             throw NearfitException.inFile(file, "has no column \"" + columns.response()
                     + "\", the model's response, so nothing can be checked");
         }
         double cut = z == null ? stored.settings().flagThreshold() : z;
-        CheckReport report = tally(scored, cut, limitFraction);
-        if (flaggedOutput != null) {
-            double[] zs = scored.z();
-            PredictionCsv.write(scored, columns.response(), List.of(), flaggedOutput, model.force, inputs, null,
-                    i -> Math.abs(zs[i]) > cut);
+        CategoryColumn g = scored.group();
+        CheckReport.Tally tally = new CheckReport.Tally(g == null ? List.of() : g.labels(), cut, WORST_ROWS);
+        if (flaggedOutput == null) {
+            scored.forEachBlock(b -> count(tally, b));
+        } else {
+            // Flagged rows are written as they are found, so none is kept in memory.
+            PredictionCsv.write(flaggedOutput, model.force, inputs, null, w -> {
+                PredictionCsv csv = new PredictionCsv(w, scored, columns.response(), List.of());
+                scored.forEachBlock(b -> {
+                    count(tally, b);
+                    csv.rows(b, (block, i) -> Math.abs(block.z()[i]) > cut);
+                });
+                csv.flush();
+            });
         }
+        CheckReport report = tally.report(limitFraction);
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
             out.println(report.toJson());
             out.flush();
         } else {
-            CategoryColumn g = scored.read().group();
             report.writeText(out, columns.response(), g == null ? null : g.name());
         }
         return report.passed() ? 0 : Main.EXIT_CHECK_FAILED;
     }
 
-    private static CheckReport tally(ScoredRows s, double cut, double limit) {
-        ScoredRows.ReadRows read = s.read();
-        int n = read.rows().size();
-        CategoryColumn g = read.group();
-        int[] groups = g == null ? null : new int[n];
-        for (int i = 0; groups != null && i < n; i++) {
-            groups[i] = g.code(read.rows().row(i));
+    private static void count(CheckReport.Tally tally, ScoredRows.Block b) {
+        double[] zs = b.z();
+        double[] y = b.response();
+        double[] fit = b.estimates().fit();
+        int[] groups = b.groups();
+        for (int i = 0; i < b.size(); i++) {
+            tally.add(zs[i], y[i], fit[i], b.lines()[i], groups == null ? -1 : groups[i]);
         }
-        return CheckReport.tally(s.z(), read.response(), s.estimates().fit(), read.lines(), groups,
-                g == null ? List.of() : g.labels(), cut, limit, WORST_ROWS);
     }
 }

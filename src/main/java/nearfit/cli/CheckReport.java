@@ -51,42 +51,71 @@ record CheckReport(long rows, long scored, long flagged, double limit, double th
      */
     static CheckReport tally(double[] z, double[] response, double[] fit, long[] lines, int[] groupCodes,
                              List<String> groupLabels, double threshold, double limit, int worstCount) {
-        int groups = groupCodes == null ? 0 : groupLabels.size();
-        long[] gRows = new long[groups];
-        long[] gScored = new long[groups];
-        long[] gFlagged = new long[groups];
-        long scored = 0;
-        long flagged = 0;
-        WorstRows worst = new WorstRows(worstCount);
+        Tally t = new Tally(groupCodes == null ? List.of() : groupLabels, threshold, worstCount);
         for (int i = 0; i < z.length; i++) {
-            int g = groupCodes == null ? -1 : groupCodes[i];
-            if (g >= 0) {
-                gRows[g]++;
+            t.add(z[i], response[i], fit[i], lines[i], groupCodes == null ? -1 : groupCodes[i]);
+        }
+        return t.report(limit);
+    }
+
+    /**
+     * Counts rows one at a time, in row order, keeping only the counts and the worst rows, so rows can
+     * be scored and tallied block by block. Ties among the worst rows keep the earlier row.
+     */
+    static final class Tally {
+        private final List<String> groupLabels;
+        private final double threshold;
+        private final long[] gRows;
+        private final long[] gScored;
+        private final long[] gFlagged;
+        private final WorstRows<WorstRow> worst;
+        private long rows;
+        private long scored;
+        private long flagged;
+
+        /** A tally over the given group labels (empty without a group column). */
+        Tally(List<String> groupLabels, double threshold, int worstCount) {
+            this.groupLabels = groupLabels;
+            this.threshold = threshold;
+            int groups = groupLabels.size();
+            gRows = new long[groups];
+            gScored = new long[groups];
+            gFlagged = new long[groups];
+            worst = new WorstRows<>(worstCount);
+        }
+
+        /** Counts the next row: z NaN when it was not scored, group -1 when missing. */
+        void add(double z, double response, double fit, long line, int group) {
+            rows++;
+            if (group >= 0) {
+                gRows[group]++;
             }
-            if (Double.isNaN(z[i])) {
-                continue;
+            if (Double.isNaN(z)) {
+                return;
             }
             scored++;
-            boolean flag = Math.abs(z[i]) > threshold;
-            if (g >= 0) {
-                gScored[g]++;
-                gFlagged[g] += flag ? 1 : 0;
+            boolean flag = Math.abs(z) > threshold;
+            if (group >= 0) {
+                gScored[group]++;
+                gFlagged[group] += flag ? 1 : 0;
             }
             flagged += flag ? 1 : 0;
-            worst.offer(i, Math.abs(z[i]));
-        }
-        List<GroupCount> byGroup = new ArrayList<>();
-        for (int g = 0; g < groups; g++) {
-            if (gRows[g] > 0) {
-                byGroup.add(new GroupCount(groupLabels.get(g), gRows[g], gScored[g], gFlagged[g]));
+            double a = Math.abs(z);
+            if (worst.admits(a)) {
+                worst.offer(new WorstRow(line, group < 0 ? null : groupLabels.get(group), response, fit, z), a);
             }
         }
-        List<WorstRow> worstRows = new ArrayList<>();
-        for (int i : worst.rowsLargestFirst()) {
-            String label = groupCodes == null || groupCodes[i] < 0 ? null : groupLabels.get(groupCodes[i]);
-            worstRows.add(new WorstRow(lines[i], label, response[i], fit[i], z[i]));
+
+        /** The report of the rows counted so far. */
+        CheckReport report(double limit) {
+            List<GroupCount> byGroup = new ArrayList<>();
+            for (int g = 0; g < gRows.length; g++) {
+                if (gRows[g] > 0) {
+                    byGroup.add(new GroupCount(groupLabels.get(g), gRows[g], gScored[g], gFlagged[g]));
+                }
+            }
+            return new CheckReport(rows, scored, flagged, limit, threshold, byGroup, worst.largestFirst());
         }
-        return new CheckReport(z.length, scored, flagged, limit, threshold, byGroup, worstRows);
     }
 
     /** The JSON document of {@code check --format json}. */

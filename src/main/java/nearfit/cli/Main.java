@@ -62,7 +62,12 @@ public final class Main implements Runnable {
      * @return the exit status
      */
     public static int run(String[] args, PrintWriter out, PrintWriter err) {
-        CommandLine cli = commandLine();
+        return run(args, out, err, CommandLine.defaultFactory());
+    }
+
+    /** As {@link #run(String[], PrintWriter, PrintWriter)}, with commands and mixins made by {@code factory}. */
+    static int run(String[] args, PrintWriter out, PrintWriter err, CommandLine.IFactory factory) {
+        CommandLine cli = commandLine(factory);
         cli.setOut(out);
         cli.setErr(err);
         boolean debug = java.util.Arrays.asList(args).contains("--debug");
@@ -116,7 +121,11 @@ public final class Main implements Runnable {
 
     /** A fresh command line with every sub-command; used by completion too. */
     static CommandLine commandLine() {
-        CommandLine cli = new CommandLine(new Main());
+        return commandLine(CommandLine.defaultFactory());
+    }
+
+    private static CommandLine commandLine(CommandLine.IFactory factory) {
+        CommandLine cli = new CommandLine(new Main(), factory);
         cli.setCaseInsensitiveEnumValuesAllowed(true);
         return cli;
     }

@@ -42,6 +42,9 @@ final class ModelOptions {
     @Option(names = "--quiet", description = "No progress messages on standard error.")
     boolean quiet;
 
+    /** Rows scored at a time by predict and check; not an option (tests set it to show blocks change nothing). */
+    int blockRows = ScoredRows.BLOCK_ROWS;
+
     @Option(names = "--force", description = "Replace output files that exist already.")
     boolean force;
 

@@ -58,9 +58,9 @@ final class PredictCommand implements Callable<Integer> {
         if (loo) {
             LeaveOneOutCsv.write(restored, file, output, model.force, inputs, out);
         } else {
-            ScoredRows scored = ScoredRows.score(restored, file, model, spec.commandLine().getErr());
+            ScoredRows scored = ScoredRows.open(restored, file, model, spec.commandLine().getErr());
             PredictionCsv.write(scored, restored.stored().columns().response(),
-                    restored.stored().columns().responseLabels(), output, model.force, inputs, out, i -> true);
+                    restored.stored().columns().responseLabels(), output, model.force, inputs, out, (b, i) -> true);
         }
         out.flush();
         return 0;

@@ -24,21 +24,45 @@ import org.apache.commons.csv.CSVPrinter;
  * are written in ISO 8601 (UTC).
  */
 final class PredictionCsv {
-    /** Which of the scored rows to write. */
+    /** Which rows of a block to write. */
     @FunctionalInterface
     interface RowFilter {
-        boolean keep(int i);
+        boolean keep(ScoredRows.Block block, int i);
     }
 
-    private PredictionCsv() {
+    /** Writes the CSV to the writer it is given. */
+    @FunctionalInterface
+    interface Body {
+        void writeTo(Writer w) throws IOException;
     }
 
-    /** Writes to {@code target} through {@link SafeOutput}, or to {@code stdout} when target is null. */
+    private final CSVPrinter csv;
+    private final ScoredRows source;
+    private final List<String> classLabels;
+
+    /** Starts a CSV of {@code source}'s rows on {@code w} and writes its header. */
+    PredictionCsv(Writer w, ScoredRows source, String responseName, List<String> classLabels) throws IOException {
+        this.csv = new CSVPrinter(w, CSVFormat.RFC4180.builder().setRecordSeparator('\n').get());
+        this.source = source;
+        this.classLabels = classLabels;
+        header(responseName);
+    }
+
+    /** Scores every row of {@code s} block by block and writes those {@code filter} keeps. */
     static void write(ScoredRows s, String responseName, List<String> classLabels, Path target, boolean force,
                       Collection<Path> inputs, Writer stdout, RowFilter filter) {
+        write(target, force, inputs, stdout, w -> {
+            PredictionCsv csv = new PredictionCsv(w, s, responseName, classLabels);
+            s.forEachBlock(b -> csv.rows(b, filter));
+            csv.flush();
+        });
+    }
+
+    /** Runs {@code body} on {@code target} through {@link SafeOutput}, or on {@code stdout} when target is null. */
+    static void write(Path target, boolean force, Collection<Path> inputs, Writer stdout, Body body) {
         if (target == null) {
             try {
-                print(s, responseName, classLabels, stdout, filter);
+                body.writeTo(stdout);
             } catch (IOException e) {
                 throw new NearfitException("cannot write to standard output: " + e.getMessage());
             }
@@ -46,37 +70,37 @@ final class PredictionCsv {
         }
         SafeOutput.write(target, force, inputs, (OutputStream out) -> {
             Writer w = new BufferedWriter(new OutputStreamWriter(out, StandardCharsets.UTF_8), 1 << 16);
-            print(s, responseName, classLabels, w, filter);
+            body.writeTo(w);
             w.flush();
         });
     }
 
-    private static void print(ScoredRows s, String responseName, List<String> classLabels, Writer w,
-                              RowFilter filter) throws IOException {
-        CSVPrinter csv = new CSVPrinter(w, CSVFormat.RFC4180.builder().setRecordSeparator('\n').get());
-        header(csv, s, responseName);
-        for (int i = 0; i < s.read().rows().size(); i++) {
-            if (filter.keep(i)) {
-                record(csv, s, classLabels, i);
+    /** Writes the rows of {@code block} that {@code filter} keeps. */
+    void rows(ScoredRows.Block block, RowFilter filter) throws IOException {
+        for (int i = 0; i < block.size(); i++) {
+            if (filter.keep(block, i)) {
+                record(block, i);
             }
         }
+    }
+
+    void flush() throws IOException {
         csv.flush();
     }
 
-    private static void header(CSVPrinter csv, ScoredRows s, String responseName) throws IOException {
-        ScoredRows.ReadRows read = s.read();
+    private void header(String responseName) throws IOException {
         csv.print("line");
-        if (read.group() != null) {
-            csv.print(CsvCells.text(read.group().name()));
+        if (source.group() != null) {
+            csv.print(CsvCells.text(source.group().name()));
         }
-        for (String name : read.inputNames()) {
+        for (String name : source.inputNames()) {
             csv.print(CsvCells.text(name));
         }
-        boolean hasResponse = read.response() != null || read.actualClass() != null;
+        boolean hasResponse = source.hasResponse();
         if (hasResponse) {
             csv.print(CsvCells.text(responseName));
         }
-        if (s.estimates() != null) {
+        if (!source.categoryResponse()) {
             csv.print("fit");
             csv.print("band_lo");
             csv.print("band_hi");
@@ -91,39 +115,42 @@ final class PredictionCsv {
         csv.println();
     }
 
-    private static void record(CSVPrinter csv, ScoredRows s, List<String> classLabels, int i) throws IOException {
-        ScoredRows.ReadRows read = s.read();
-        int row = read.rows().row(i);
-        csv.print(Long.toString(read.lines()[i]));
-        if (read.group() != null) {
-            csv.print(read.group().code(row) < 0 ? "" : CsvCells.text(read.group().label(row)));
+    private void record(ScoredRows.Block b, int i) throws IOException {
+        csv.print(Long.toString(b.lines()[i]));
+        if (b.groups() != null) {
+            int g = b.groups()[i];
+            csv.print(g < 0 ? "" : CsvCells.text(source.group().labels().get(g)));
         }
-        for (int j = 0; j < read.x().length; j++) {
-            csv.print(cell(read.x()[j][i], read.timeInputs()[j]));
+        for (int j = 0; j < b.x().length; j++) {
+            csv.print(cell(b.x()[j][i], source.timeInput(j)));
         }
-        double[] y = read.response();
-        if (s.estimates() != null) {
-            double fit = s.estimates().fit()[i];
-            if (y != null) {
-                csv.print(CsvCells.number(y[i]));
-            }
-            csv.print(CsvCells.number(fit));
-            csv.print(CsvCells.number(s.estimates().bandLow()[i]));
-            csv.print(CsvCells.number(s.estimates().bandHigh()[i]));
-            if (y != null) {
-                csv.print(CsvCells.number(y[i] - fit));
-                csv.print(CsvCells.number(s.z()[i]));
-            }
+        if (b.estimates() != null) {
+            numbers(b, i);
         } else {
-            if (read.actualClass() != null) {
-                int a = read.actualClass()[i];
+            if (b.actualClass() != null) {
+                int a = b.actualClass()[i];
                 csv.print(a < 0 ? "" : CsvCells.text(classLabels.get(a)));
             }
-            int c = s.classes()[i];
+            int c = b.votes().winner()[i];
             csv.print(c < 0 ? "" : CsvCells.text(classLabels.get(c)));
-            csv.print(CsvCells.number(s.shares()[i]));
+            csv.print(CsvCells.number(b.votes().share()[i]));
         }
         csv.println();
+    }
+
+    private void numbers(ScoredRows.Block b, int i) throws IOException {
+        double[] y = b.response();
+        double fit = b.estimates().fit()[i];
+        if (y != null) {
+            csv.print(CsvCells.number(y[i]));
+        }
+        csv.print(CsvCells.number(fit));
+        csv.print(CsvCells.number(b.estimates().bandLow()[i]));
+        csv.print(CsvCells.number(b.estimates().bandHigh()[i]));
+        if (y != null) {
+            csv.print(CsvCells.number(y[i] - fit));
+            csv.print(CsvCells.number(b.z()[i]));
+        }
     }
 
     /** A number, or a time (epoch ms, exact in a double) in ISO 8601 UTC; empty when missing (NaN). */

@@ -3,10 +3,10 @@ package nearfit.cli;
 import java.io.PrintWriter;
 import java.util.List;
 
-import nearfit.knn.ClassVote;
+import nearfit.knn.ClassVotes;
 import nearfit.knn.Estimates;
 import nearfit.knn.KnnModel;
-import nearfit.knn.Searcher;
+import nearfit.knn.Progress;
 import nearfit.model.ModelColumns;
 import nearfit.model.ReferenceModel;
 import nearfit.model.RestoredModel;
@@ -14,11 +14,17 @@ import nearfit.table.CategoryColumn;
 import nearfit.table.Column;
 import nearfit.table.NumericColumn;
 import nearfit.table.RowSet;
+import nearfit.table.Table;
 import nearfit.table.TimeColumn;
 
 /**
- * New rows scored against a model: the rows of a file that meet the row condition, the engine's
- * estimates at them, and where the file has the response, residuals and z.
+ * New rows scored against a model block by block: the rows of a file that meet the row condition,
+ * the engine's estimates at them, and where the file has the response, residuals and z.
+ *
+ * <p>Scoring runs on blocks of at most {@code blockRows} rows, so what is held per row is only the
+ * loaded table (the model's columns and line numbers); a block's inputs, estimates and z are
+ * dropped once its consumer returns. At 10M rows the estimates of every row at once were 440 MB.
+ * Each estimate depends only on its point, so the block size never changes a result.
  *
  * <p>z of a new row depends on the model's z scale. {@code local} (the default):
  * {@code resid / s} with s the weighted SD of the k neighbours' responses at the row, so a row is
@@ -28,80 +34,203 @@ import nearfit.table.TimeColumn;
  * modified z-score of Iglewicz and Hoaglin 1993, on the reference's scale). A zero scale gives z = 0
  * for a zero (centred) residual and an infinite z otherwise, as the engine's flags do. Rows with a
  * missing input or response get NaN.
- *
- * <p>The values are copied out of the table before scoring, and the table is let go: at 10M rows its
- * columns and line numbers are 240 MB that scoring does not need.
- *
- * @param read        the rows scored and their values, as read from the file
- * @param estimates   fit and band at each row (number response), or {@code null}
- * @param classes     the predicted class code at each row (category response), or {@code null}
- * @param shares      the vote share of the predicted class (category response), or {@code null}
- * @param z           z at each row, or {@code null} without a number response
  */
-record ScoredRows(ReadRows read, Estimates estimates, int[] classes, double[] shares, double[] z) {
+final class ScoredRows {
+    /** Rows per block: 1 Mi rows hold about 60 MB of estimates and inputs at a time. */
+    static final int BLOCK_ROWS = 1 << 20;
+
+    /** Takes each scored block in row order; E is what it may throw (an output's IOException). */
+    @FunctionalInterface
+    interface BlockConsumer<E extends Exception> {
+        void accept(Block block) throws E;
+    }
 
     /**
-     * The rows of a file to score, copied out of its table.
+     * One block of scored rows; index i is the block's i-th row, the source's {@code from + i}-th.
      *
-     * @param rows        the table rows scored, ascending
-     * @param lines       the source line of each scored row
-     * @param inputNames  the model's inputs
-     * @param timeInputs  for each input, whether the file's column is a time (values are epoch ms)
-     * @param x           the inputs' values at each scored row, one array per input, NaN when missing
-     * @param response    the response values, or {@code null} when the file lacks the response column
-     *                    or the response is a category
-     * @param actualClass the file's class code mapped to the model's dictionary (-1 unknown), or {@code null}
-     * @param group       the model's group column in the file, or {@code null}
+     * @param from        the position of the block's first row among the scored rows
+     * @param lines       the source line of each row
+     * @param groups      the group code of each row (-1 missing), or {@code null} without a group column
+     * @param x           the inputs' values, one array per input, NaN when missing (times in epoch ms)
+     * @param response    the response values, or {@code null} (no response column, or a category response)
+     * @param actualClass the file's class mapped to the model's codes (-1 missing or unknown), or {@code null}
+     * @param estimates   fit and band (number response), or {@code null}
+     * @param votes       class votes (category response), or {@code null}
+     * @param z           z at each row, or {@code null} without a number response in the file
      */
-    record ReadRows(RowSet rows, long[] lines, List<String> inputNames, boolean[] timeInputs, double[][] x,
-                    double[] response, int[] actualClass, CategoryColumn group) {
+    record Block(int from, long[] lines, int[] groups, double[][] x, double[] response, int[] actualClass,
+                 Estimates estimates, ClassVotes votes, double[] z) {
+        /** Rows in the block. */
+        int size() {
+            return lines.length;
+        }
     }
 
-    /** Loads {@code file} and scores its rows (those meeting {@code where}) against {@code model}. */
-    static ScoredRows score(RestoredModel model, String file, ModelOptions options, PrintWriter err) {
-        ReadRows read = read(model.stored().columns(), file, options, err);
-        if (model.stored().columns().categoryResponse()) {
-            return classify(model, read);
+    private final KnnModel engine;
+    private final boolean category;
+    private final boolean localZ;
+    private final ReferenceModel.ResidualScale residualScale;
+    private final Table table;
+    private final RowSet rows;
+    private final List<String> inputNames;
+    private final NumericColumn[] inputs;
+    private final boolean[] timeInputs;
+    private final NumericColumn response;
+    private final CategoryColumn actual;
+    private final int[] modelCodeOfFileCode;
+    private final CategoryColumn group;
+    private final PrintWriter err;
+    private final boolean quiet;
+    private final int blockRows;
+
+    private ScoredRows(RestoredModel model, SourceTable source, ModelOptions options, PrintWriter err) {
+        ModelColumns columns = model.stored().columns();
+        this.engine = model.engine();
+        this.category = columns.categoryResponse();
+        this.localZ = "local".equals(model.settings().zScale());
+        this.residualScale = model.stored().residualScale();
+        this.table = source.table();
+        this.rows = source.rows(options.where);
+        this.inputNames = columns.inputs();
+        this.inputs = new NumericColumn[inputNames.size()];
+        this.timeInputs = new boolean[inputs.length];
+        for (int j = 0; j < inputs.length; j++) {
+            inputs[j] = source.numeric("model input", inputNames.get(j));
+            timeInputs[j] = inputs[j] instanceof TimeColumn;
         }
-        TerminalProgress progress = TerminalProgress.of(err, "scoring", options.quiet);
-        Estimates est = model.engine().estimateAll(read.x(), progress);
-        progress.done();
-        double[] y = read.response();
-        double[] z = y == null ? null : "local".equals(model.settings().zScale())
-                ? localZ(y, est.fit(), est.localSd()) : zScores(y, est.fit(), model.stored().residualScale());
-        return new ScoredRows(read, est, null, null, z);
+        boolean hasResponse = table.hasColumn(columns.response());
+        this.response = hasResponse && !columns.categoryResponse()
+                ? source.numeric("model response", columns.response()) : null;
+        this.actual = hasResponse && columns.categoryResponse()
+                ? source.category("model response", columns.response()) : null;
+        this.modelCodeOfFileCode = actual == null ? null : codeMap(actual, columns.responseLabels());
+        this.group = groupColumn(table, columns.group());
+        this.err = err;
+        this.quiet = options.quiet;
+        this.blockRows = options.blockRows;
     }
 
     /**
-     * Loads the file, keeping only the model's columns and those of --where (a file of new readings may lack
-     * the response or the group), and copies out what scoring and the reports use; the table is not kept.
+     * Loads {@code file}, keeping only the model's columns and those of --where (a file of new readings
+     * may lack the response or the group); scoring starts with {@link #forEachBlock}.
      */
-    private static ReadRows read(ModelColumns columns, String file, ModelOptions options, PrintWriter err) {
+    static ScoredRows open(RestoredModel model, String file, ModelOptions options, PrintWriter err) {
+        ModelColumns columns = model.stored().columns();
         ColumnRequest request = ColumnRequest.NONE.require("model input", columns.inputs())
                 .allow(columns.response(), columns.group()).where(options.where);
         SourceTable source = SourceTable.load(file, request, options.threads(), options.quiet, err);
-        RowSet rows = source.rows(options.where);
+        return new ScoredRows(model, source, options, err);
+    }
+
+    /** Rows to score (those meeting the row condition). */
+    int rowCount() {
+        return rows.size();
+    }
+
+    List<String> inputNames() {
+        return inputNames;
+    }
+
+    /** For each input, whether the file's column is a time. */
+    boolean timeInput(int j) {
+        return timeInputs[j];
+    }
+
+    /** Whether the model's response is a category (blocks carry votes, not estimates). */
+    boolean categoryResponse() {
+        return category;
+    }
+
+    /** Whether the file has the model's response column. */
+    boolean hasResponse() {
+        return response != null || actual != null;
+    }
+
+    /** The group column in the file, or {@code null}. */
+    CategoryColumn group() {
+        return group;
+    }
+
+    /** Scores the rows block by block, in row order, on the model's threads; progress on a terminal. */
+    <E extends Exception> void forEachBlock(BlockConsumer<E> consumer) throws E {
+        TerminalProgress progress = TerminalProgress.of(err, "scoring", quiet);
         int n = rows.size();
-        double[][] x = new double[columns.inputs().size()][];
-        boolean[] time = new boolean[x.length];
+        for (int from = 0; from < n; from += blockRows) {
+            consumer.accept(score(from, Math.min(n, from + blockRows) - from, progress));
+        }
+        progress.done();
+    }
+
+    private Block score(int from, int size, TerminalProgress progress) {
+        long[] lines = new long[size];
+        int[] groups = group == null ? null : new int[size];
+        for (int i = 0; i < size; i++) {
+            int row = rows.row(from + i);
+            lines[i] = table.lineOf(row);
+            if (groups != null) {
+                groups[i] = group.code(row);
+            }
+        }
+        double[][] x = new double[inputs.length][];
         for (int j = 0; j < x.length; j++) {
-            NumericColumn c = source.numeric("model input", columns.inputs().get(j));
-            x[j] = SourceTable.values(c, rows);
-            time[j] = c instanceof TimeColumn;
+            x[j] = values(inputs[j], from, size);
         }
-        long[] lines = new long[n];
-        for (int i = 0; i < n; i++) {
-            lines[i] = source.table().lineOf(rows.row(i));
+        Progress offset = blockProgress(progress, from);
+        if (category) {
+            return new Block(from, lines, groups, x, null, actualClasses(from, size), null,
+                    engine.voteAll(x, offset), null);
         }
-        boolean hasResponse = source.table().hasColumn(columns.response());
-        double[] y = null;
-        int[] actual = null;
-        if (hasResponse && columns.categoryResponse()) {
-            actual = actualClasses(columns, source, rows);
-        } else if (hasResponse) {
-            y = SourceTable.values(source.numeric("model response", columns.response()), rows);
+        double[] y = response == null ? null : values(response, from, size);
+        Estimates est = engine.estimateAll(x, offset);
+        double[] z = y == null ? null : localZ ? localZ(y, est.fit(), est.localSd())
+                : zScores(y, est.fit(), residualScale);
+        return new Block(from, lines, groups, x, y, null, est, null, z);
+    }
+
+    /** The whole run's progress seen from a block starting at {@code from}. */
+    private Progress blockProgress(TerminalProgress progress, int from) {
+        long total = rows.size();
+        return new Progress() {
+            @Override
+            public void report(long done, long blockTotal) {
+                progress.report(from + done, total);
+            }
+
+            @Override
+            public boolean isCancelled() {
+                return progress.isCancelled();
+            }
+        };
+    }
+
+    private double[] values(NumericColumn column, int from, int size) {
+        double[] out = new double[size];
+        for (int i = 0; i < size; i++) {
+            out[i] = column.asDouble(rows.row(from + i));
         }
-        return new ReadRows(rows, lines, columns.inputs(), time, x, y, actual, groupColumn(source, columns.group()));
+        return out;
+    }
+
+    private int[] actualClasses(int from, int size) {
+        if (actual == null) {
+            return null;
+        }
+        int[] out = new int[size];
+        for (int i = 0; i < size; i++) {
+            int code = actual.code(rows.row(from + i));
+            out[i] = code < 0 ? -1 : modelCodeOfFileCode[code];
+        }
+        return out;
+    }
+
+    /** For each label code of the file's column, the model's code of that label, or -1. */
+    private static int[] codeMap(CategoryColumn column, List<String> modelLabels) {
+        List<String> labels = column.labels();
+        int[] map = new int[labels.size()];
+        for (int c = 0; c < map.length; c++) {
+            map[c] = modelLabels.indexOf(labels.get(c));
+        }
+        return map;
     }
 
     /** z of each residual on the stored scale; NaN where the response or the fit is missing. */
@@ -134,47 +263,11 @@ record ScoredRows(ReadRows read, Estimates estimates, int[] classes, double[] sh
         return e == 0 ? 0 : Math.copySign(Double.POSITIVE_INFINITY, e);
     }
 
-    private static ScoredRows classify(RestoredModel model, ReadRows read) {
-        KnnModel engine = model.engine();
-        Searcher searcher = engine.searcher();
-        double[][] x = read.x();
-        int n = read.rows().size();
-        int[] classes = new int[n];
-        double[] shares = new double[n];
-        double[] point = new double[x.length];
-        for (int i = 0; i < n; i++) {
-            boolean missing = false;
-            for (int j = 0; j < x.length; j++) {
-                point[j] = x[j][i];
-                missing |= Double.isNaN(point[j]);
-            }
-            if (missing) {
-                classes[i] = -1;
-                shares[i] = Double.NaN;
-                continue;
-            }
-            ClassVote vote = searcher.vote(point);
-            classes[i] = vote.winner();
-            shares[i] = vote.shares()[vote.winner()];
-        }
-        return new ScoredRows(read, null, classes, shares, null);
-    }
-
-    private static int[] actualClasses(ModelColumns columns, SourceTable source, RowSet rows) {
-        CategoryColumn c = source.category("model response", columns.response());
-        int[] out = new int[rows.size()];
-        for (int i = 0; i < out.length; i++) {
-            int row = rows.row(i);
-            out[i] = c.code(row) < 0 ? -1 : columns.responseLabels().indexOf(c.label(row));
-        }
-        return out;
-    }
-
-    private static CategoryColumn groupColumn(SourceTable source, String group) {
-        if (group == null || !source.table().hasColumn(group)) {
+    private static CategoryColumn groupColumn(Table table, String group) {
+        if (group == null || !table.hasColumn(group)) {
             return null;
         }
-        Column c = source.table().column(group);
+        Column c = table.column(group);
         return c instanceof CategoryColumn cat ? cat : null;
     }
 }

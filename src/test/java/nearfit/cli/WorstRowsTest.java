@@ -15,7 +15,7 @@ class WorstRowsTest {
     @Property(tries = 200)
     void keepsTheLargestScoresLikeAStableSort(@ForAll @Size(max = 60) double[] scores,
                                               @ForAll @IntRange(min = 0, max = 8) int capacity) {
-        WorstRows w = new WorstRows(capacity);
+        WorstRows<Integer> w = new WorstRows<>(capacity);
         for (int i = 0; i < scores.length; i++) {
             w.offer(i, Math.abs(scores[i]));
         }
@@ -28,6 +28,6 @@ class WorstRowsTest {
         for (int i = 0; i < expected.length; i++) {
             expected[i] = order[i];
         }
-        assertArrayEquals(expected, w.rowsLargestFirst());
+        assertArrayEquals(expected, w.largestFirst().stream().mapToInt(Integer::intValue).toArray());
     }
 }
