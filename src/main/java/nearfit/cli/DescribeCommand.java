@@ -112,7 +112,7 @@ final class DescribeCommand implements Callable<Integer> {
         }
         StringBuilder out = new StringBuilder();
         out.append(String.format(Locale.ROOT, "%s: %d rows, %d columns, delimiter %s, %s%s%n", r.source(), r.rows(),
-                summaries.size(), delimiterName(r.delimiter()), r.headerPresent() ? "header row" : "no header row",
+                summaries.size(), r.delimiterName(), r.headerPresent() ? "header row" : "no header row",
                 r.decimalComma() ? ", decimal comma" : ""));
         out.append(align(rows));
         for (String c : categories) {
@@ -161,16 +161,6 @@ final class DescribeCommand implements Callable<Integer> {
 
     private static String time(double ms) {
         return Double.isNaN(ms) ? "-" : Instant.ofEpochMilli(Math.round(ms)).toString();
-    }
-
-    private static String delimiterName(char d) {
-        return switch (d) {
-            case ',' -> "comma";
-            case ';' -> "semicolon";
-            case '\t' -> "tab";
-            case '|' -> "bar";
-            default -> "'" + d + "'";
-        };
     }
 
     private static String align(List<String[]> rows) {

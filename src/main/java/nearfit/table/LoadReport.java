@@ -48,6 +48,20 @@ public record LoadReport(String source, int rows, long bytes, char delimiter, bo
                 raggedExamples, badCells, badExamples, nanos, w);
     }
 
+    /**
+     * The delimiter as a word for reports: comma, semicolon, tab or bar (the delimiters the loader
+     * detects), any other one quoted, e.g. {@code ':'}.
+     */
+    public String delimiterName() {
+        return switch (delimiter) {
+            case ',' -> "comma";
+            case ';' -> "semicolon";
+            case '\t' -> "tab";
+            case '|' -> "bar";
+            default -> "'" + delimiter + "'";
+        };
+    }
+
     /** Rows with the wrong number of fields, short and long together. */
     public long raggedRows() {
         return shortRows + longRows;

@@ -7,7 +7,10 @@ import java.util.Locale;
 import nearfit.table.BadCell;
 import nearfit.table.LoadReport;
 
-/** The load-report panel as text lines: what the loader read, its ragged lines and each column's missing cells. */
+/**
+ * The load-report panel as text lines: what the loader read, its warnings about the file as a whole (say, it
+ * grew while it was read), its ragged lines and each column's missing cells.
+ */
 final class LoadPanel {
     private LoadPanel() {
     }
@@ -21,8 +24,11 @@ final class LoadPanel {
         LoadReport r = notes.report();
         List<String> out = new ArrayList<>();
         out.add(String.format(Locale.ROOT, "%s: %s data rows read, %s kept; delimiter %s, %s%s", r.source(),
-                Figures.count(r.rows()), Figures.count(r.rows()), delimiter(r.delimiter()),
+                Figures.count(r.rows()), Figures.count(r.rows()), r.delimiterName(),
                 r.headerPresent() ? "header row" : "no header row", r.decimalComma() ? ", decimal comma" : ""));
+        for (String w : r.warnings()) {
+            out.add("warning: " + w);
+        }
         out.add(String.format(Locale.ROOT, "ragged lines: %s (%s short, padded with missing; %s long, extra fields dropped)",
                 Figures.count(r.raggedRows()), Figures.count(r.shortRows()), Figures.count(r.longRows())));
         for (BadCell c : r.raggedExamples()) {
@@ -66,15 +72,5 @@ final class LoadPanel {
             sb.append(sb.length() == 0 ? "" : ", ").append(l);
         }
         return sb.toString();
-    }
-
-    private static String delimiter(char d) {
-        return switch (d) {
-            case ',' -> "comma";
-            case ';' -> "semicolon";
-            case '\t' -> "tab";
-            case '|' -> "bar";
-            default -> "'" + d + "'";
-        };
     }
 }

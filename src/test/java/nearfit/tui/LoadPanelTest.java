@@ -80,6 +80,21 @@ class LoadPanelTest {
     }
 
     @Test
+    void thePanelListsTheLoadersWarningsAboutTheFileAfterItsFirstLine() throws Exception {
+        Workbench wb = CoreWorkbench.open(plantedLog(), "planted.csv", JobControl.NONE);
+        LoadNotes notes = wb.loadNotes();
+        String grew = "planted.csv: grew from 2400 to 2480 bytes while it was read; only the first 2400 bytes were read";
+        LoadNotes warned = new LoadNotes(notes.report().withWarning(grew).withWarning("planted.csv: was modified"),
+                notes.columns());
+        List<String> lines = LoadPanel.lines(warned);
+        assertTrue(lines.get(0).contains("60 data rows read"), lines.get(0));
+        assertEquals("warning: " + grew, lines.get(1));
+        assertEquals("warning: planted.csv: was modified", lines.get(2));
+        assertTrue(lines.get(3).startsWith("ragged lines: 2"), lines.get(3));
+        assertFalse(String.join("\n", LoadPanel.lines(notes)).contains("warning"), "no warning, no line");
+    }
+
+    @Test
     void aCleanFileHasNoMarkerAndThePanelSaysSo() throws Exception {
         Path csv = dir.resolve("clean.csv");
         StringBuilder sb = new StringBuilder("wind_ms,power_kw\n");
