@@ -8,6 +8,7 @@ import java.util.concurrent.Callable;
 import nearfit.knn.FlagResult;
 import nearfit.knn.Flags;
 import nearfit.knn.KnnModel;
+import nearfit.knn.ReferenceData;
 import nearfit.knn.TuningTable;
 import nearfit.model.ModelFile;
 import nearfit.model.ReferenceCapture;
@@ -60,33 +61,55 @@ final class FitCommand implements Callable<Integer> {
         SafeOutput.checkTarget(output, model.force, inputs);
         PrintWriter err = spec.commandLine().getErr();
         ReferenceInput input = ReferenceInput.load(file, columns, model, err);
-        TuningOptions.Fitted fitted = tuning.fit(input.data(), model.settings(1, z), chosenK, model.threads(), err,
+        Source source = Source.of(input, model.where);
+        input = null; // the table goes: at 10M rows it holds more than the fit still needs
+        TuningOptions.Fitted fitted = tuning.fit(source.data, model.settings(1, z), chosenK, model.threads(), err,
                 model.quiet);
         KnnModel engine = fitted.engine();
         TuningOptions.Result tuned = fitted.tuned();
         FlagResult loo = null;
-        if (!input.data().isCategory()) {
+        if (!source.data.isCategory()) {
             TerminalProgress progress = TerminalProgress.of(err, "leave-one-out", model.quiet);
             loo = Flags.leaveOneOut(engine, progress);
             progress.done();
         }
-        ReferenceModel saved = capture(input, engine, loo, tuned);
+        TuningTable table = tuned == null ? null : tuned.table();
+        ReferenceModel saved = ReferenceCapture.capture(ToolVersion.get(), source.info, engine, loo, table,
+                tuned == null ? -1 : tuned.sampled(), source.responseLabels, source.groupName, source.groupLabels,
+                source.facts);
         ModelFile.write(saved, output, model.force, inputs);
         spec.commandLine().getOut().printf("fitted k = %d on %s; wrote %s%n", saved.settings().k(),
-                input.describe(), output);
+                source.described, output);
         spec.commandLine().getOut().flush();
         return 0;
     }
 
-    private ReferenceModel capture(ReferenceInput input, KnnModel engine, FlagResult loo, TuningOptions.Result tuned) {
-        SourceTable src = input.source();
-        SourceInfo source = new SourceInfo(src.name(), src.sizeBytes(), src.sha256(),
-                model.where == null || model.where.isBlank() ? null : model.where.trim());
-        CategoryColumn group = input.group();
-        TuningTable table = tuned == null ? null : tuned.table();
-        return ReferenceCapture.capture(ToolVersion.get(), source, engine, loo, table,
-                tuned == null ? -1 : tuned.sampled(), input.responseLabels(),
-                group == null ? null : group.name(), group == null ? List.of() : group.labels(),
-                group == null ? row -> -1 : group::code, src.table()::lineOf);
+    /** What the fit keeps of its input once the reference rows are built: no table. */
+    private static final class Source {
+        final ReferenceData data;
+        final SourceInfo info;
+        final List<String> responseLabels;
+        final String groupName;
+        final List<String> groupLabels;
+        final ReferenceCapture.RowFacts facts;
+        final String described;
+
+        private Source(ReferenceInput input, String where) {
+            SourceTable src = input.source();
+            CategoryColumn group = input.group();
+            this.data = input.data();
+            this.info = new SourceInfo(src.name(), src.sizeBytes(), src.sha256(),
+                    where == null || where.isBlank() ? null : where.trim());
+            this.responseLabels = input.responseLabels();
+            this.groupName = group == null ? null : group.name();
+            this.groupLabels = group == null ? List.of() : group.labels();
+            this.facts = ReferenceCapture.RowFacts.of(data, group != null, group == null ? row -> -1 : group::code,
+                    src.table()::lineOf);
+            this.described = input.describe();
+        }
+
+        static Source of(ReferenceInput input, String where) {
+            return new Source(input, where);
+        }
     }
 }

@@ -29,8 +29,8 @@ public final class Flags {
         double[] y = data.response();
         double[] fit = new double[n];
         double[] res = new double[n];
-        double[] local = new double[n];
         FlagScale scale = s.flagScale();
+        double[] local = scale == FlagScale.GLOBAL_MAD ? null : new double[n];
         int[] order = Tuning.spatialOrder(model.coords(), d, Tuning.allRows(n));
         Workers.run(n, s.threads(), model::searcher, (sr, c, from, to) -> {
             double[] q = new double[d];
@@ -39,16 +39,17 @@ public final class Flags {
                 System.arraycopy(model.coords(), i * d, q, 0, d);
                 fit[i] = sr.fitLeavingOut(q, k, i, scale);
                 res[i] = y[i] - fit[i];
-                local[i] = sr.localScale();
+                if (local != null) {
+                    local[i] = sr.localScale();
+                }
             }
         }, progress);
-        double[] scratch = res.clone();
-        double median = Quantiles.median(scratch, n);
+        double[] z = res.clone(); // scratch for the two medians, then the z-scores
+        double median = Quantiles.median(z, n);
         for (int i = 0; i < n; i++) {
-            scratch[i] = Math.abs(res[i] - median);
+            z[i] = Math.abs(res[i] - median);
         }
-        double mad = InputTransform.MAD_TO_SD * Quantiles.median(scratch, n);
-        double[] z = new double[n];
+        double mad = InputTransform.MAD_TO_SD * Quantiles.median(z, n);
         boolean[] flagged = new boolean[n];
         int count = 0;
         for (int i = 0; i < n; i++) {

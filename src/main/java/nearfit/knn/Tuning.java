@@ -166,9 +166,13 @@ public final class Tuning {
     /**
      * The order to evaluate rows in: Morton order of their coordinates, so consecutive rows search
      * the same part of the index while it is in cache. It depends only on the (canonical) data, so
-     * the chunk sums, and the table, stay independent of row order and thread count.
+     * the chunk sums, and the table, stay independent of row order and thread count. With one
+     * input the rows, ascending positions of ascending coordinates, are in that order already.
      */
     static int[] spatialOrder(double[] coords, int d, int[] rows) {
+        if (d == 1) {
+            return allRows(rows.length);
+        }
         double[] q = new double[rows.length * d];
         for (int i = 0; i < rows.length; i++) {
             System.arraycopy(coords, rows[i] * d, q, i * d, d);

@@ -2,8 +2,8 @@ package nearfit.model;
 
 import java.io.IOException;
 import java.io.InputStream;
-import java.nio.ByteBuffer;
-import java.nio.ByteOrder;
+import java.io.UncheckedIOException;
+import java.lang.reflect.Array;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
@@ -120,27 +120,31 @@ public final class ModelArchive {
         full.put("format_version", FORMAT_MAJOR + "." + FORMAT_MINOR);
         full.putAll(manifest);
         List<Object> entries = new ArrayList<>();
-        Map<String, byte[]> bytes = new LinkedHashMap<>();
+        ArrayBytes pieces = new ArrayBytes();
+        Map<String, Long> crcs = new LinkedHashMap<>();
         for (Map.Entry<String, Object> e : arrays.entrySet()) {
             ElementType type = typeOf(e.getValue());
-            byte[] b = encode(e.getValue());
-            CRC32 crc = new CRC32();
-            crc.update(b);
+            long crc = crcOf(pieces, e.getValue());
             Map<String, Object> entry = new LinkedHashMap<>();
             entry.put("name", e.getKey());
             entry.put("type", type.code());
-            entry.put("count", (long) (b.length / type.width()));
-            entry.put("crc32", crc.getValue());
+            entry.put("count", (long) Array.getLength(e.getValue()));
+            entry.put("crc32", crc);
             entries.add(entry);
-            bytes.put(entryName(e.getKey(), type), b);
+            crcs.put(e.getKey(), crc);
         }
         full.put("entries", entries);
         byte[] manifestBytes = (Json.write(full) + "\n").getBytes(StandardCharsets.UTF_8);
         SafeOutput.write(target, force, inputs, out -> {
             ZipOutputStream zip = new ZipOutputStream(out, StandardCharsets.UTF_8);
             putStored(zip, MANIFEST, manifestBytes);
-            for (Map.Entry<String, byte[]> e : bytes.entrySet()) {
-                putStored(zip, e.getKey(), e.getValue());
+            for (Map.Entry<String, Object> e : arrays.entrySet()) {
+                Object a = e.getValue();
+                ElementType type = typeOf(a);
+                long size = (long) Array.getLength(a) * type.width();
+                startStored(zip, entryName(e.getKey(), type), size, crcs.get(e.getKey()));
+                pieces.forEachPiece(a, (b, n) -> zip.write(b, 0, n));
+                zip.closeEntry();
             }
             zip.finish();
         });
@@ -228,17 +232,33 @@ public final class ModelArchive {
             throw NearfitException.inFile(name, "is damaged: entry " + arrayName + " has "
                     + entry.getSize() + " bytes, the manifest says " + expected);
         }
-        byte[] b = readCapped(zip, entry, expected, name);
-        if (b.length != expected) {
-            throw NearfitException.inFile(name, "is truncated: entry " + arrayName + " has " + b.length
+        CRC32 c = new CRC32();
+        long[] read = new long[1];
+        Object array;
+        try (InputStream in = zip.getInputStream(entry)) {
+            array = new ArrayBytes().read(in, type, (int) (expected / type.width()), c, read);
+            if (array != null && in.read() != -1) {
+                throw NearfitException.inFile(name, "is damaged: entry " + entry.getName() + " is larger than allowed");
+            }
+        } catch (ZipException e) {
+            throw NearfitException.inFile(name, "is damaged: entry " + entry.getName() + ": " + e.getMessage(), e);
+        }
+        if (array == null) {
+            throw NearfitException.inFile(name, "is truncated: entry " + arrayName + " has " + read[0]
                     + " bytes, the manifest says " + expected);
         }
-        CRC32 c = new CRC32();
-        c.update(b);
         if (c.getValue() != (long) (double) crc) {
             throw NearfitException.inFile(name, "is damaged: entry " + arrayName + " fails its CRC-32 check");
         }
-        arrays.put(arrayName, decode(b, type));
+        arrays.put(arrayName, array);
+    }
+
+    private static long crcOf(ArrayBytes pieces, Object array) {
+        try {
+            return pieces.crc(array);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e); // no I/O: the sink only updates a checksum
+        }
     }
 
     private static byte[] readCapped(ZipFile zip, ZipEntry entry, long cap, String name) throws IOException {
@@ -264,17 +284,22 @@ public final class ModelArchive {
     }
 
     private static void putStored(ZipOutputStream zip, String entryName, byte[] b) throws IOException {
-        ZipEntry e = new ZipEntry(entryName);
-        e.setMethod(ZipEntry.STORED);
-        e.setSize(b.length);
-        e.setCompressedSize(b.length);
         CRC32 crc = new CRC32();
         crc.update(b);
-        e.setCrc(crc.getValue());
-        e.setTime(0L);
-        zip.putNextEntry(e);
+        startStored(zip, entryName, b.length, crc.getValue());
         zip.write(b);
         zip.closeEntry();
+    }
+
+    /** Starts a stored (uncompressed) entry of known size and CRC; the caller writes it and closes it. */
+    private static void startStored(ZipOutputStream zip, String entryName, long size, long crc) throws IOException {
+        ZipEntry e = new ZipEntry(entryName);
+        e.setMethod(ZipEntry.STORED);
+        e.setSize(size);
+        e.setCompressedSize(size);
+        e.setCrc(crc);
+        e.setTime(0L);
+        zip.putNextEntry(e);
     }
 
     private static String entryName(String arrayName, ElementType type) {
@@ -290,43 +315,5 @@ public final class ModelArchive {
             return ElementType.I64;
         }
         throw new IllegalArgumentException("arrays are double[], int[] or long[], not " + a.getClass());
-    }
-
-    private static byte[] encode(Object a) {
-        if (a instanceof double[] d) {
-            ByteBuffer bb = ByteBuffer.allocate(d.length * 8).order(ByteOrder.LITTLE_ENDIAN);
-            bb.asDoubleBuffer().put(d);
-            return bb.array();
-        } else if (a instanceof int[] i) {
-            ByteBuffer bb = ByteBuffer.allocate(i.length * 4).order(ByteOrder.LITTLE_ENDIAN);
-            bb.asIntBuffer().put(i);
-            return bb.array();
-        } else {
-            long[] l = (long[]) a;
-            ByteBuffer bb = ByteBuffer.allocate(l.length * 8).order(ByteOrder.LITTLE_ENDIAN);
-            bb.asLongBuffer().put(l);
-            return bb.array();
-        }
-    }
-
-    private static Object decode(byte[] b, ElementType type) {
-        ByteBuffer bb = ByteBuffer.wrap(b).order(ByteOrder.LITTLE_ENDIAN);
-        switch (type) {
-            case F64: {
-                double[] d = new double[b.length / 8];
-                bb.asDoubleBuffer().get(d);
-                return d;
-            }
-            case I32: {
-                int[] i = new int[b.length / 4];
-                bb.asIntBuffer().get(i);
-                return i;
-            }
-            default: {
-                long[] l = new long[b.length / 8];
-                bb.asLongBuffer().get(l);
-                return l;
-            }
-        }
     }
 }

@@ -36,17 +36,45 @@ public final class ReferenceCapture {
                                          TuningTable tuning, long sampled, List<String> responseLabels,
                                          String group, List<String> groupLabels, IntUnaryOperator groupOfRow,
                                          IntToLongFunction lineOfRow) {
-        ReferenceData data = engine.data();
-        int n = data.size();
-        int[] ids = data.rowIds();
-        long[] lines = new long[n];
-        int[] groups = group == null ? null : new int[n];
-        for (int i = 0; i < n; i++) {
-            lines[i] = lineOfRow.applyAsLong(ids[i]);
-            if (groups != null) {
-                groups[i] = groupOfRow.applyAsInt(ids[i]);
+        RowFacts facts = RowFacts.of(engine.data(), group != null, groupOfRow, lineOfRow);
+        return capture(toolVersion, source, engine, loo, tuning, sampled, responseLabels, group, groupLabels, facts);
+    }
+
+    /**
+     * The source line and group code of each reference row, in the engine's canonical order: taken
+     * before the fit's heavy work, so the table they come from can be let go (at 10M rows the
+     * table holds more than the model).
+     *
+     * @param lines  the 1-based source line of each kept row
+     * @param groups the group code of each kept row, or {@code null} without a group
+     */
+    public record RowFacts(long[] lines, int[] groups) {
+
+        /** Looks the facts up by each kept row's table row id. */
+        public static RowFacts of(ReferenceData data, boolean grouped, IntUnaryOperator groupOfRow,
+                                  IntToLongFunction lineOfRow) {
+            int n = data.size();
+            int[] ids = data.rowIds();
+            long[] lines = new long[n];
+            int[] groups = grouped ? new int[n] : null;
+            for (int i = 0; i < n; i++) {
+                lines[i] = lineOfRow.applyAsLong(ids[i]);
+                if (groups != null) {
+                    groups[i] = groupOfRow.applyAsInt(ids[i]);
+                }
             }
+            return new RowFacts(lines, groups);
         }
+    }
+
+    /** As {@link #capture(String, SourceInfo, KnnModel, FlagResult, TuningTable, long, List, String, List,
+     * IntUnaryOperator, IntToLongFunction)}, with the rows' lines and groups already taken. */
+    public static ReferenceModel capture(String toolVersion, SourceInfo source, KnnModel engine, FlagResult loo,
+                                         TuningTable tuning, long sampled, List<String> responseLabels,
+                                         String group, List<String> groupLabels, RowFacts facts) {
+        ReferenceData data = engine.data();
+        long[] lines = facts.lines();
+        int[] groups = group == null ? null : facts.groups();
         double[][] inputs = new double[data.dimensions()][];
         for (int j = 0; j < inputs.length; j++) {
             inputs[j] = data.input(j);
