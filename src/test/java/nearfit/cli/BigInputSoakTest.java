@@ -184,15 +184,12 @@ class BigInputSoakTest {
 
     @Test
     @Order(5)
-    void checkOfTheLogAgainstItsModelUnderOneGigabyteFinishesOrSaysInOneLineThatMemoryRanOut() throws Exception {
-        // At 10M rows the fit before this runs out of memory, so this check is skipped. Measured by hand against
-        // a model fitted under -Xmx2g: out of memory at -Xmx1g (model, engine and per-row estimates), done at 1600m.
+    void checkOfTheLogAgainstItsModelFinishesUnderOneGigabyte() throws Exception {
+        // Skipped when the fit before this ran out of memory. Measured by hand on 2026-12-02 against a model
+        // fitted under -Xmx3g (k = 30): scoring every row at once needed -Xmx1500m (out of memory at 1g and
+        // 1200m); scoring in blocks of 1 Mi rows finishes at 1g (out of memory at 768m).
         org.junit.jupiter.api.Assumptions.assumeTrue(Files.exists(MODEL), "fit wrote no model");
         Run r = nearfit("check", "check", MODEL.toString(), LOG.toString(), "--quiet", "--format", "json");
-        if (r.status() == 2) {
-            assertTrue(r.err().contains("out of memory") && r.err().indexOf('\n') == r.err().length() - 1, r.err());
-            return;
-        }
         // 0: within the flagged-share limit; 1: over it. Either is a finished check.
         assertTrue(r.status() == 0 || r.status() == 1, r.err());
         assertEquals("", r.err());
