@@ -187,7 +187,8 @@ class BigInputSoakTest {
     void checkOfTheLogAgainstItsModelFinishesUnderOneGigabyte() throws Exception {
         // Skipped when the fit before this ran out of memory. Measured by hand on 2026-12-02 against a model
         // fitted under -Xmx3g (k = 30): scoring every row at once needed -Xmx1500m (out of memory at 1g and
-        // 1200m); scoring in blocks of 1 Mi rows finishes at 1g (out of memory at 768m).
+        // 1200m); in blocks of 1 Mi rows it finished at 1g (out of memory at 896m), in blocks of 256 Ki rows
+        // (ScoredRows.BLOCK_ROWS) at 1g and at 896m.
         org.junit.jupiter.api.Assumptions.assumeTrue(Files.exists(MODEL), "fit wrote no model");
         Run r = nearfit("check", "check", MODEL.toString(), LOG.toString(), "--quiet", "--format", "json");
         // 0: within the flagged-share limit; 1: over it. Either is a finished check.

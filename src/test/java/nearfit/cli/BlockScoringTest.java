@@ -24,7 +24,7 @@ import picocli.CommandLine;
  * were before scoring in blocks (every row at once; commit 247c048), on the committed invented logs
  * there (an eight-turbine wind site with T05 short by 20 % from its 22nd record, blank wind, power
  * and turbine cells; a pump's operating state by flow and head). Each case runs with the default
- * block (1 Mi rows: one block), 7 rows (blocks end mid-file, the last one short) and 1 row.
+ * block (one block for these files), 7 rows (blocks end mid-file, the last one short) and 1 row.
  */
 class BlockScoringTest {
     private static final String RESOURCES = "/cli/blocks/";
@@ -48,7 +48,7 @@ class BlockScoringTest {
     }
 
     @ParameterizedTest(name = "block of {0} rows")
-    @ValueSource(ints = {1 << 20, 7, 1})
+    @ValueSource(ints = {ScoredRows.BLOCK_ROWS, 7, 1})
     void predictWritesTheSameCsvWhateverTheBlockSize(int blockRows) throws IOException {
         CliRun.Result r = run(blockRows, "predict", windModel, file("wind-new.csv"), "--quiet");
         assertEquals(0, r.status(), r.toString());
@@ -56,7 +56,7 @@ class BlockScoringTest {
     }
 
     @ParameterizedTest(name = "block of {0} rows")
-    @ValueSource(ints = {1 << 20, 7, 1})
+    @ValueSource(ints = {ScoredRows.BLOCK_ROWS, 7, 1})
     void predictToAFileWithTheReferenceZScaleWritesTheSameCsvWhateverTheBlockSize(int blockRows)
             throws IOException {
         Path out = dir.resolve("predict-" + blockRows + ".csv");
@@ -67,7 +67,7 @@ class BlockScoringTest {
     }
 
     @ParameterizedTest(name = "block of {0} rows")
-    @ValueSource(ints = {1 << 20, 7, 1})
+    @ValueSource(ints = {ScoredRows.BLOCK_ROWS, 7, 1})
     void checkReportsAndWritesTheSameFlaggedRowsWhateverTheBlockSize(int blockRows) throws IOException {
         Path flagged = dir.resolve("flagged-" + blockRows + ".csv");
         CliRun.Result r = run(blockRows, "check", windModel, file("wind-new.csv"), "--quiet", "--threshold", "2.5",
@@ -78,7 +78,7 @@ class BlockScoringTest {
     }
 
     @ParameterizedTest(name = "block of {0} rows")
-    @ValueSource(ints = {1 << 20, 7, 1})
+    @ValueSource(ints = {ScoredRows.BLOCK_ROWS, 7, 1})
     void checkWithARowConditionGivesTheSameJsonWhateverTheBlockSize(int blockRows) throws IOException {
         CliRun.Result r = run(blockRows, "check", windModel, file("wind-new.csv"), "--quiet", "--threshold", "2.5",
                 "--format", "json", "--where", "wind_ms > 4");
@@ -87,7 +87,7 @@ class BlockScoringTest {
     }
 
     @ParameterizedTest(name = "block of {0} rows")
-    @ValueSource(ints = {1 << 20, 7, 1})
+    @ValueSource(ints = {ScoredRows.BLOCK_ROWS, 7, 1})
     void batchClassVotesGiveTheSameClassesAndSharesAsRowByRowVotes(int blockRows) throws IOException {
         CliRun.Result r = run(blockRows, "predict", pumpModel, file("pump-new.csv"), "--quiet");
         assertEquals(0, r.status(), r.toString());
