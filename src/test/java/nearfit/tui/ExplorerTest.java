@@ -37,6 +37,17 @@ class ExplorerTest {
     }
 
     @Test
+    void enterInTheInputsPickerClosesItWithTheInputsSpaceAdded() throws Exception {
+        try (VirtualScreen v = VirtualScreen.standard(new ScriptedWorkbench())) {
+            v.type("i").key(KeyType.ArrowDown).key(KeyType.ArrowDown).type(" ");
+            assertTrue(v.row(1).contains("power_kw ~ wind_ms + air_temp_c"), v.row(1));
+            v.key(KeyType.Enter);
+            assertTrue(v.row(1).contains("power_kw ~ wind_ms + air_temp_c"), v.row(1));
+            assertFalse(v.text().contains("choose the model inputs"), "the picker is closed");
+        }
+    }
+
+    @Test
     void kPromptSetsAnExactKAndRejectsNonsense() throws Exception {
         try (VirtualScreen v = VirtualScreen.standard(new ScriptedWorkbench())) {
             v.type("k").type("42").key(KeyType.Enter);
