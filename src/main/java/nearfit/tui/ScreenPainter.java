@@ -109,7 +109,8 @@ final class ScreenPainter {
         Map<String, Double> held = new TreeMap<>(in.heldValues());
         for (Map.Entry<String, Double> e : held.entrySet()) {
             boolean moving = e.getKey().equals(s.heldInput());
-            sb.append(moving ? "  [" : "  ").append(e.getKey()).append('=').append(Figures.value(e.getValue()))
+            sb.append(moving ? "  [" : "  ").append(e.getKey()).append('=')
+                    .append(kindOf(in, e.getKey()) == ColumnKind.TIME ? Figures.time(e.getValue()) : Figures.value(e.getValue()))
                     .append(" q").append(Math.round(100 * s.heldQuantile().getOrDefault(e.getKey(), 0.5)))
                     .append(moving ? "]" : "");
         }
@@ -140,6 +141,16 @@ final class ScreenPainter {
         return Double.NaN;
     }
 
+    /** The kind of a column of the table, or {@code null} for a name it does not have. */
+    static ColumnKind kindOf(FrameInput in, String column) {
+        for (ColumnInfo c : in.columns()) {
+            if (c.name().equals(column)) {
+                return c.kind();
+            }
+        }
+        return null;
+    }
+
     static String label(java.util.List<String> labels, int code) {
         return code >= 0 && code < labels.size() ? labels.get(code) : "#" + code;
     }
@@ -157,13 +168,16 @@ final class ScreenPainter {
         if (c != null && q != null && c.size() > 0) {
             double x = q.from() + s.crosshair() * (q.to() - q.from());
             int i = c.nearest(x);
-            sb.append(s.displayInput()).append(' ').append(Figures.value(c.x()[i]))
+            boolean time = kindOf(in, s.displayInput()) == ColumnKind.TIME;
+            sb.append(s.displayInput()).append(' ').append(time ? Figures.time(c.x()[i]) : Figures.value(c.x()[i]))
                     .append(": fit ").append(Figures.value(c.fit()[i]));
             if (!Double.isNaN(c.bandLow()[i])) {
                 sb.append("  band ").append(Figures.value(c.bandLow()[i])).append(" to ")
                         .append(Figures.value(c.bandHigh()[i]));
             }
-            sb.append("  width ").append(Figures.value(c.width()[i])).append("  n ").append(c.neighbours()[i]);
+            // The window width is in display-input units: milliseconds for a time input.
+            sb.append("  width ").append(time ? Figures.duration(c.width()[i]) : Figures.value(c.width()[i]))
+                    .append("  n ").append(c.neighbours()[i]);
         } else {
             sb.append("fitting ...");
         }

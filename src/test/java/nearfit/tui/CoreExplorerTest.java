@@ -1,6 +1,7 @@
 package nearfit.tui;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.awt.image.BufferedImage;
@@ -115,6 +116,35 @@ class CoreExplorerTest {
             v.type("n");
             assertTrue(v.row(1).contains("share of T02"), v.row(1));
         }
+    }
+
+    @Test
+    void aTimeDisplayInputShowsDatesOnTheAxisAndADurationAsTheWindowWidth(@TempDir Path dir) throws Exception {
+        Workbench wb = load(dir);
+        try (VirtualScreen v = open(wb)) {
+            // The x picker lists time, then wind_ms.
+            v.type("x").key(KeyType.Enter);
+            assertTrue(v.row(1).contains("power_kw ~ time"), v.row(1));
+            String axis = v.row(35);
+            assertTrue(axis.contains("2026-03-0"), "calendar ticks: " + v.text());
+            assertFalse(v.text().contains("e12") || v.text().contains("e+12"), "no epoch milliseconds: " + v.text());
+            String status = v.row(38);
+            assertTrue(status.matches("time 2026-03-\\d\\d \\d\\d:\\d\\d: fit .*"), status);
+            assertTrue(status.matches(".*  width \\d+(\\.\\d)? (s|min|h|d)  n .*"), status);
+            String strip = v.row(37);
+            int bar = firstBar(strip);
+            assertTrue(bar > 1 && strip.charAt(bar - 1) == ' ', "a space before the bars: " + strip);
+            assertTrue(strip.substring(0, bar).strip().matches("\\d+(\\.\\d)? ?(s|min|h|d)"), strip);
+        }
+    }
+
+    private static int firstBar(String row) {
+        for (int i = 0; i < row.length(); i++) {
+            if (row.charAt(i) >= '\u2581' && row.charAt(i) <= '\u2588') {
+                return i;
+            }
+        }
+        return -1;
     }
 
     @Test
