@@ -148,6 +148,30 @@ class CoreExplorerTest {
     }
 
     @Test
+    void aComparisonWithNoOtherGroupsSaysSoUntilItIsTurnedOff(@TempDir Path dir) throws Exception {
+        Workbench wb = load(dir);
+        try (VirtualScreen v = open(wb)) {
+            v.type("g").key(KeyType.ArrowDown).key(KeyType.Enter).type("n").type("o");
+            // The arrow moves the crosshair and clears the "rows match" note that covers the status line.
+            v.type("/turbine = T01").key(KeyType.Enter).key(KeyType.ArrowRight);
+            String said = "no rows of the other groups under this row condition";
+            assertTrue(v.row(38).contains(said), v.row(38));
+            v.type("o");
+            assertFalse(v.row(38).contains(said), "comparison off: " + v.row(38));
+            assertTrue(v.row(38).contains("wind_ms") && v.row(38).contains("fit"), v.row(38));
+            v.type("o");
+            assertTrue(v.row(38).contains(said), "comparison on again: " + v.row(38));
+            v.type("/").key(KeyType.Backspace);
+            for (int i = 0; i < "turbine = T01".length(); i++) {
+                v.key(KeyType.Backspace);
+            }
+            v.key(KeyType.Enter).key(KeyType.ArrowRight);
+            assertFalse(v.row(38).contains(said), "condition cleared: " + v.row(38));
+            assertTrue(v.explorer.results().failure().isEmpty(), v.explorer.results().failure());
+        }
+    }
+
+    @Test
     void residualsOverTimeUseTheTimeAxisAndGroupsCompareWithTheOthers(@TempDir Path dir) throws Exception {
         Workbench wb = load(dir);
         try (VirtualScreen v = open(wb)) {
