@@ -48,6 +48,21 @@ class ExplorerTest {
     }
 
     @Test
+    void eachPickerMarksOnlyItsOwnCurrentChoiceAsNow() throws Exception {
+        try (VirtualScreen v = VirtualScreen.standard(new ScriptedWorkbench())) {
+            v.type("g").key(KeyType.ArrowDown).key(KeyType.Enter).type("y");
+            String picker = v.text();
+            assertTrue(picker.contains("power_kw  (now)"), picker);
+            assertFalse(picker.contains("turbine  (now)"), "the group column is not the response: " + picker);
+            v.key(KeyType.Escape).type("g");
+            assertTrue(v.text().contains("turbine  (now)"), v.text());
+            assertFalse(v.text().contains("power_kw  (now)"), v.text());
+            v.key(KeyType.Escape).type("x");
+            assertTrue(v.text().contains("wind_ms  (now)"), v.text());
+        }
+    }
+
+    @Test
     void kPromptSetsAnExactKAndRejectsNonsense() throws Exception {
         try (VirtualScreen v = VirtualScreen.standard(new ScriptedWorkbench())) {
             v.type("k").type("42").key(KeyType.Enter);
