@@ -1,8 +1,5 @@
 package nearfit.tui;
 
-import java.util.Map;
-import java.util.TreeMap;
-
 /**
  * Draws one frame from the state, the latest results and the table's facts. Everything numeric shown comes
  * from the results; this class only lays text out.
@@ -67,25 +64,9 @@ final class ScreenPainter {
     }
 
     private static void header(Pen pen, Layout layout, ViewState s, Results r, FrameInput in) {
-        StringBuilder one = new StringBuilder("nearfit  ").append(in.source())
-                .append("  rows ").append(Figures.count(r.rowsUsed())).append(" of ").append(Figures.count(in.totalRows()));
-        if (!s.condition().isEmpty()) {
-            one.append("  where ").append(s.condition());
-        }
-        int notes = in.notes().count();
-        if (notes > 0) {
-            // Short, and before the job states, so that it survives a narrow window.
-            one.append("  (").append(notes).append(notes == 1 ? " load note, L)" : " load notes, L)");
-        }
-        one.append("  |  ").append(tuningState(r));
-        if (!Double.isNaN(r.flagsProgress())) {
-            one.append("  |  flags ").append(Math.round(100 * r.flagsProgress())).append(" %");
-        }
-        if (!Double.isNaN(in.loading())) {
-            one.append("  loading ").append(Math.round(100 * in.loading())).append(" %");
-        }
-        pen.text(0, 0, Figures.fit(one.toString(), layout.width(), pen.look().ascii()), Ink.TITLE);
-        pen.text(0, 1, Figures.fit(model(s, r, in), layout.width(), pen.look().ascii()), Ink.TEXT);
+        boolean ascii = pen.look().ascii();
+        pen.text(0, 0, Header.first(s, r, in, layout.width(), ascii), Ink.TITLE);
+        pen.text(0, 1, Header.second(s, in, layout.width(), ascii), Ink.TEXT);
     }
 
     static String tuningState(Results r) {
@@ -96,38 +77,6 @@ final class ScreenPainter {
             return "best k " + r.tuning().bestK() + ", one-SE k " + r.tuning().oneSeK();
         }
         return "tuning not run";
-    }
-
-    /** The model line: what is fitted and where it is held first, then the estimator's settings. */
-    private static String model(ViewState s, Results r, FrameInput in) {
-        StringBuilder sb = new StringBuilder();
-        sb.append(s.response()).append(" ~ ").append(String.join(" + ", s.inputs()));
-        if (!in.classLabels().isEmpty()) {
-            sb.append("  share of ").append(label(in.classLabels(), s.responseClass()));
-        }
-        sb.append("  k=").append(s.k());
-        Map<String, Double> held = new TreeMap<>(in.heldValues());
-        for (Map.Entry<String, Double> e : held.entrySet()) {
-            boolean moving = e.getKey().equals(s.heldInput());
-            sb.append(moving ? "  [" : "  ").append(e.getKey()).append('=')
-                    .append(kindOf(in, e.getKey()) == ColumnKind.TIME ? Figures.time(e.getValue()) : Figures.value(e.getValue()))
-                    .append(" q").append(Math.round(100 * s.heldQuantile().getOrDefault(e.getKey(), 0.5)))
-                    .append(moving ? "]" : "");
-        }
-        if (s.nearHeldOnly()) {
-            sb.append("  near held only");
-        }
-        if (s.groupColumn() != null) {
-            sb.append("  group ").append(s.groupColumn()).append(' ')
-                    .append(s.group() < 0 ? "all" : label(in.groupLabels(), s.group()))
-                    .append(s.compare() ? " vs others" : "");
-        }
-        if (s.mode() != PlotMode.RESPONSE) {
-            sb.append(s.mode() == PlotMode.RESIDUALS ? "  residuals" : "  residuals over time");
-        }
-        sb.append("  ").append(ChoiceNames.of(s.metric())).append(", weights ").append(ChoiceNames.of(s.weighting()))
-                .append(", scaling ").append(ChoiceNames.of(s.scaling())).append(", band ").append(ChoiceNames.of(s.band()));
-        return sb.toString();
     }
 
     /** The leave-one-out RMSE at k: from the flags when the core gives it, else from the tuning table. */
