@@ -54,13 +54,38 @@ final class ScreenPainter {
     }
 
     private static void tooSmall(Pen pen, Layout layout) {
-        String[] lines = {
-            "nearfit needs a window of at least " + Layout.MIN_WIDTH + "x" + Layout.MIN_HEIGHT + ";",
-            "this one is " + layout.width() + "x" + layout.height() + ". Enlarge it, or press q to quit."
-        };
-        for (int i = 0; i < lines.length; i++) {
-            pen.text(0, layout.height() / 2 - 1 + i, lines[i], Ink.WARNING);
+        String text = "nearfit needs a window of at least " + Layout.MIN_WIDTH + "x" + Layout.MIN_HEIGHT
+                + "; this one is " + layout.width() + "x" + layout.height() + ". Enlarge it, or press q to quit.";
+        java.util.List<String> lines = wrap(text, layout.width());
+        int top = Math.max(0, (layout.height() - lines.size()) / 2);
+        for (int i = 0; i < lines.size(); i++) {
+            pen.text(0, top + i, lines.get(i), Ink.WARNING);
         }
+    }
+
+    /** Words in lines of at most {@code width} characters; a word longer than that is split. */
+    static java.util.List<String> wrap(String text, int width) {
+        java.util.List<String> lines = new java.util.ArrayList<>();
+        StringBuilder line = new StringBuilder();
+        for (String word : text.split(" ")) {
+            while (word.length() > width && width > 0) {
+                if (line.length() > 0) {
+                    lines.add(line.toString());
+                    line.setLength(0);
+                }
+                lines.add(word.substring(0, width));
+                word = word.substring(width);
+            }
+            if (line.length() > 0 && line.length() + 1 + word.length() > width) {
+                lines.add(line.toString());
+                line.setLength(0);
+            }
+            line.append(line.length() > 0 ? " " : "").append(word);
+        }
+        if (line.length() > 0) {
+            lines.add(line.toString());
+        }
+        return lines;
     }
 
     private static void header(Pen pen, Layout layout, ViewState s, Results r, FrameInput in) {

@@ -136,9 +136,22 @@ class ExplorerTest {
     void aWindowBelowTheMinimumShowsAMessageInsteadOfTheLayout() throws Exception {
         try (VirtualScreen v = new VirtualScreen(new ScriptedWorkbench(),
                 ViewState.initial("power_kw", List.of("wind_ms"), 20), 50, 12, new Look(false, true))) {
-            String text = v.text();
+            // The message wraps at the window's width, so words are compared with the line breaks as spaces.
+            String text = String.join(" ", v.text().strip().split("\\s+"));
             assertTrue(text.contains("at least 60x18") && text.contains("this one is 50x12"), text);
             assertFalse(text.contains("k=20"), text);
+        }
+    }
+
+    @Test
+    void theMinimumSizeMessageWrapsSoItAlwaysSaysHowToQuit() throws Exception {
+        for (int[] size : new int[][] {{40, 10}, {20, 8}, {59, 17}}) {
+            try (VirtualScreen v = new VirtualScreen(new ScriptedWorkbench(),
+                    ViewState.initial("power_kw", List.of("wind_ms"), 20), size[0], size[1], new Look(false, true))) {
+                String joined = String.join(" ", v.text().strip().split("\\s+"));
+                assertTrue(joined.contains("Enlarge it, or press q to quit."), size[0] + "x" + size[1] + ": " + v.text());
+                assertTrue(joined.contains("this one is " + size[0] + "x" + size[1]), v.text());
+            }
         }
     }
 
