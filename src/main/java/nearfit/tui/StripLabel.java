@@ -54,8 +54,17 @@ final class StripLabel {
         String[] tries;
         if (time) {
             String d = Figures.duration(value);
-            String tight = d.replace(" ", "");
-            tries = new String[] {d, tight, tight.replaceFirst("\\.\\d", "")};
+            // Then rounded to a whole number of the same unit, then the next larger unit: 25.5 min, 26min, 0.4h.
+            double[] units = {1000, 60_000, 3_600_000, 86_400_000};
+            String[] names = {"s", "min", "h", "d"};
+            int u = 0;
+            while (u + 1 < units.length && !d.endsWith(" " + names[u])) {
+                u++;
+            }
+            String larger = u + 1 < units.length
+                    ? String.format(Locale.ROOT, "%.1f%s", value / units[u + 1], names[u + 1]) : "";
+            tries = new String[] {d, d.replace(" ", ""),
+                String.format(Locale.ROOT, "%.0f%s", value / units[u], names[u]), larger};
         } else {
             String sci = String.format(Locale.ROOT, "%.0e", value).replaceFirst("e([+-])0*(\\d)", "e$1$2")
                     .replace("e+", "e");

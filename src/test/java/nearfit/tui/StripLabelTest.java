@@ -59,6 +59,8 @@ class StripLabelTest {
     void aNarrowMarginGetsATighterSpellingNeverACutOne() {
         assertEquals("2.4h", StripLabel.label(2.4 * 3_600_000, true, 4));
         assertEquals("2h", StripLabel.label(2.4 * 3_600_000, true, 3));
+        assertEquals("26min", StripLabel.label(25.5 * 60_000, true, 5));
+        assertEquals("0.4h", StripLabel.label(25.5 * 60_000, true, 4), "25.5 min in the next larger unit");
         assertEquals("7e6", StripLabel.label(7_415_827, false, 4));
         assertEquals("", StripLabel.label(7_415_827, false, 2), "no room: no label rather than a cut number");
     }
