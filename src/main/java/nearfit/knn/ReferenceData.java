@@ -114,24 +114,30 @@ public final class ReferenceData {
         keptIn[0] = canonicalOrder(kept, in, y, codes, rowIds);
         for (int j = 1; j < d; j++) {
             keptIn[j] = new double[m];
-            double[] src = in[j];
-            double[] dst = keptIn[j];
-            for (int i = 0; i < m; i++) {
-                dst[i] = src[kept[i]];
-            }
         }
         double[] keptY = y == null ? null : new double[m];
         int[] keptC = codes == null ? null : new int[m];
         int[] ids = new int[m];
-        for (int i = 0; i < m; i++) {
-            int r = kept[i];
-            if (keptY != null) {
-                keptY[i] = y[r];
-            } else {
-                keptC[i] = codes[r];
+        int[] order = kept;
+        // scattered reads, so two cores overlap their cache misses; each slot is written once
+        Workers.run(m, Runtime.getRuntime().availableProcessors(), () -> null, (none, c, from, to) -> {
+            for (int j = 1; j < d; j++) {
+                double[] src = in[j];
+                double[] dst = keptIn[j];
+                for (int i = from; i < to; i++) {
+                    dst[i] = src[order[i]];
+                }
             }
-            ids[i] = rowIds == null ? r : rowIds[r];
-        }
+            for (int i = from; i < to; i++) {
+                int r = order[i];
+                if (keptY != null) {
+                    keptY[i] = y[r];
+                } else {
+                    keptC[i] = codes[r];
+                }
+                ids[i] = rowIds == null ? r : rowIds[r];
+            }
+        }, Progress.NONE);
         return new ReferenceData(names.clone(), responseName, keptIn, keptY, keptC, classCount, ids, dropped, n - m);
     }
 

@@ -1,5 +1,7 @@
 package nearfit.plot;
 
+import java.util.Locale;
+
 /**
  * The window-width strip under a scatter: one bar per plot column, as tall as the window width
  * (the distance to the k-th neighbour) at that column's centre x, so sparse stretches of the
@@ -11,6 +13,34 @@ package nearfit.plot;
  */
 public final class WidthStrip {
     private static final int EIGHTHS = 8;
+
+    /** Spells the full-bar width for the margin. */
+    @FunctionalInterface
+    public interface WidthLabel {
+        /**
+         * @param width the width at full bar height, positive
+         * @param room  characters available, at least 1
+         * @return at most {@code room} characters, or "" when the width cannot be spelled in them
+         *     (a cut number would be a wrong one)
+         */
+        String spell(double width, int room);
+    }
+
+    /**
+     * Numbers: three significant digits, then two, then one, then one in e-notation
+     * ({@code 0.0945}, {@code 0.094}, {@code 0.09}, {@code 9e-2}).
+     */
+    public static final WidthLabel NUMBER = (v, room) -> {
+        String sci = String.format(Locale.ROOT, "%.0e", v).replaceFirst("e([+-])0*(\\d)", "e$1$2").replace("e+", "e");
+        String[] tries = {NiceTicks.label(v, fractionDigitsFor(v)), String.format(Locale.ROOT, "%.2g", v),
+            String.format(Locale.ROOT, "%.1g", v), sci};
+        for (String t : tries) {
+            if (t.length() <= room) {
+                return t;
+            }
+        }
+        return "";
+    };
 
     private WidthStrip() {
     }
@@ -25,6 +55,16 @@ public final class WidthStrip {
      * @return the strip
      */
     public static CellGrid render(PlotFrame frame, int width, double[] xs, double[] widths, int rows, CanvasKind kind) {
+        return render(frame, width, xs, widths, rows, kind, NUMBER);
+    }
+
+    /**
+     * As {@link #render(PlotFrame, int, double[], double[], int, CanvasKind)}, with the margin label
+     * spelled by {@code label}; the label always ends one blank cell before the first bar, and is
+     * left out when it cannot be spelled in the margin.
+     */
+    public static CellGrid render(PlotFrame frame, int width, double[] xs, double[] widths, int rows, CanvasKind kind,
+                                  WidthLabel label) {
         if (xs.length != widths.length) {
             throw new IllegalArgumentException(xs.length + " x values but " + widths.length + " widths");
         }
@@ -41,8 +81,11 @@ public final class WidthStrip {
             for (int c = 0; c < atColumn.length; c++) {
                 bar(g, frame.col0() + c, rows, atColumn[c] / max, kind);
             }
-            String label = NiceTicks.label(max, fractionDigitsFor(max));
-            g.text(Math.max(0, frame.col0() - 1 - label.length()), 0, label, Role.TICK_LABEL);
+            int room = frame.col0() - 1;
+            String text = room > 0 ? label.spell(max, room) : "";
+            if (!text.isEmpty() && text.length() <= room) {
+                g.text(room - text.length(), 0, text, Role.TICK_LABEL);
+            }
         }
         return g.build();
     }

@@ -27,7 +27,6 @@ import nearfit.plot.ScatterComposer;
 import nearfit.plot.Scene;
 import nearfit.plot.TuningChart;
 import nearfit.plot.TuningScene;
-import nearfit.plot.WidthStrip;
 import nearfit.table.CategoryColumn;
 import nearfit.table.Column;
 import nearfit.table.CsvLoader;
@@ -230,7 +229,8 @@ public final class CoreWorkbench implements Workbench {
         Cells strip;
         CurveResult c = scene.curve();
         if (c != null && scene.mode() != PlotMode.RESIDUALS_OVER_TIME && !allNaN(c.width())) {
-            strip = new GridCells(WidthStrip.render(composed.frame(), width, c.x(), c.width(), 1, kind));
+            boolean time = table.column(scene.request().displayInput()).type() == nearfit.table.ColumnType.TIME;
+            strip = new GridCells(StripLabel.strip(composed.frame(), width, c.x(), c.width(), time, kind));
         } else {
             strip = new GridCells(nearfit.plot.CellGrid.builder(width, 1).build());
         }

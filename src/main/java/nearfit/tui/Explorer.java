@@ -55,6 +55,8 @@ public final class Explorer implements AutoCloseable {
      */
     private Object curveDoneKey;
     private boolean submitAfterFrame;
+    /** The kind of job whose failure the results show, or {@code null}: it goes when that job runs again. */
+    private Jobs.Kind failedKind;
     private long curveAskedAt;
     private java.util.function.BooleanSupplier screenStopped = () -> false;
     /** Frames are sent whole until this {@link System#nanoTime} after a resize. */
@@ -259,6 +261,7 @@ public final class Explorer implements AutoCloseable {
         }
         if (d.failure() != null) {
             results = results.withFailure(oneLine(d.failure()));
+            failedKind = d.kind();
             return;
         }
         switch (d.kind()) {
@@ -286,6 +289,7 @@ public final class Explorer implements AutoCloseable {
                 state = state.edit().condition(c.condition()).zoom(Double.NaN, Double.NaN).markedRow(-1)
                         .message(c.condition().isEmpty() ? "all rows" : Figures.count(rows) + " rows match").build();
                 results = results.withRowsUsed(rows).withFailure("");
+                failedKind = null;
             } catch (NearfitException e) {
                 state = state.edit().message(e.getMessage()).build();
             }
@@ -307,6 +311,7 @@ public final class Explorer implements AutoCloseable {
             generation++;
             results = results.withCurve(results.curve(), 0);
             curveAskedAt = System.nanoTime();
+            forgetFailureOf(Jobs.Kind.CURVE);
             jobs.start(Jobs.Kind.CURVE, generation, c -> workbench.curve(model, request, c));
         }
         List<Object> fk = java.util.Arrays.asList(model, state.groupColumn());
@@ -325,6 +330,7 @@ public final class Explorer implements AutoCloseable {
             // then redraws without recomposing the plot.
             results = results.withFlags(results.flags(), 0);
             String group = state.groupColumn();
+            forgetFailureOf(Jobs.Kind.FLAGS);
             jobs.start(Jobs.Kind.FLAGS, generation, c -> workbench.flags(model, group, c));
         }
         ModelSettings anyK = model.withK(1);
@@ -332,7 +338,16 @@ public final class Explorer implements AutoCloseable {
             tuningKey = anyK;
             generation++;
             results = results.withTuning(null, 0);
+            forgetFailureOf(Jobs.Kind.TUNING);
             jobs.start(Jobs.Kind.TUNING, generation, c -> workbench.tune(model, c));
+        }
+    }
+
+    /** A failure is shown until the job that failed runs again, for settings the user has since changed. */
+    private void forgetFailureOf(Jobs.Kind kind) {
+        if (failedKind == kind) {
+            results = results.withFailure("");
+            failedKind = null;
         }
     }
 

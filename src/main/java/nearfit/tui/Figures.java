@@ -23,6 +23,33 @@ final class Figures {
         return String.format(Locale.ROOT, "%." + decimals + "f", v);
     }
 
+    /** ISO 8601 date and time to the minute, UTC, with a space for the T (ISO 8601 allows it by agreement). */
+    private static final java.time.format.DateTimeFormatter MINUTES =
+            java.time.format.DateTimeFormatter.ofPattern("uuuu-MM-dd HH:mm", Locale.ROOT).withZone(java.time.ZoneOffset.UTC);
+
+    /** Epoch milliseconds as a UTC date and time to the minute, such as {@code 2025-01-15 06:00}; "-" for NaN. */
+    static String time(double epochMillis) {
+        if (!Double.isFinite(epochMillis)) {
+            return "-";
+        }
+        return MINUTES.format(java.time.Instant.ofEpochMilli(Math.round(epochMillis)));
+    }
+
+    /**
+     * A span of milliseconds in the largest unit that keeps it at or above 1 (s, min, h, d), such as
+     * {@code 3.2 h} or {@code 2.1 d}; one decimal below 100 of the unit, none above. "-" for NaN.
+     */
+    static String duration(double millis) {
+        if (!Double.isFinite(millis)) {
+            return "-";
+        }
+        double a = Math.abs(millis);
+        double unit = a >= 86_400_000 ? 86_400_000 : a >= 3_600_000 ? 3_600_000 : a >= 60_000 ? 60_000 : 1000;
+        String name = unit == 86_400_000 ? "d" : unit == 3_600_000 ? "h" : unit == 60_000 ? "min" : "s";
+        double v = millis / unit;
+        return String.format(Locale.ROOT, Math.abs(v) >= 100 ? "%.0f %s" : "%.1f %s", v, name);
+    }
+
     /** A count with thousands separated by commas. */
     static String count(long n) {
         return String.format(Locale.ROOT, "%,d", n);

@@ -187,8 +187,12 @@ public final class KeyPress {
 
     private static Step picker(ViewState s, KeyStroke key, KeyContext cx) {
         List<String> options = Pickers.options(s.ask(), s, cx.columns());
-        boolean choose = key.getKeyType() == KeyType.Enter
-                || (key.getKeyType() == KeyType.Character && key.getCharacter() == ' ');
+        boolean enter = key.getKeyType() == KeyType.Enter;
+        if (enter && s.ask() == Ask.INPUTS) {
+            // Space toggles inputs one by one; Enter only closes, keeping what was chosen.
+            return Step.of(s.edit().close().build());
+        }
+        boolean choose = enter || (key.getKeyType() == KeyType.Character && key.getCharacter() == ' ');
         if (!choose) {
             return panel(s, key, cx, options.size());
         }

@@ -36,11 +36,20 @@ final class Panels {
         List<String> out = new ArrayList<>();
         for (String name : Pickers.options(s.ask(), s, in.columns())) {
             String mark = s.ask() == Ask.INPUTS ? (s.inputs().contains(name) ? "[x] " : "[ ] ") : "";
-            String now = name.equals(s.displayInput()) || name.equals(s.response()) || name.equals(s.groupColumn())
-                    || name.equals(s.heldInput()) ? "  (now)" : "";
-            out.add(mark + name + now);
+            out.add(mark + name + (name.equals(current(s)) ? "  (now)" : ""));
         }
         return out;
+    }
+
+    /** The current choice of what the open picker asks for: only that line is marked "(now)". */
+    private static String current(ViewState s) {
+        return switch (s.ask()) {
+            case DISPLAY_INPUT -> s.displayInput();
+            case RESPONSE -> s.response();
+            case GROUP -> s.groupColumn() == null ? Pickers.NO_GROUP : s.groupColumn();
+            case HELD_INPUT -> s.heldInput();
+            default -> null;
+        };
     }
 
     private static List<String> exportLines() {

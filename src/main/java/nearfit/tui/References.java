@@ -126,6 +126,11 @@ final class References {
         RowSet used = rows(m.condition());
         if (groupColumn != null && group >= 0) {
             used = without(used, (CategoryColumn) table.column(groupColumn), group);
+            if (used.size() == 0) {
+                // Said here, since the engine would only say that there are no rows at all.
+                throw new nearfit.table.NearfitException("no rows of the other groups"
+                        + (m.condition().isBlank() ? " to compare with" : " under this row condition"));
+            }
         }
         int d = m.inputs().size();
         String[] names = m.inputs().toArray(new String[0]);

@@ -64,6 +64,10 @@ final class ScenePoints {
         if (s.mode() == PlotMode.RESIDUALS_OVER_TIME) {
             b.timeAxis();
         } else {
+            if (table.column(s.request().displayInput()).type() == nearfit.table.ColumnType.TIME) {
+                // A time display input gets calendar ticks, as the residuals over time do.
+                b.timeAxis();
+            }
             b.xRange(s.request().from(), s.request().to());
         }
         if (!Double.isNaN(p.yLow())) {

@@ -1,8 +1,5 @@
 package nearfit.tui;
 
-import java.util.Map;
-import java.util.TreeMap;
-
 /**
  * Draws one frame from the state, the latest results and the table's facts. Everything numeric shown comes
  * from the results; this class only lays text out.
@@ -57,35 +54,44 @@ final class ScreenPainter {
     }
 
     private static void tooSmall(Pen pen, Layout layout) {
-        String[] lines = {
-            "nearfit needs a window of at least " + Layout.MIN_WIDTH + "x" + Layout.MIN_HEIGHT + ";",
-            "this one is " + layout.width() + "x" + layout.height() + ". Enlarge it, or press q to quit."
-        };
-        for (int i = 0; i < lines.length; i++) {
-            pen.text(0, layout.height() / 2 - 1 + i, lines[i], Ink.WARNING);
+        String text = "nearfit needs a window of at least " + Layout.MIN_WIDTH + "x" + Layout.MIN_HEIGHT
+                + "; this one is " + layout.width() + "x" + layout.height() + ". Enlarge it, or press q to quit.";
+        java.util.List<String> lines = wrap(text, layout.width());
+        int top = Math.max(0, (layout.height() - lines.size()) / 2);
+        for (int i = 0; i < lines.size(); i++) {
+            pen.text(0, top + i, lines.get(i), Ink.WARNING);
         }
     }
 
+    /** Words in lines of at most {@code width} characters; a word longer than that is split. */
+    static java.util.List<String> wrap(String text, int width) {
+        java.util.List<String> lines = new java.util.ArrayList<>();
+        StringBuilder line = new StringBuilder();
+        for (String word : text.split(" ")) {
+            while (word.length() > width && width > 0) {
+                if (line.length() > 0) {
+                    lines.add(line.toString());
+                    line.setLength(0);
+                }
+                lines.add(word.substring(0, width));
+                word = word.substring(width);
+            }
+            if (line.length() > 0 && line.length() + 1 + word.length() > width) {
+                lines.add(line.toString());
+                line.setLength(0);
+            }
+            line.append(line.length() > 0 ? " " : "").append(word);
+        }
+        if (line.length() > 0) {
+            lines.add(line.toString());
+        }
+        return lines;
+    }
+
     private static void header(Pen pen, Layout layout, ViewState s, Results r, FrameInput in) {
-        StringBuilder one = new StringBuilder("nearfit  ").append(in.source())
-                .append("  rows ").append(Figures.count(r.rowsUsed())).append(" of ").append(Figures.count(in.totalRows()));
-        if (!s.condition().isEmpty()) {
-            one.append("  where ").append(s.condition());
-        }
-        int notes = in.notes().count();
-        if (notes > 0) {
-            // Short, and before the job states, so that it survives a narrow window.
-            one.append("  (").append(notes).append(notes == 1 ? " load note, L)" : " load notes, L)");
-        }
-        one.append("  |  ").append(tuningState(r));
-        if (!Double.isNaN(r.flagsProgress())) {
-            one.append("  |  flags ").append(Math.round(100 * r.flagsProgress())).append(" %");
-        }
-        if (!Double.isNaN(in.loading())) {
-            one.append("  loading ").append(Math.round(100 * in.loading())).append(" %");
-        }
-        pen.text(0, 0, Figures.fit(one.toString(), layout.width(), pen.look().ascii()), Ink.TITLE);
-        pen.text(0, 1, Figures.fit(model(s, r, in), layout.width(), pen.look().ascii()), Ink.TEXT);
+        boolean ascii = pen.look().ascii();
+        pen.text(0, 0, Header.first(s, r, in, layout.width(), ascii), Ink.TITLE);
+        pen.text(0, 1, Header.second(s, in, layout.width(), ascii), Ink.TEXT);
     }
 
     static String tuningState(Results r) {
@@ -98,37 +104,6 @@ final class ScreenPainter {
         return "tuning not run";
     }
 
-    /** The model line: what is fitted and where it is held first, then the estimator's settings. */
-    private static String model(ViewState s, Results r, FrameInput in) {
-        StringBuilder sb = new StringBuilder();
-        sb.append(s.response()).append(" ~ ").append(String.join(" + ", s.inputs()));
-        if (!in.classLabels().isEmpty()) {
-            sb.append("  share of ").append(label(in.classLabels(), s.responseClass()));
-        }
-        sb.append("  k=").append(s.k());
-        Map<String, Double> held = new TreeMap<>(in.heldValues());
-        for (Map.Entry<String, Double> e : held.entrySet()) {
-            boolean moving = e.getKey().equals(s.heldInput());
-            sb.append(moving ? "  [" : "  ").append(e.getKey()).append('=').append(Figures.value(e.getValue()))
-                    .append(" q").append(Math.round(100 * s.heldQuantile().getOrDefault(e.getKey(), 0.5)))
-                    .append(moving ? "]" : "");
-        }
-        if (s.nearHeldOnly()) {
-            sb.append("  near held only");
-        }
-        if (s.groupColumn() != null) {
-            sb.append("  group ").append(s.groupColumn()).append(' ')
-                    .append(s.group() < 0 ? "all" : label(in.groupLabels(), s.group()))
-                    .append(s.compare() ? " vs others" : "");
-        }
-        if (s.mode() != PlotMode.RESPONSE) {
-            sb.append(s.mode() == PlotMode.RESIDUALS ? "  residuals" : "  residuals over time");
-        }
-        sb.append("  ").append(ChoiceNames.of(s.metric())).append(", weights ").append(ChoiceNames.of(s.weighting()))
-                .append(", scaling ").append(ChoiceNames.of(s.scaling())).append(", band ").append(ChoiceNames.of(s.band()));
-        return sb.toString();
-    }
-
     /** The leave-one-out RMSE at k: from the flags when the core gives it, else from the tuning table. */
     static double looRmse(ViewState s, Results r) {
         if (r.flags() != null && !Double.isNaN(r.flags().looRmse())) {
@@ -138,6 +113,16 @@ final class ScreenPainter {
             return TuningCriterion.at(r.tuning(), s.k());
         }
         return Double.NaN;
+    }
+
+    /** The kind of a column of the table, or {@code null} for a name it does not have. */
+    static ColumnKind kindOf(FrameInput in, String column) {
+        for (ColumnInfo c : in.columns()) {
+            if (c.name().equals(column)) {
+                return c.kind();
+            }
+        }
+        return null;
     }
 
     static String label(java.util.List<String> labels, int code) {
@@ -157,13 +142,16 @@ final class ScreenPainter {
         if (c != null && q != null && c.size() > 0) {
             double x = q.from() + s.crosshair() * (q.to() - q.from());
             int i = c.nearest(x);
-            sb.append(s.displayInput()).append(' ').append(Figures.value(c.x()[i]))
+            boolean time = kindOf(in, s.displayInput()) == ColumnKind.TIME;
+            sb.append(s.displayInput()).append(' ').append(time ? Figures.time(c.x()[i]) : Figures.value(c.x()[i]))
                     .append(": fit ").append(Figures.value(c.fit()[i]));
             if (!Double.isNaN(c.bandLow()[i])) {
                 sb.append("  band ").append(Figures.value(c.bandLow()[i])).append(" to ")
                         .append(Figures.value(c.bandHigh()[i]));
             }
-            sb.append("  width ").append(Figures.value(c.width()[i])).append("  n ").append(c.neighbours()[i]);
+            // The window width is in display-input units: milliseconds for a time input.
+            sb.append("  width ").append(time ? Figures.duration(c.width()[i]) : Figures.value(c.width()[i]))
+                    .append("  n ").append(c.neighbours()[i]);
         } else {
             sb.append("fitting ...");
         }

@@ -64,6 +64,7 @@ public final class TerminalSession {
         TerminalSession session = new TerminalSession(screen, look);
         Thread hook = new Thread(session::stop, "nearfit-restore-terminal");
         Runtime.getRuntime().addShutdownHook(hook);
+        TermSignal term = TermSignal.install(session::stop);
         String failure = null;
         int status;
         try {
@@ -89,6 +90,7 @@ public final class TerminalSession {
             Thread.currentThread().interrupt();
             status = Explorer.EXIT_INTERRUPTED;
         } finally {
+            term.restore();
             session.stop();
             try {
                 Runtime.getRuntime().removeShutdownHook(hook);

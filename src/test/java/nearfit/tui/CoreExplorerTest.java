@@ -1,6 +1,7 @@
 package nearfit.tui;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.awt.image.BufferedImage;
@@ -114,6 +115,59 @@ class CoreExplorerTest {
             assertTrue(v.row(1).contains("share of T01"), v.row(1));
             v.type("n");
             assertTrue(v.row(1).contains("share of T02"), v.row(1));
+        }
+    }
+
+    @Test
+    void aTimeDisplayInputShowsDatesOnTheAxisAndADurationAsTheWindowWidth(@TempDir Path dir) throws Exception {
+        Workbench wb = load(dir);
+        try (VirtualScreen v = open(wb)) {
+            // The x picker lists time, then wind_ms.
+            v.type("x").key(KeyType.Enter);
+            assertTrue(v.row(1).contains("power_kw ~ time"), v.row(1));
+            String axis = v.row(35);
+            assertTrue(axis.contains("2026-03-0"), "calendar ticks: " + v.text());
+            assertFalse(v.text().contains("e12") || v.text().contains("e+12"), "no epoch milliseconds: " + v.text());
+            String status = v.row(38);
+            assertTrue(status.matches("time 2026-03-\\d\\d \\d\\d:\\d\\d: fit .*"), status);
+            assertTrue(status.matches(".*  width \\d+(\\.\\d)? (s|min|h|d)  n .*"), status);
+            String strip = v.row(37);
+            int bar = firstBar(strip);
+            assertTrue(bar > 1 && strip.charAt(bar - 1) == ' ', "a space before the bars: " + strip);
+            assertTrue(strip.substring(0, bar).strip().matches("\\d+(\\.\\d)? ?(s|min|h|d)"), strip);
+        }
+    }
+
+    private static int firstBar(String row) {
+        for (int i = 0; i < row.length(); i++) {
+            if (row.charAt(i) >= '\u2581' && row.charAt(i) <= '\u2588') {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    @Test
+    void aComparisonWithNoOtherGroupsSaysSoUntilItIsTurnedOff(@TempDir Path dir) throws Exception {
+        Workbench wb = load(dir);
+        try (VirtualScreen v = open(wb)) {
+            v.type("g").key(KeyType.ArrowDown).key(KeyType.Enter).type("n").type("o");
+            // The arrow moves the crosshair and clears the "rows match" note that covers the status line.
+            v.type("/turbine = T01").key(KeyType.Enter).key(KeyType.ArrowRight);
+            String said = "no rows of the other groups under this row condition";
+            assertTrue(v.row(38).contains(said), v.row(38));
+            v.type("o");
+            assertFalse(v.row(38).contains(said), "comparison off: " + v.row(38));
+            assertTrue(v.row(38).contains("wind_ms") && v.row(38).contains("fit"), v.row(38));
+            v.type("o");
+            assertTrue(v.row(38).contains(said), "comparison on again: " + v.row(38));
+            v.type("/").key(KeyType.Backspace);
+            for (int i = 0; i < "turbine = T01".length(); i++) {
+                v.key(KeyType.Backspace);
+            }
+            v.key(KeyType.Enter).key(KeyType.ArrowRight);
+            assertFalse(v.row(38).contains(said), "condition cleared: " + v.row(38));
+            assertTrue(v.explorer.results().failure().isEmpty(), v.explorer.results().failure());
         }
     }
 

@@ -44,7 +44,7 @@ class ExplorerSignalTest {
 
     private void close() throws Exception {
         if (session != null) {
-            new ProcessBuilder("tmux", "kill-session", "-t", session).start().waitFor(10, TimeUnit.SECONDS);
+            new ProcessBuilder(TmuxSocket.command("kill-session", "-t", session)).start().waitFor(10, TimeUnit.SECONDS);
         }
     }
 
@@ -213,7 +213,7 @@ class ExplorerSignalTest {
         long end = System.currentTimeMillis() + WAIT_MILLIS;
         String last = "";
         while (System.currentTimeMillis() < end) {
-            Process p = new ProcessBuilder("tmux", "capture-pane", "-p", "-J", "-t", session).redirectErrorStream(true).start();
+            Process p = new ProcessBuilder(TmuxSocket.command("capture-pane", "-p", "-J", "-t", session)).redirectErrorStream(true).start();
             last = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
             p.waitFor(10, TimeUnit.SECONDS);
             if (ok.test(last)) {
@@ -225,8 +225,7 @@ class ExplorerSignalTest {
     }
 
     private static void tmux(String... args) throws IOException, InterruptedException {
-        List<String> cmd = new ArrayList<>(List.of("tmux"));
-        cmd.addAll(List.of(args));
+        List<String> cmd = TmuxSocket.command(args);
         Process p = new ProcessBuilder(cmd).redirectErrorStream(true).start();
         String out = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
         assertEquals(0, p.waitFor(), "tmux " + String.join(" ", args) + ": " + out);

@@ -37,6 +37,32 @@ class ExplorerTest {
     }
 
     @Test
+    void enterInTheInputsPickerClosesItWithTheInputsSpaceAdded() throws Exception {
+        try (VirtualScreen v = VirtualScreen.standard(new ScriptedWorkbench())) {
+            v.type("i").key(KeyType.ArrowDown).key(KeyType.ArrowDown).type(" ");
+            assertTrue(v.row(1).contains("power_kw ~ wind_ms + air_temp_c"), v.row(1));
+            v.key(KeyType.Enter);
+            assertTrue(v.row(1).contains("power_kw ~ wind_ms + air_temp_c"), v.row(1));
+            assertFalse(v.text().contains("choose the model inputs"), "the picker is closed");
+        }
+    }
+
+    @Test
+    void eachPickerMarksOnlyItsOwnCurrentChoiceAsNow() throws Exception {
+        try (VirtualScreen v = VirtualScreen.standard(new ScriptedWorkbench())) {
+            v.type("g").key(KeyType.ArrowDown).key(KeyType.Enter).type("y");
+            String picker = v.text();
+            assertTrue(picker.contains("power_kw  (now)"), picker);
+            assertFalse(picker.contains("turbine  (now)"), "the group column is not the response: " + picker);
+            v.key(KeyType.Escape).type("g");
+            assertTrue(v.text().contains("turbine  (now)"), v.text());
+            assertFalse(v.text().contains("power_kw  (now)"), v.text());
+            v.key(KeyType.Escape).type("x");
+            assertTrue(v.text().contains("wind_ms  (now)"), v.text());
+        }
+    }
+
+    @Test
     void kPromptSetsAnExactKAndRejectsNonsense() throws Exception {
         try (VirtualScreen v = VirtualScreen.standard(new ScriptedWorkbench())) {
             v.type("k").type("42").key(KeyType.Enter);
@@ -110,9 +136,22 @@ class ExplorerTest {
     void aWindowBelowTheMinimumShowsAMessageInsteadOfTheLayout() throws Exception {
         try (VirtualScreen v = new VirtualScreen(new ScriptedWorkbench(),
                 ViewState.initial("power_kw", List.of("wind_ms"), 20), 50, 12, new Look(false, true))) {
-            String text = v.text();
+            // The message wraps at the window's width, so words are compared with the line breaks as spaces.
+            String text = String.join(" ", v.text().strip().split("\\s+"));
             assertTrue(text.contains("at least 60x18") && text.contains("this one is 50x12"), text);
             assertFalse(text.contains("k=20"), text);
+        }
+    }
+
+    @Test
+    void theMinimumSizeMessageWrapsSoItAlwaysSaysHowToQuit() throws Exception {
+        for (int[] size : new int[][] {{40, 10}, {20, 8}, {59, 17}}) {
+            try (VirtualScreen v = new VirtualScreen(new ScriptedWorkbench(),
+                    ViewState.initial("power_kw", List.of("wind_ms"), 20), size[0], size[1], new Look(false, true))) {
+                String joined = String.join(" ", v.text().strip().split("\\s+"));
+                assertTrue(joined.contains("Enlarge it, or press q to quit."), size[0] + "x" + size[1] + ": " + v.text());
+                assertTrue(joined.contains("this one is " + size[0] + "x" + size[1]), v.text());
+            }
         }
     }
 

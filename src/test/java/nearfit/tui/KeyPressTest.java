@@ -73,6 +73,19 @@ class KeyPressTest {
     }
 
     @Test
+    void enterClosesTheInputsPickerKeepingWhatSpaceAdded() {
+        ViewState s = press(ViewState.initial("power_kw", List.of("wind_ms"), 20), 'i').state();
+        // Options: time, wind_ms, air_temp_c; air_temp_c is line 2.
+        s = KeyPress.next(s, new KeyStroke(KeyType.ArrowDown), cx).state();
+        s = KeyPress.next(s, new KeyStroke(KeyType.ArrowDown), cx).state();
+        s = KeyPress.next(s, ch(' '), cx).state();
+        assertEquals(List.of("wind_ms", "air_temp_c"), s.inputs());
+        s = KeyPress.next(s, new KeyStroke(KeyType.Enter), cx).state();
+        assertEquals(List.of("wind_ms", "air_temp_c"), s.inputs(), "Enter keeps the inputs chosen");
+        assertEquals(Overlay.NONE, s.overlay(), "Enter closes the picker");
+    }
+
+    @Test
     void theLastInputCannotBeRemoved() {
         assertEquals(List.of("a"), KeyPress.toggle(List.of("a"), "a"));
     }

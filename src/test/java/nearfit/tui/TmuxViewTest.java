@@ -62,7 +62,7 @@ class TmuxViewTest {
             assertTrue(after.contains("NEARFIT_EXIT=0"), after);
             assertFalse(hasBraille(after), "the explorer's screen is gone after quit: " + after);
         } finally {
-            new ProcessBuilder("tmux", "kill-session", "-t", session).start().waitFor(10, TimeUnit.SECONDS);
+            new ProcessBuilder(TmuxSocket.command("kill-session", "-t", session)).start().waitFor(10, TimeUnit.SECONDS);
         }
     }
 
@@ -85,7 +85,7 @@ class TmuxViewTest {
             new ProcessBuilder("kill", "-TERM", pid).start().waitFor(10, TimeUnit.SECONDS);
             waitFor(session, s -> s.contains("NEARFIT_EXIT=143 SAME_TTY=yes"), "status 143 after SIGTERM");
         } finally {
-            new ProcessBuilder("tmux", "kill-session", "-t", session).start().waitFor(10, TimeUnit.SECONDS);
+            new ProcessBuilder(TmuxSocket.command("kill-session", "-t", session)).start().waitFor(10, TimeUnit.SECONDS);
         }
     }
 
@@ -100,7 +100,7 @@ class TmuxViewTest {
 
     /** The java process started under the session's shell: pane shell, then sh, then java. */
     private static String javaPidUnder(String session) throws Exception {
-        Process p = new ProcessBuilder("tmux", "list-panes", "-t", session, "-F", "#{pane_pid}").start();
+        Process p = new ProcessBuilder(TmuxSocket.command("list-panes", "-t", session, "-F", "#{pane_pid}")).start();
         String pid = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8).strip();
         p.waitFor();
         for (int depth = 0; depth < 3; depth++) {
@@ -190,16 +190,14 @@ class TmuxViewTest {
     }
 
     private static String capture(String session) throws IOException, InterruptedException {
-        Process p = new ProcessBuilder("tmux", "capture-pane", "-p", "-t", session).redirectErrorStream(true).start();
+        Process p = new ProcessBuilder(TmuxSocket.command("capture-pane", "-p", "-t", session)).redirectErrorStream(true).start();
         String out = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
         p.waitFor(10, TimeUnit.SECONDS);
         return out;
     }
 
     private static void tmux(String... args) throws IOException, InterruptedException {
-        List<String> cmd = new ArrayList<>();
-        cmd.add("tmux");
-        cmd.addAll(List.of(args));
+        List<String> cmd = TmuxSocket.command(args);
         Process p = new ProcessBuilder(cmd).redirectErrorStream(true).start();
         String out = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
         assertEquals(0, p.waitFor(), "tmux " + String.join(" ", args) + ": " + out);
