@@ -63,7 +63,9 @@ final class BlockPipe implements AutoCloseable {
                     return;
                 }
             }
-        } catch (IOException ex) {
+        } catch (IOException | RuntimeException | Error ex) {
+            // Every failure goes to the reader, or it would wait for a block forever (an out-of-memory
+            // error here once hung a gzip load instead of ending it with one line).
             try {
                 queue.put(ex);
             } catch (InterruptedException ie) {
@@ -101,6 +103,14 @@ final class BlockPipe implements AutoCloseable {
                         throw new java.io.InterruptedIOException("interrupted");
                     }
                     if (next instanceof IOException ex) {
+                        done = true;
+                        throw ex;
+                    }
+                    if (next instanceof RuntimeException ex) {
+                        done = true;
+                        throw ex;
+                    }
+                    if (next instanceof Error ex) {
                         done = true;
                         throw ex;
                     }

@@ -24,9 +24,12 @@ public record LoadNotes(LoadReport report, List<ColumnGaps> columns) {
         columns = List.copyOf(columns);
     }
 
-    /** One note per column with blank cells, per column with bad cells, and one for ragged rows. */
+    /**
+     * One note per loader warning about the file (it grew, was touched or deleted while read), one per
+     * column with blank cells, per column with bad cells, and one for ragged rows.
+     */
     public int count() {
-        int n = report.raggedRows() > 0 ? 1 : 0;
+        int n = report.warnings().size() + (report.raggedRows() > 0 ? 1 : 0);
         for (ColumnGaps c : columns) {
             n += (c.blank() > 0 ? 1 : 0) + (c.bad() > 0 ? 1 : 0);
         }

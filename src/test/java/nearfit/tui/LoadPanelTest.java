@@ -95,6 +95,18 @@ class LoadPanelTest {
     }
 
     @Test
+    void eachLoadWarningIsOneMoreNoteInTheCountAndThePanelsTitle() throws Exception {
+        LoadNotes notes = CoreWorkbench.open(plantedLog(), "planted.csv", JobControl.NONE).loadNotes();
+        LoadNotes warned = new LoadNotes(notes.report().withWarning(
+                "planted.csv: was modified while it was read (same size, 2400 bytes); if it was rewritten, load it again"),
+                notes.columns());
+        assertEquals(5, notes.count());
+        // The header's "(N load notes, L)" marker is ScreenPainter's print of this count.
+        assertEquals(6, warned.count());
+        assertTrue(LoadPanel.title(warned).startsWith("load report: 6 notes"), LoadPanel.title(warned));
+    }
+
+    @Test
     void aCleanFileHasNoMarkerAndThePanelSaysSo() throws Exception {
         Path csv = dir.resolve("clean.csv");
         StringBuilder sb = new StringBuilder("wind_ms,power_kw\n");
