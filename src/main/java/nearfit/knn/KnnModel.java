@@ -1,5 +1,6 @@
 package nearfit.knn;
 
+import java.util.function.IntConsumer;
 import nearfit.table.NearfitException;
 
 /**
@@ -162,23 +163,8 @@ public final class KnnModel {
      */
     public Estimates estimateAll(double[][] columns, Progress progress) {
         requireNumeric();
-        int n = columns[0].length;
-        int d = data.dimensions();
-        double[] q = transformAll(columns);
-        int[] order = QueryOrder.of(q, d, n);
-        Estimates out = Estimates.ofSize(n);
-        Workers.run(n, settings.threads(), () -> new Object[] {searcher(), new double[d]}, (sc, c, from, to) -> {
-            Searcher s = (Searcher) sc[0];
-            double[] p = (double[]) sc[1];
-            for (int r = from; r < to; r++) {
-                int i = order[r];
-                if (!point(q, i, p)) {
-                    markMissing(out, i);
-                } else {
-                    s.estimateAt(p, -1, out, i);
-                }
-            }
-        }, progress);
+        Estimates out = Estimates.ofSize(columns[0].length);
+        forEachPoint(columns, progress, (s, p, i) -> s.estimateAt(p, -1, out, i), i -> markMissing(out, i));
         return out;
     }
 
@@ -188,25 +174,41 @@ public final class KnnModel {
      */
     public ClassVotes voteAll(double[][] columns, Progress progress) {
         requireCategory();
+        ClassVotes out = ClassVotes.ofSize(columns[0].length);
+        forEachPoint(columns, progress, (s, p, i) -> s.voteAt(p, out, i), i -> {
+            out.winner()[i] = -1;
+            out.share()[i] = Double.NaN;
+        });
+        return out;
+    }
+
+    /** The work at one point: scaled coordinates p of point i, with the thread's searcher. */
+    private interface PointWork {
+        void at(Searcher s, double[] p, int i);
+    }
+
+    /**
+     * Runs {@code work} at every point with all coordinates present, {@code missing} at the others,
+     * in Morton order of the points on {@link KnnSettings#threads()} threads; each point writes only
+     * its own slots.
+     */
+    private void forEachPoint(double[][] columns, Progress progress, PointWork work, IntConsumer missing) {
         int n = columns[0].length;
         int d = data.dimensions();
         double[] q = transformAll(columns);
         int[] order = QueryOrder.of(q, d, n);
-        ClassVotes out = ClassVotes.ofSize(n);
         Workers.run(n, settings.threads(), () -> new Object[] {searcher(), new double[d]}, (sc, c, from, to) -> {
             Searcher s = (Searcher) sc[0];
             double[] p = (double[]) sc[1];
             for (int r = from; r < to; r++) {
                 int i = order[r];
                 if (!point(q, i, p)) {
-                    out.winner()[i] = -1;
-                    out.share()[i] = Double.NaN;
+                    missing.accept(i);
                 } else {
-                    s.voteAt(p, out, i);
+                    work.at(s, p, i);
                 }
             }
         }, progress);
-        return out;
     }
 
     /**
