@@ -161,12 +161,15 @@ public final class ReferenceData {
         for (int i = 0; i < m; i++) {
             top[i] = (int) (RadixSort.sortableBits(x0[kept[i]]) >>> 32); // unsigned order of the value
         }
-        int[] perm = RadixSort.order32(top); // top sorted along; equal keys stay in index order
-        for (int i = 0; i < m; i++) {
-            order[i] = kept[perm[i]];
-            sorted[i] = x0[order[i]] + 0.0;
-        }
-        perm = null;
+        int[] sortedRows = RadixSort.order32(top); // top sorted along; equal keys stay in index order
+        // scattered reads, so two cores overlap their cache misses; each slot is written once
+        Workers.run(m, Runtime.getRuntime().availableProcessors(), () -> null, (none, c, from, to) -> {
+            for (int i = from; i < to; i++) {
+                int row = kept[sortedRows[i]];
+                order[i] = row;
+                sorted[i] = x0[row] + 0.0;
+            }
+        }, Progress.NONE);
         orderEqualTopBits(order, sorted, top);
         top = null;
         RunSorter runs = new RunSorter(in, y, codes, rowIds);
