@@ -104,7 +104,9 @@ class ViewCommandTest {
         if (loads) {
             assertEquals(0, status, err::toString);
             assertEquals("", err.toString());
-            assertTrue(frame[0].startsWith("nearfit  " + file), frame[0]);
+            // the header shows the path, or only the file's name when the line is short of room
+            assertTrue(frame[0].startsWith("nearfit  " + file) || frame[0].startsWith("nearfit  " + file.getFileName()),
+                    frame[0]);
         } else {
             assertEquals(2, status);
             assertEquals(c.message().replace("FILE", file.toString()), err.toString().strip());
