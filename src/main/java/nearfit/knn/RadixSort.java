@@ -1,14 +1,13 @@
 package nearfit.knn;
 
 /**
- * A stable least-significant-digit radix sort of 64-bit keys (11-bit digits, six passes, a pass
+ * A stable least-significant-digit radix sort of 32-bit keys (11-bit digits, three passes, a pass
  * skipped when every key shares its digit), giving the sorting permutation. Used for the canonical
  * row order and the Morton order of queries: linear time, sequential reads, no comparisons.
  */
 final class RadixSort {
     private static final int BITS = 11;
     private static final int BUCKETS = 1 << BITS;
-    private static final int PASSES = (64 + BITS - 1) / BITS;
 
     private RadixSort() {
     }
@@ -17,50 +16,6 @@ final class RadixSort {
     static long sortableBits(double v) {
         long b = Double.doubleToRawLongBits(v + 0.0); // +0.0 turns -0.0 into 0.0: equal values sort as equal
         return b < 0 ? ~b : b ^ Long.MIN_VALUE;
-    }
-
-    /** The indexes 0..n-1 ordered by ascending unsigned key, equal keys in index order. */
-    static int[] order(long[] key) {
-        int n = key.length;
-        int[][] count = new int[PASSES][BUCKETS];
-        for (long v : key) {
-            for (int p = 0; p < PASSES; p++) {
-                count[p][(int) (v >>> (p * BITS)) & (BUCKETS - 1)]++;
-            }
-        }
-        long[] k = key.clone();
-        long[] kNext = new long[n];
-        int[] idx = new int[n];
-        int[] idxNext = new int[n];
-        for (int i = 0; i < n; i++) {
-            idx[i] = i;
-        }
-        for (int p = 0; p < PASSES; p++) {
-            int[] c = count[p];
-            int shift = p * BITS;
-            if (n == 0 || c[(int) (k[0] >>> shift) & (BUCKETS - 1)] == n) {
-                continue; // every key has this digit
-            }
-            int sum = 0;
-            for (int b = 0; b < BUCKETS; b++) {
-                int t = c[b];
-                c[b] = sum;
-                sum += t;
-            }
-            for (int i = 0; i < n; i++) {
-                long v = k[i];
-                int at = c[(int) (v >>> shift) & (BUCKETS - 1)]++;
-                kNext[at] = v;
-                idxNext[at] = idx[i];
-            }
-            long[] tk = k;
-            k = kNext;
-            kNext = tk;
-            int[] ti = idx;
-            idx = idxNext;
-            idxNext = ti;
-        }
-        return idx;
     }
 
     /**
