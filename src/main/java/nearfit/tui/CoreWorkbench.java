@@ -31,6 +31,7 @@ import nearfit.table.CategoryColumn;
 import nearfit.table.Column;
 import nearfit.table.CsvLoader;
 import nearfit.table.LoadCancelledException;
+import nearfit.table.LoadNotes;
 import nearfit.table.LoadOptions;
 import nearfit.table.NearfitException;
 import nearfit.table.Table;

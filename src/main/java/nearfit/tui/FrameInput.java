@@ -2,6 +2,7 @@ package nearfit.tui;
 
 import java.util.List;
 import java.util.Map;
+import nearfit.table.LoadNotes;
 
 /**
  * What a frame shows besides the state and the results: facts about the table that the explorer looked up

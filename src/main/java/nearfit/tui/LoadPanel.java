@@ -5,6 +5,8 @@ import java.util.List;
 import java.util.Locale;
 
 import nearfit.table.BadCell;
+import nearfit.table.ColumnGaps;
+import nearfit.table.LoadNotes;
 import nearfit.table.LoadReport;
 
 /**

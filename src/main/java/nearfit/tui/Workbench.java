@@ -5,6 +5,7 @@ import java.io.OutputStream;
 import java.util.List;
 
 import nearfit.knn.TuningTable;
+import nearfit.table.LoadNotes;
 
 /**
  * The core packages as the explorer sees them: one loaded table and what can be fitted, tuned, flagged and

@@ -14,6 +14,8 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 import com.googlecode.lanterna.input.KeyType;
+import nearfit.table.ColumnGaps;
+import nearfit.table.LoadNotes;
 
 /** The load-report panel ({@code L}) on a small log made here, loaded by the real loader. */
 class LoadPanelTest {

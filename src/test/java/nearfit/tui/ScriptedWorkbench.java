@@ -11,6 +11,7 @@ import java.util.concurrent.atomic.AtomicInteger;
 import nearfit.knn.FlagResult;
 import nearfit.knn.FlagScale;
 import nearfit.knn.TuningTable;
+import nearfit.table.LoadNotes;
 import nearfit.table.LoadReport;
 import nearfit.table.NearfitException;
 

@@ -1,23 +1,18 @@
-package nearfit.tui;
+package nearfit.table;
 
 import java.util.ArrayList;
 import java.util.List;
 
-import nearfit.table.BadCell;
-import nearfit.table.Column;
-import nearfit.table.LoadReport;
-import nearfit.table.Table;
-
 /**
- * What the loader found in the file, for the load-report panel ({@code L}): the table package's
- * {@link LoadReport} and the missing cells of each column that has any.
+ * What the loader found in the file, for the explorer's load-report panel and anyone else who lists
+ * it: the {@link LoadReport} and the missing cells of each column that has any.
  *
  * @param report  the loader's report
  * @param columns the columns with blank or bad cells, in file order
  */
 public record LoadNotes(LoadReport report, List<ColumnGaps> columns) {
     /** Lines of missing cells kept per column. */
-    static final int FIRST_LINES = 3;
+    public static final int FIRST_LINES = 3;
 
     /** Copies the list so that the record stays immutable. */
     public LoadNotes {
@@ -40,7 +35,7 @@ public record LoadNotes(LoadReport report, List<ColumnGaps> columns) {
      * The notes of a loaded table. Each column with missing cells is scanned until its first
      * {@link #FIRST_LINES} are found: at most one pass over the column, and far less when gaps are common.
      */
-    static LoadNotes of(Table table) {
+    public static LoadNotes of(Table table) {
         LoadReport report = table.report();
         List<ColumnGaps> out = new ArrayList<>();
         for (Column c : table.columns()) {

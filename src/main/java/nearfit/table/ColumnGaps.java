@@ -1,11 +1,9 @@
-package nearfit.tui;
+package nearfit.table;
 
 import java.util.List;
 
-import nearfit.table.BadCell;
-
 /**
- * The missing cells of one column, as the load-report panel lists them.
+ * The missing cells of one column, as a load report lists them.
  *
  * @param column      the column's name
  * @param blank       missing cells that were not bad: empty, a missing-value token, or padded into a short row
