@@ -61,7 +61,7 @@ final class FitCommand implements Callable<Integer> {
         SafeOutput.checkTarget(output, model.force, inputs);
         PrintWriter err = spec.commandLine().getErr();
         ReferenceInput input = ReferenceInput.load(file, columns, model, err);
-        Source source = Source.of(input, model.where);
+        Source source = new Source(input, model.where);
         input = null; // the table goes: at 10M rows it holds more than the fit still needs
         TuningOptions.Fitted fitted = tuning.fit(source.data, model.settings(1, z), chosenK, model.threads(), err,
                 model.quiet);
@@ -106,10 +106,6 @@ final class FitCommand implements Callable<Integer> {
             this.facts = ReferenceCapture.RowFacts.of(data, group != null, group == null ? row -> -1 : group::code,
                     src.table()::lineOf);
             this.described = input.describe();
-        }
-
-        static Source of(ReferenceInput input, String where) {
-            return new Source(input, where);
         }
     }
 }

@@ -133,10 +133,7 @@ public final class Searcher {
             key = runs.key(run, q[0]);
             counted = runs.size(run, exclude);
         } else {
-            find(q, k, exclude);
-            LocalEstimator est = estimator;
-            est.load(list, model.data().response());
-            est.prepare(s.weighting(), k);
+            LocalEstimator est = rowByRow(q, k, exclude);
             fit = est.fit(k);
             sd = est.sd(k, fit);
             if (band.isQuantile()) {
@@ -171,9 +168,7 @@ public final class Searcher {
             localScale = scale == FlagScale.LOCAL_SD ? runs.sd(run, exclude) : Double.NaN;
             return runs.mean(run, exclude);
         }
-        find(q, k, exclude);
-        estimator.load(list, model.data().response());
-        estimator.prepare(model.settings().weighting(), k);
+        rowByRow(q, k, exclude);
         double fit = estimator.fit(k);
         if (scale == FlagScale.LOCAL_SD) {
             localScale = estimator.sd(k, fit);
@@ -183,6 +178,14 @@ public final class Searcher {
             localScale = Double.NaN;
         }
         return fit;
+    }
+
+    /** The estimator loaded with the neighbours of q for k (position exclude left out), weighted. */
+    private LocalEstimator rowByRow(double[] q, int k, int exclude) {
+        find(q, k, exclude);
+        estimator.load(list, model.data().response());
+        estimator.prepare(model.settings().weighting(), k);
+        return estimator;
     }
 
     /** The local spread of the last {@link #fitLeavingOut} call. */
