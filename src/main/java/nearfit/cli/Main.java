@@ -134,8 +134,7 @@ public final class Main implements Runnable {
     static final class Version implements CommandLine.IVersionProvider {
         @Override
         public String[] getVersion() {
-            String v = Main.class.getPackage().getImplementationVersion();
-            return new String[] {"nearfit " + (v == null ? "dev" : v)};
+            return new String[] {"nearfit " + ToolVersion.get(), ToolVersion.runtime()};
         }
     }
 }
