@@ -9,7 +9,6 @@ import java.util.concurrent.Callable;
 
 import nearfit.model.Json;
 import nearfit.table.BadCell;
-import nearfit.table.Column;
 import nearfit.table.ColumnSummary;
 import nearfit.table.ColumnType;
 import nearfit.table.CsvLoader;
@@ -56,10 +55,7 @@ final class DescribeCommand implements Callable<Integer> {
         }
         // Warnings are about the data, not progress: on standard error even with --quiet, and in the report.
         SourceTable.printWarnings(table.report(), err);
-        List<ColumnSummary> summaries = new ArrayList<>();
-        for (Column c : table.columns()) {
-            summaries.add(ColumnSummary.of(c));
-        }
+        List<ColumnSummary> summaries = ColumnSummary.ofAll(table.columns(), Runtime.getRuntime().availableProcessors());
         out.print(format == Format.JSON ? json(table.report(), summaries) + "\n" : text(table.report(), summaries));
         out.flush();
         return 0;

@@ -1,8 +1,9 @@
 package nearfit.table;
 
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
+import java.util.concurrent.atomic.AtomicInteger;
+import java.util.concurrent.atomic.AtomicReference;
 
 /**
  * Summary statistics of one column. For numbers and times: the count of present values, missing, bad,
@@ -56,39 +57,115 @@ public record ColumnSummary(String name, ColumnType type, long count, long missi
                 Double.NaN, Double.NaN, 0, List.of());
     }
 
-    /** Summarises the present values of {@code values[0..n)} (the array is sorted in place). */
-    static ColumnSummary ofValues(String name, ColumnType type, double[] values, int n, long missing, long bad) {
-        Arrays.sort(values, 0, n);
-        double sum = 0;
-        for (int i = 0; i < n; i++) {
-            sum += values[i];
+    /**
+     * Summarises every column, on up to {@code threads} threads, one column per task (each summary reads only its
+     * own column); the result is in the columns' order and the same for any thread count.
+     */
+    public static List<ColumnSummary> ofAll(List<? extends Column> columns, int threads) {
+        ColumnSummary[] out = new ColumnSummary[columns.size()];
+        AtomicInteger next = new AtomicInteger();
+        AtomicReference<Throwable> failure = new AtomicReference<>();
+        Runnable work = () -> {
+            try {
+                for (int i; failure.get() == null && (i = next.getAndIncrement()) < out.length; ) {
+                    out[i] = of(columns.get(i));
+                }
+            } catch (RuntimeException | Error e) { // out of memory above all: rethrown on the caller's thread
+                failure.compareAndSet(null, e);
+            }
+        };
+        int extra = Math.max(0, Math.min(threads, out.length) - 1);
+        Thread[] helpers = new Thread[extra];
+        for (int t = 0; t < extra; t++) {
+            helpers[t] = new Thread(work, "nearfit-summary-" + t);
+            helpers[t].start();
         }
-        double mean = n == 0 ? Double.NaN : sum / n;
-        double ss = 0;
-        double drift = 0; // two-pass with the compensation term of Chan, Golub and LeVeque (1983)
-        for (int i = 0; i < n; i++) {
-            double d = values[i] - mean;
-            ss += d * d;
-            drift += d;
-        }
-        double sd = n < 2 ? Double.NaN : Math.sqrt((ss - drift * drift / n) / (n - 1));
-        return new ColumnSummary(name, type, n, missing, bad, n == 0 ? Double.NaN : values[0],
-                Quantiles.type7(values, n, 0.01), Quantiles.type7(values, n, 0.25),
-                Quantiles.type7(values, n, 0.50), Quantiles.type7(values, n, 0.75),
-                Quantiles.type7(values, n, 0.99), n == 0 ? Double.NaN : values[n - 1], mean, sd, 0, List.of());
-    }
-
-    private static ColumnSummary ofNumeric(NumericColumn c) {
-        int rows = c.size();
-        double[] values = new double[rows];
-        int n = 0;
-        for (int row = 0; row < rows; row++) {
-            double v = c.asDouble(row);
-            if (!Double.isNaN(v)) {
-                values[n++] = v;
+        work.run();
+        for (Thread t : helpers) {
+            try {
+                t.join();
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw new IllegalStateException("interrupted while summarising", e);
             }
         }
-        return ofValues(c.name(), c.type(), values, n, c.missingCount(), c.badCount());
+        Throwable f = failure.get();
+        if (f instanceof Error e) {
+            throw e;
+        } else if (f != null) {
+            throw (RuntimeException) f;
+        }
+        return List.of(out);
+    }
+
+    /** The probabilities of the quantiles a summary holds, in the record's order. */
+    private static final double[] PROBABILITIES = {0.01, 0.25, 0.50, 0.75, 0.99};
+
+    /**
+     * Linear in the column's size and with no copy of it: one pass for count, extremes and mean, one for the
+     * squared deviations, and the quantiles' order statistics by {@link RankSelection} (usually two passes).
+     * Every statistic equals its value from the sorted column; the sums run in row order.
+     */
+    private static ColumnSummary ofNumeric(NumericColumn c) {
+        int rows = c.size();
+        long n = 0;
+        double sum = 0;
+        long minKey = -1L; // unsigned order: the largest key
+        long maxKey = 0L;
+        for (int row = 0; row < rows; row++) {
+            double v = c.asDouble(row);
+            if (v != v) {
+                continue;
+            }
+            n++;
+            sum += v;
+            long k = RankSelection.key(v);
+            if (Long.compareUnsigned(k, minKey) < 0) {
+                minKey = k;
+            }
+            if (Long.compareUnsigned(k, maxKey) > 0) {
+                maxKey = k;
+            }
+        }
+        if (n == 0) {
+            return new ColumnSummary(c.name(), c.type(), 0, c.missingCount(), c.badCount(), Double.NaN, Double.NaN,
+                    Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, 0, List.of());
+        }
+        double mean = sum / n;
+        double ss = 0;
+        double drift = 0; // two-pass with the compensation term of Chan, Golub and LeVeque (1983)
+        for (int row = 0; row < rows; row++) {
+            double v = c.asDouble(row);
+            if (v == v) {
+                double d = v - mean;
+                ss += d * d;
+                drift += d;
+            }
+        }
+        double sd = n < 2 ? Double.NaN : Math.sqrt((ss - drift * drift / n) / (n - 1));
+        double[] q = quantiles(c, n);
+        return new ColumnSummary(c.name(), c.type(), n, c.missingCount(), c.badCount(), RankSelection.value(minKey),
+                q[0], q[1], q[2], q[3], q[4], RankSelection.value(maxKey), mean, sd, 0, List.of());
+    }
+
+    /** Definition-7 quantiles at {@link #PROBABILITIES} of the n present values, by selection. */
+    private static double[] quantiles(NumericColumn c, long n) {
+        int m = PROBABILITIES.length;
+        long[] ranks = new long[2 * m];
+        double[] frac = new double[m];
+        for (int i = 0; i < m; i++) {
+            double h = (n - 1) * PROBABILITIES[i];
+            long lo = (long) Math.floor(h);
+            ranks[2 * i] = lo;
+            ranks[2 * i + 1] = Math.min(lo + 1, n - 1);
+            frac[i] = lo >= n - 1 ? 0 : h - lo;
+        }
+        double[] at = RankSelection.select(c, n, ranks);
+        double[] out = new double[m];
+        for (int i = 0; i < m; i++) {
+            out[i] = Quantiles.between(at[2 * i], at[2 * i + 1], frac[i]);
+        }
+        return out;
     }
 
     private static ColumnSummary ofCategory(CategoryColumn c, long present) {

@@ -24,10 +24,14 @@ public final class Quantiles {
         if (lo >= n - 1) {
             return sorted[n - 1];
         }
-        double frac = h - lo;
-        double a = sorted[lo];
-        double b = sorted[lo + 1];
-        // numpy's lerp: from the nearer end, so a tie (a == b) gives exactly a and p = 1 gives the maximum.
+        return between(sorted[lo], sorted[lo + 1], h - lo);
+    }
+
+    /**
+     * The point {@code frac} of the way from {@code a} to {@code b}, as numpy's lerp computes it: from the
+     * nearer end, so a tie (a == b) gives exactly a and frac = 1 gives exactly b.
+     */
+    static double between(double a, double b, double frac) {
         return frac >= 0.5 ? b - (b - a) * (1 - frac) : a + (b - a) * frac;
     }
 }

@@ -86,4 +86,20 @@ class ColumnSummaryTest {
         assertEquals(ColumnType.TIME, s.type());
         assertEquals(java.time.Instant.parse("2025-03-02T00:00:00Z").toEpochMilli(), (long) s.median());
     }
+
+    @Test
+    void summariesOnSeveralThreadsEqualOneThreadsInColumnOrder() {
+        StringBuilder csv = new StringBuilder("a,b,c,d,turbine\n");
+        java.util.SplittableRandom r = new java.util.SplittableRandom(7);
+        for (int i = 0; i < 5000; i++) {
+            csv.append(r.nextDouble()).append(',').append(r.nextInt(100)).append(',').append(i % 7 == 0 ? "" : r.nextGaussian())
+                    .append(',').append(-i).append(",T0").append(i % 3).append('\n');
+        }
+        Table t = CsvFiles.load(dir, csv.toString());
+        List<ColumnSummary> one = ColumnSummary.ofAll(t.columns(), 1);
+        assertEquals(one, ColumnSummary.ofAll(t.columns(), 4));
+        assertEquals(List.of("a", "b", "c", "d", "turbine"), one.stream().map(ColumnSummary::name).toList());
+        assertEquals(-4999.0, one.get(3).min());
+        assertEquals(-2499.5, one.get(3).median()); // definition 7 on 0..-4999: the middle of -2499 and -2500
+    }
 }
