@@ -36,6 +36,9 @@ public final class SafeOutput {
 
     /** Longest file name, in bytes, that the usual Linux file systems take (NAME_MAX; common practice). */
     static final int NAME_MAX = 255;
+    /** Temporary names are short, so any name that fits the file system leaves room for them (.nf-N.part). */
+    static final String PART_PREFIX = ".nf-";
+    static final String PART_SUFFIX = ".part";
 
     /** What writing a checked target means. */
     private enum Way {
@@ -91,10 +94,6 @@ public final class SafeOutput {
             }
         }
     }
-
-    /** Temporary names are short, so any name that fits the file system leaves room for them (.nf-N.part). */
-    static final String PART_PREFIX = ".nf-";
-    static final String PART_SUFFIX = ".part";
 
     private static void deleteQuietly(Path p) {
         if (p != null) {
