@@ -44,3 +44,18 @@ b = ('\n'.join(rows(30)) + '\n').encode()
 open('latin1-bytes.csv', 'wb').write(b.replace(b',T03,', b',T\xe903,', 1).replace(b',T04,', b',T\xff\xfe04,', 1).replace(b',T05,', b',T05\xc3,', 1))
 text('windows-line-endings.csv', rows(30), '\r\n')
 text('good.csv', rows(60))
+
+# Text a file supplies must not drive the terminal: a header name and labels holding escape sequences
+# (set the window title, clear the screen, colour).
+r = rows(30)
+r[0] = r[0].replace('turbine', 'turbine\x1b]2;pwned\x07\x1b[2J')
+r = [x.replace(',T03,', ',T03\x1b[31m,') for x in r]
+text('escape-sequences.csv', r)
+# Repeated header names: the second air_temp_c must not take the name air_temp_c_2, which the header holds.
+r = rows(30)
+r = [r[0] + ',air_temp_c,air_temp_c_2'] + [x + ',%d,%d' % (i, -i) for i, x in enumerate(r[1:])]
+text('repeated-names.csv', r)
+# The gzip magic bytes and nothing else.
+open('gzip-magic-only.gz', 'wb').write(b'\x1f\x8b')
+# A file name that is not ASCII (opened under LC_ALL=C too, by the bytes given).
+text('relev\u00e9-donn\u00e9es.csv', rows(30))

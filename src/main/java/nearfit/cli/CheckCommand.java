@@ -67,7 +67,7 @@ final class CheckCommand implements Callable<Integer> {
         model.validate();
         List<Path> inputs = new ArrayList<>(List.of(modelFile));
         if (!"-".equals(file)) {
-            inputs.add(Path.of(file));
+            inputs.add(ArgumentPath.of(file));
         }
         if (flaggedOutput != null) {
             SafeOutput.checkTarget(flaggedOutput, model.force, inputs);

@@ -8,6 +8,7 @@ import java.util.Locale;
 import java.util.Map;
 
 import nearfit.model.Json;
+import nearfit.table.VisibleText;
 
 /**
  * The outcome of {@code check}: counts over all rows and per group, the worst rows, and whether the
@@ -160,19 +161,20 @@ record CheckReport(long rows, long scored, long flagged, double limit, double th
                 percent(limit), passed() ? "PASSED" : "FAILED");
         if (!groups.isEmpty()) {
             out.println();
-            out.printf(Locale.ROOT, "%-12s %10s %10s %10s %9s%n", groupName, "rows", "scored", "flagged", "share %");
+            out.printf(Locale.ROOT, "%-12s %10s %10s %10s %9s%n", VisibleText.of(groupName), "rows", "scored",
+                    "flagged", "share %");
             for (GroupCount g : groups) {
-                out.printf(Locale.ROOT, "%-12s %10d %10d %10d %9s%n", g.group(), g.rows(), g.scored(),
+                out.printf(Locale.ROOT, "%-12s %10d %10d %10d %9s%n", VisibleText.of(g.group()), g.rows(), g.scored(),
                         g.flagged(), percent(g.share()));
             }
         }
         if (!worst.isEmpty()) {
             out.println();
             out.println("worst rows (by |z|):");
-            out.printf(Locale.ROOT, "%10s %-12s %12s %12s %9s%n", "line", groupName == null ? "" : groupName,
-                    responseName, "fit", "z");
+            out.printf(Locale.ROOT, "%10s %-12s %12s %12s %9s%n", "line", groupName == null ? "" : VisibleText.of(groupName),
+                    VisibleText.of(responseName), "fit", "z");
             for (WorstRow w : worst) {
-                out.printf(Locale.ROOT, "%10d %-12s %12s %12s %9s%n", w.line(), w.group() == null ? "" : w.group(),
+                out.printf(Locale.ROOT, "%10d %-12s %12s %12s %9s%n", w.line(), w.group() == null ? "" : VisibleText.of(w.group()),
                         TuneReport.significant(w.response()), TuneReport.significant(w.fit()),
                         String.format(Locale.ROOT, "%.2f", w.z()));
             }

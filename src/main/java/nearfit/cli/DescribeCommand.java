@@ -11,7 +11,6 @@ import nearfit.model.Json;
 import nearfit.table.BadCell;
 import nearfit.table.ColumnSummary;
 import nearfit.table.ColumnType;
-import nearfit.table.CsvLoader;
 import nearfit.table.LoadOptions;
 import nearfit.table.LoadProgress;
 import nearfit.table.LoadReport;
@@ -49,7 +48,7 @@ final class DescribeCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         boolean progress = !quiet && System.console() != null;
         LoadOptions options = LoadOptions.builder().progress(progress ? progressTo(err) : LoadProgress.NONE).build();
-        Table table = CsvLoader.load(file, options);
+        Table table = SourceTable.loadTable(file, "-".equals(file) ? null : ArgumentPath.of(file), options);
         if (progress) {
             err.print("\r\033[K");
         }
@@ -99,15 +98,16 @@ final class DescribeCommand implements Callable<Integer> {
         for (ColumnSummary s : summaries) {
             rows.add(cells(s));
             if (s.type() == ColumnType.CATEGORY) {
-                StringBuilder sb = new StringBuilder("  " + s.name() + ": " + s.distinct() + " distinct; most frequent");
+                StringBuilder sb = new StringBuilder("  " + shown(s.name()) + ": " + s.distinct()
+                        + " distinct; most frequent");
                 for (ColumnSummary.LabelCount lc : s.top()) {
-                    sb.append(' ').append(lc.label()).append(" (").append(lc.count()).append(')');
+                    sb.append(' ').append(shown(lc.label())).append(" (").append(lc.count()).append(')');
                 }
                 categories.add(sb.toString());
             }
         }
         StringBuilder out = new StringBuilder();
-        out.append(String.format(Locale.ROOT, "%s: %d rows, %d columns, delimiter %s, %s%s%n", r.source(), r.rows(),
+        out.append(String.format(Locale.ROOT, "%s: %d rows, %d columns, delimiter %s, %s%s%n", shown(r.source()), r.rows(),
                 summaries.size(), r.delimiterName(), r.headerPresent() ? "header row" : "no header row",
                 r.decimalComma() ? ", decimal comma" : ""));
         out.append(align(rows));
@@ -122,23 +122,24 @@ final class DescribeCommand implements Callable<Integer> {
         out.append(String.format(Locale.ROOT, "ragged rows: %d (%d short, padded with missing; %d long, extra fields dropped)%n",
                 r.raggedRows(), r.shortRows(), r.longRows()));
         for (BadCell c : r.raggedExamples()) {
-            out.append(String.format(Locale.ROOT, "  line %d: %s%n", c.line(), c.text()));
+            out.append(String.format(Locale.ROOT, "  line %d: %s%n", c.line(), shown(c.text())));
         }
         out.append(String.format(Locale.ROOT, "bad cells: %d (read as missing)%n", r.badCells()));
         for (BadCell c : r.badExamples()) {
-            out.append(String.format(Locale.ROOT, "  line %d, column %s: \"%s\"%n", c.line(), c.column(), c.text()));
+            out.append(String.format(Locale.ROOT, "  line %d, column %s: \"%s\"%n", c.line(), shown(c.column()),
+                    shown(c.text())));
         }
         out.append(String.format(Locale.ROOT, "loaded %.1f MB in %.2f s (%.0f MB/s)%n", r.bytes() / 1e6, r.seconds(),
                 r.megabytesPerSecond()));
         for (String w : r.warnings()) {
-            out.append("warning: ").append(w).append('\n');
+            out.append("warning: ").append(shown(w)).append('\n');
         }
     }
 
     private static String[] cells(ColumnSummary s) {
         double[] v = {s.min(), s.p01(), s.p25(), s.median(), s.p75(), s.p99(), s.max(), s.mean()};
         String[] out = new String[HEAD.length];
-        out[0] = s.name();
+        out[0] = shown(s.name());
         out[1] = s.type().label();
         out[2] = Long.toString(s.count());
         out[3] = Long.toString(s.missing());
@@ -151,8 +152,35 @@ final class DescribeCommand implements Callable<Integer> {
         return out;
     }
 
-    private static String number(double d) {
-        return Double.isNaN(d) ? "-" : String.format(Locale.ROOT, "%.6g", d).replaceAll("\\.?0+(e|$)", "$1");
+    /**
+     * A value to six significant digits, trailing zeros of the fraction dropped ({@code 2.5}, {@code 100000},
+     * {@code 1e+20}, {@code -1.5e-20}); NaN as {@code -}. Only the digits after a decimal point are trimmed,
+     * never an integer's zeros or the exponent's.
+     */
+    static String number(double d) {
+        if (Double.isNaN(d)) {
+            return "-";
+        }
+        String s = String.format(Locale.ROOT, "%.6g", d);
+        int e = s.indexOf('e');
+        String mantissa = e < 0 ? s : s.substring(0, e);
+        String exponent = e < 0 ? "" : s.substring(e);
+        if (mantissa.indexOf('.') >= 0) {
+            int end = mantissa.length();
+            while (mantissa.charAt(end - 1) == '0') {
+                end--;
+            }
+            if (mantissa.charAt(end - 1) == '.') {
+                end--;
+            }
+            mantissa = mantissa.substring(0, end);
+        }
+        return mantissa + exponent;
+    }
+
+    /** Text from the file (or its name) with control characters made visible, so it cannot drive the terminal. */
+    private static String shown(String fromFile) {
+        return nearfit.table.VisibleText.of(fromFile);
     }
 
     private static String time(double ms) {

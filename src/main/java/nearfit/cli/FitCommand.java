@@ -57,7 +57,7 @@ final class FitCommand implements Callable<Integer> {
         int chosenK = k.value();
         double z = OptionValues.positiveNumber("--threshold", threshold);
         tuning.validate();
-        List<Path> inputs = "-".equals(file) ? List.of() : List.of(Path.of(file));
+        List<Path> inputs = "-".equals(file) ? List.of() : List.of(ArgumentPath.of(file));
         SafeOutput.checkTarget(output, model.force, inputs);
         PrintWriter err = spec.commandLine().getErr();
         ReferenceInput input = ReferenceInput.load(file, columns, model, err);
@@ -79,7 +79,7 @@ final class FitCommand implements Callable<Integer> {
                 source.facts);
         ModelFile.write(saved, output, model.force, inputs);
         spec.commandLine().getOut().printf("fitted k = %d on %s; wrote %s%n", saved.settings().k(),
-                source.described, output);
+                nearfit.table.VisibleText.of(source.described), nearfit.table.VisibleText.of(output.toString()));
         spec.commandLine().getOut().flush();
         return 0;
     }

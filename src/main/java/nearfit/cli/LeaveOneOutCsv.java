@@ -58,7 +58,7 @@ final class LeaveOneOutCsv {
         if ("-".equals(file) || expected == null) {
             throw new NearfitException("--loo: needs the reference file by name, and a model fitted on a named file");
         }
-        String actual = SourceTable.sha256Of(Path.of(file), file);
+        String actual = SourceTable.sha256Of(ArgumentPath.of(file), file);
         if (!expected.equals(actual)) {
             throw NearfitException.inFile(file, "--loo: is not the model's reference file "
                     + model.stored().source().name() + " (its SHA-256 differs)");

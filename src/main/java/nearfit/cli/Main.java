@@ -50,10 +50,21 @@ public final class Main implements Runnable {
     }
 
     public static void main(String[] args) {
-        int status = run(args,
-                new PrintWriter(new OutputStreamWriter(System.out, StandardCharsets.UTF_8), true),
-                new PrintWriter(new OutputStreamWriter(System.err, StandardCharsets.UTF_8), true));
-        System.exit(status);
+        System.exit(runOnStandardStreams(args));
+    }
+
+    /**
+     * Runs on the process's own streams. Standard output is checked after the last write: a failed
+     * write (a full disk, a closed descriptor) ends with status 2 and one line; a reader that went away
+     * (a closed pipe) is no error ({@link StandardOutput}).
+     */
+    static int runOnStandardStreams(String[] args) {
+        StandardOutput stdout = new StandardOutput(new java.io.FileOutputStream(java.io.FileDescriptor.out));
+        PrintWriter out = new PrintWriter(new OutputStreamWriter(stdout, StandardCharsets.UTF_8), true);
+        PrintWriter err = new PrintWriter(new OutputStreamWriter(System.err, StandardCharsets.UTF_8), true);
+        int status = run(args, out, err);
+        out.flush();
+        return stdout.status(status, err);
     }
 
     /**
@@ -78,11 +89,11 @@ public final class Main implements Runnable {
         });
         cli.setExecutionExceptionHandler((ex, c, parsed) -> {
             if (ex instanceof NearfitException) {
-                err.println("nearfit: " + ex.getMessage());
+                err.println(errorLine(ex));
             } else if (rootCause(ex) instanceof OutOfMemoryError) {
                 err.println(outOfMemory()); // from a worker thread, wrapped
             } else {
-                err.println("nearfit: internal error: " + ex);
+                err.println("nearfit: internal error: " + nearfit.table.VisibleText.of(ex.toString()));
             }
             if (debug) {
                 StringWriter sw = new StringWriter();
@@ -103,6 +114,14 @@ public final class Main implements Runnable {
         out.flush();
         err.flush();
         return status;
+    }
+
+    /**
+     * The one line for a failure: its message with control characters made visible, since it may quote
+     * a column name, a label or a file name taken from a file.
+     */
+    private static String errorLine(Exception ex) {
+        return "nearfit: " + nearfit.table.VisibleText.of(ex.getMessage());
     }
 
     /** Worded like the loader's own out-of-memory message. */
@@ -127,7 +146,19 @@ public final class Main implements Runnable {
     private static CommandLine commandLine(CommandLine.IFactory factory) {
         CommandLine cli = new CommandLine(new Main(), factory);
         cli.setCaseInsensitiveEnumValuesAllowed(true);
+        registerPathConverter(cli);
         return cli;
+    }
+
+    /** File options and parameters are read with {@link ArgumentPath}, so a name the locale cannot spell still opens. */
+    private static void registerPathConverter(CommandLine cli) {
+        cli.registerConverter(java.nio.file.Path.class, arg -> {
+            try {
+                return ArgumentPath.of(arg);
+            } catch (NearfitException e) {
+                throw new CommandLine.TypeConversionException(e.getMessage());
+            }
+        });
     }
 
     /** The version written into the jar's manifest by the build. */

@@ -25,6 +25,7 @@ import nearfit.plot.TextRenderer;
 import nearfit.table.NearfitException;
 import nearfit.table.Quantiles;
 import nearfit.table.TimeColumn;
+import nearfit.table.VisibleText;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -81,7 +82,7 @@ final class PlotCommand implements Callable<Integer> {
         int[] dims = size == null ? (png == null ? TEXT_SIZE : PNG_SIZE)
                 : png == null ? OptionValues.size("--size", size, 20, 1000) : OptionValues.size("--size", size, 120, 8000);
         tuning.validate();
-        List<Path> inputs = "-".equals(file) ? List.of() : List.of(Path.of(file));
+        List<Path> inputs = "-".equals(file) ? List.of() : List.of(ArgumentPath.of(file));
         if (png != null) {
             SafeOutput.checkTarget(png, model.force, inputs);
         }
@@ -90,11 +91,8 @@ final class PlotCommand implements Callable<Integer> {
         Scene scene = scene(input, tuning.fit(input.data(), model.settings(1, ModelSettings.DEFAULT_FLAG_THRESHOLD),
                 chosenK, model.threads(), err, model.quiet).engine());
         if (png != null) {
-            SafeOutput.write(png, model.force, inputs, out -> {
-                if (!ImageIO.write(PngRenderer.render(scene, dims[0], dims[1]), "png", out)) {
-                    throw new java.io.IOException("no PNG writer in this Java runtime");
-                }
-            });
+            byte[] picture = pngBytes(scene, dims);
+            SafeOutput.write(png, model.force, inputs, out -> out.write(picture));
             return 0;
         }
         ComposedPlot plot = ScatterComposer.compose(scene, dims[0], dims[1], ascii ? CanvasKind.ASCII : CanvasKind.BRAILLE);
@@ -106,13 +104,32 @@ final class PlotCommand implements Callable<Integer> {
         return 0;
     }
 
+    /**
+     * The PNG encoded in memory (a few hundred KB), so the file is written by plain stream writes: an image
+     * stream over the file itself, left open by a failed write, was closed again by the image library's
+     * own shutdown hook and printed a stack trace after the one-line error.
+     */
+    private static byte[] pngBytes(Scene scene, int[] dims) {
+        java.io.ByteArrayOutputStream bytes = new java.io.ByteArrayOutputStream(1 << 18);
+        try {
+            ImageIO.setUseCache(false);
+            if (!ImageIO.write(PngRenderer.render(scene, dims[0], dims[1]), "png", bytes)) {
+                throw new NearfitException("--png: no PNG writer in this Java runtime");
+            }
+        } catch (java.io.IOException e) {
+            throw new NearfitException("--png: cannot encode the picture: " + e.getMessage());
+        }
+        return bytes.toByteArray();
+    }
+
     private Scene scene(ReferenceInput input, KnnModel engine) {
         ReferenceData data = engine.data();
         double[] x = data.input(0);
         Scene.Builder b = Scene.builder(x, data.isCategory() ? classesAsNumbers(data) : data.response());
         String title = "k = " + engine.settings().k() + ", " + data.size() + " rows"
                 + (model.where == null ? "" : ", " + model.where.trim());
-        b.labels(title, data.inputNames()[0], data.responseName());
+        // Names come from the file: control characters are made visible before they reach a terminal.
+        b.labels(VisibleText.of(title), VisibleText.of(data.inputNames()[0]), VisibleText.of(data.responseName()));
         if (input.source().table().column(data.inputNames()[0]) instanceof TimeColumn) {
             b.timeAxis();
         }

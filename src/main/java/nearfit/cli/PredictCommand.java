@@ -47,7 +47,7 @@ final class PredictCommand implements Callable<Integer> {
         model.validate();
         List<Path> inputs = new ArrayList<>(List.of(modelFile));
         if (!"-".equals(file)) {
-            inputs.add(Path.of(file));
+            inputs.add(ArgumentPath.of(file));
         }
         if (output != null) {
             SafeOutput.checkTarget(output, model.force, inputs);

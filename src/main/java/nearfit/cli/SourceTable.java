@@ -21,6 +21,7 @@ import nearfit.table.NearfitException;
 import nearfit.table.NumericColumn;
 import nearfit.table.RowSet;
 import nearfit.table.Table;
+import nearfit.table.VisibleText;
 
 /**
  * A CSV source as a command reads it: the loaded table, the file's size and its SHA-256 (computed on
@@ -48,27 +49,29 @@ final class SourceTable {
      */
     static SourceTable load(String name, ColumnRequest request, int threads, boolean quiet, PrintWriter err) {
         boolean stdin = "-".equals(name);
-        Path path = stdin ? null : Path.of(name);
-        if (!stdin && !Files.isRegularFile(path)) {
+        Path path = stdin ? null : ArgumentPath.of(name);
+        if (!stdin && (Files.isDirectory(path) || !Files.exists(path))) {
             throw NearfitException.inFile(name, Files.isDirectory(path) ? "is a folder, not a CSV file" : "no such file");
         }
-        CompletableFuture<String> sha = stdin ? CompletableFuture.completedFuture(null)
+        // A named pipe, <(zcat x) or /dev/stdin is read once as a stream, like standard input: no size, no digest.
+        boolean stream = stdin || !Files.isRegularFile(path);
+        CompletableFuture<String> sha = stream ? CompletableFuture.completedFuture(null)
                 : CompletableFuture.supplyAsync(() -> sha256Of(path, name));
         LoadOptions options = LoadOptions.builder().threads(threads).keepColumns(request.required())
                 .keepIfPresent(request.optional()).build();
         long start = System.nanoTime();
         Table table;
         try {
-            table = CsvLoader.load(name, options);
+            table = loadTable(name, path, options);
         } catch (NearfitException e) {
             throw unknownKeptColumn(e, name, request);
         }
-        long size = stdin ? -1 : sizeOf(path, name);
+        long size = stream ? -1 : sizeOf(path, name);
         LoadReport report = table.report();
         if (!quiet) {
             String bad = report.badCells() == 0 ? "" : String.format(Locale.ROOT, " (%d bad cells, read as missing)",
                     report.badCells());
-            err.printf(Locale.ROOT, "nearfit: read %d rows from %s in %.1f s%s%n", table.rowCount(), name,
+            err.printf(Locale.ROOT, "nearfit: read %d rows from %s in %.1f s%s%n", table.rowCount(), VisibleText.of(name),
                     (System.nanoTime() - start) / 1e9, bad);
         }
         printWarnings(report, err);
@@ -78,9 +81,22 @@ final class SourceTable {
     /** Each warning of a load report as one line {@code nearfit: warning: ...}, then flushes. */
     static void printWarnings(LoadReport report, PrintWriter err) {
         for (String w : report.warnings()) {
-            err.println("nearfit: warning: " + w);
+            err.println("nearfit: warning: " + VisibleText.of(w));
         }
         err.flush();
+    }
+
+    /**
+     * Loads {@code path} (or standard input when it is {@code null}), naming it {@code name}. Running out of
+     * heap here is said to happen while loading, naming the file, whichever thread it struck.
+     */
+    static Table loadTable(String name, Path path, LoadOptions options) {
+        try {
+            return path == null ? CsvLoader.load(System.in, name, options) : CsvLoader.load(path, name, options);
+        } catch (OutOfMemoryError e) {
+            throw NearfitException.inFile(name, "out of memory while loading; give Java more heap "
+                    + "(for example NEARFIT_JAVA_OPTS=-Xmx16g)", e);
+        }
     }
 
     /**

@@ -10,6 +10,7 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.StandardOpenOption;
 import java.util.Collection;
+import java.util.concurrent.atomic.AtomicReference;
 
 import nearfit.table.NearfitException;
 
@@ -18,8 +19,10 @@ import nearfit.table.NearfitException;
  * target's folder and is renamed into place only when complete and flushed to disk.
  *
  * <p>An existing target is replaced only when {@code force} is set, and never when it is one of the
- * run's own input files. If writing fails (a full disk, a kill, an exception in the writer) the
- * temporary file is removed and the previous target, if any, is left as it was.
+ * run's own input files or its standard input. Only regular files are replaced: a character device or a
+ * named pipe is written into, a socket or block device refused. If writing fails (a full disk, an
+ * exception in the writer, SIGTERM or Ctrl-C) the temporary file is removed and the previous target, if
+ * any, is left as it was; only SIGKILL can leave a temporary file ({@code .nf-N.part}) behind.
  */
 public final class SafeOutput {
     /** Writes the content of a file to a stream; may throw {@link IOException}. */
@@ -29,6 +32,20 @@ public final class SafeOutput {
     }
 
     private SafeOutput() {
+    }
+
+    /** Longest file name, in bytes, that the usual Linux file systems take (NAME_MAX; common practice). */
+    static final int NAME_MAX = 255;
+    /** Temporary names are short, so any name that fits the file system leaves room for them (.nf-N.part). */
+    static final String PART_PREFIX = ".nf-";
+    static final String PART_SUFFIX = ".part";
+
+    /** What writing a checked target means. */
+    private enum Way {
+        /** A regular file, or none yet: a temporary file beside it, renamed over it when complete. */
+        REPLACE,
+        /** A character device or a named pipe (say /dev/null): the content is written into it, never renamed over it. */
+        INTO
     }
 
     /**
@@ -43,38 +60,71 @@ public final class SafeOutput {
      */
     public static void write(Path target, boolean force, Collection<Path> inputs, Content content) {
         String name = target.toString();
-        checkTarget(target, force, inputs);
+        if (check(target, force, inputs) == Way.INTO) {
+            writeInto(target, name, content);
+            return;
+        }
         Path folder = target.toAbsolutePath().getParent();
-        Path temp = null;
+        // A SIGTERM or Ctrl-C runs shutdown hooks but no finally blocks: this one removes the part file.
+        AtomicReference<Path> part = new AtomicReference<>();
+        Thread cleanup = new Thread(() -> deleteQuietly(part.getAndSet(null)), "nearfit-part-cleanup");
+        Runtime.getRuntime().addShutdownHook(cleanup);
         try {
-            temp = Files.createTempFile(folder, "." + target.getFileName() + ".", ".part");
-            try (FileChannel channel = FileChannel.open(temp, StandardOpenOption.WRITE);
+            part.set(Files.createTempFile(folder, PART_PREFIX, PART_SUFFIX));
+            try (FileChannel channel = FileChannel.open(part.get(), StandardOpenOption.WRITE);
                  OutputStream out = new java.io.BufferedOutputStream(
                          java.nio.channels.Channels.newOutputStream(channel), 1 << 16)) {
                 content.writeTo(out);
                 out.flush();
                 channel.force(true);
             }
-            keepPermissions(temp, target);
-            move(temp, target, force);
-            temp = null;
+            keepPermissions(part.get(), target);
+            move(part.get(), target, force);
+            part.set(null);
         } catch (FileAlreadyExistsException e) {
             throw NearfitException.inFile(name, "exists already; add --force to replace it");
         } catch (IOException e) {
             throw NearfitException.inFile(name, "cannot write: " + describe(e), e);
         } finally {
-            if (temp != null) {
-                try {
-                    Files.deleteIfExists(temp);
-                } catch (IOException ignored) {
-                    // Best effort: the temporary name starts with a dot and ends in .part.
-                }
+            deleteQuietly(part.getAndSet(null));
+            try {
+                Runtime.getRuntime().removeShutdownHook(cleanup);
+            } catch (IllegalStateException shuttingDown) {
+                // The hook is running or about to: it finds nothing left to delete.
             }
         }
     }
 
-    /** Fails when {@code target} may not be written; exposed so commands can check before long work. */
+    private static void deleteQuietly(Path p) {
+        if (p != null) {
+            try {
+                Files.deleteIfExists(p);
+            } catch (IOException ignored) {
+                // Best effort: the temporary name starts with a dot and ends in .part.
+            }
+        }
+    }
+
+    private static void writeInto(Path target, String name, Content content) {
+        try (OutputStream out = new java.io.BufferedOutputStream(Files.newOutputStream(target,
+                StandardOpenOption.WRITE), 1 << 16)) {
+            content.writeTo(out);
+        } catch (IOException e) {
+            throw NearfitException.inFile(name, "cannot write: " + describe(e), e);
+        }
+    }
+
+    /**
+     * Fails when {@code target} may not be written; exposed so commands can check before long work: the
+     * target is not an input or this run's standard input, not a folder, socket or block device, exists
+     * only with {@code force} (a character device or named pipe is written into, not replaced), has a
+     * name the file system takes, and its folder exists and takes a new file.
+     */
     public static void checkTarget(Path target, boolean force, Collection<Path> inputs) {
+        check(target, force, inputs);
+    }
+
+    private static Way check(Path target, boolean force, Collection<Path> inputs) {
         String name = target.toString();
         for (Path input : inputs) {
             if (input != null && sameFile(input, target)) {
@@ -84,12 +134,66 @@ public final class SafeOutput {
         if (Files.isDirectory(target)) {
             throw NearfitException.inFile(name, "is a folder; name a file to write");
         }
+        if (Files.exists(target) && !Files.isRegularFile(target)) {
+            return special(target, name);
+        }
+        if (Files.isRegularFile(target) && isStandardInput(target)) {
+            throw NearfitException.inFile(name, "is this run's standard input; choose another output file");
+        }
         if (Files.exists(target) && !force) {
             throw NearfitException.inFile(name, "exists already; add --force to replace it");
+        }
+        Path fileName = target.getFileName();
+        int bytes = fileName == null ? 0 : fileName.toString().getBytes(nameCharset()).length;
+        if (bytes > NAME_MAX) {
+            throw NearfitException.inFile(name, "file name too long (" + bytes + " bytes; file systems take "
+                    + NAME_MAX + ")");
         }
         Path folder = target.toAbsolutePath().getParent();
         if (folder == null || !Files.isDirectory(folder)) {
             throw NearfitException.inFile(name, "its folder does not exist");
+        }
+        try {
+            // Before the work, not after it: a read-only or full folder fails here, in one line.
+            // The probe is not named .part, so a watcher waiting for the write to begin is not misled.
+            Files.delete(Files.createTempFile(folder, PART_PREFIX, ".probe"));
+        } catch (IOException e) {
+            throw NearfitException.inFile(name, "cannot write in its folder: " + describe(e), e);
+        }
+        return Way.REPLACE;
+    }
+
+    /** A target that exists and is neither a regular file nor a folder, by its POSIX file type. */
+    private static Way special(Path target, String name) {
+        int type;
+        try {
+            type = ((Integer) Files.getAttribute(target, "unix:mode")) & 0170000;
+        } catch (IOException | UnsupportedOperationException | IllegalArgumentException e) {
+            throw NearfitException.inFile(name, "is not a regular file; name a regular file to write");
+        }
+        return switch (type) {
+            case 0020000, 0010000 -> Way.INTO; // character device, named pipe
+            case 0140000 -> throw NearfitException.inFile(name, "is a socket; name a regular file to write");
+            case 0060000 -> throw NearfitException.inFile(name, "is a block device; name a regular file to write");
+            default -> throw NearfitException.inFile(name, "is not a regular file; name a regular file to write");
+        };
+    }
+
+    /** Whether standard input is {@code target} itself (same device and inode), as in {@code ... -o s.csv < s.csv}. */
+    private static boolean isStandardInput(Path target) {
+        Path stdin = Path.of("/proc/self/fd/0");
+        try {
+            return Files.isRegularFile(stdin) && Files.isSameFile(stdin, target);
+        } catch (IOException | SecurityException e) {
+            return false;
+        }
+    }
+
+    private static java.nio.charset.Charset nameCharset() {
+        try {
+            return java.nio.charset.Charset.forName(System.getProperty("sun.jnu.encoding"));
+        } catch (RuntimeException e) {
+            return java.nio.charset.StandardCharsets.UTF_8;
         }
     }
 

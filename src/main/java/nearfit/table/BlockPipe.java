@@ -37,9 +37,14 @@ final class BlockPipe implements AutoCloseable {
             gzip = in.read() == 0x1f && in.read() == 0x8b;
             in.reset();
             source = gzip ? new GZIPInputStream(in, 1 << 16) : in;
+        } catch (java.io.EOFException ex) {
+            // The gzip header (RFC 1952: 10 bytes) is cut short; EOFException carries no message.
+            throw NearfitException.inFile(name, "truncated gzip stream: the file ends inside the gzip header "
+                    + "(it holds the gzip magic bytes, but no compressed data)", ex);
         } catch (IOException ex) {
             throw NearfitException.inFile(name, (ex instanceof java.util.zip.ZipException
-                    ? "not a valid gzip stream: " : "cannot read: ") + ex.getMessage(), ex);
+                    ? "not a valid gzip stream: " : "cannot read: ") + (ex.getMessage() == null
+                    ? ex.getClass().getSimpleName() : ex.getMessage()), ex);
         }
         BlockPipe pipe = new BlockPipe(source, gzip);
         pipe.reader.start();

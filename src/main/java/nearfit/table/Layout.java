@@ -14,7 +14,13 @@ import java.util.List;
  * @param types         for each kept column, its type
  * @param dataOffset    the byte offset where the data rows start (after BOM and header)
  * @param dataLine      the 1-based line where the data rows start
+ * @param notes         warnings about the header for the load report (columns renamed), usually empty
  */
 record Layout(char delimiter, boolean decimalComma, boolean header, int width, List<String> names,
-        int[] fields, ColumnType[] types, long dataOffset, long dataLine) {
+        int[] fields, ColumnType[] types, long dataOffset, long dataLine, List<String> notes) {
+    /** A layout with no notes. */
+    Layout(char delimiter, boolean decimalComma, boolean header, int width, List<String> names,
+            int[] fields, ColumnType[] types, long dataOffset, long dataLine) {
+        this(delimiter, decimalComma, header, width, names, fields, types, dataOffset, dataLine, List.of());
+    }
 }

@@ -72,7 +72,8 @@ final class Sniffer {
             throw NearfitException.inFile(source, "header only: no data rows");
         }
         int width = rows.get(0).length;
-        List<String> allNames = names(header ? rows.get(0) : null, width);
+        List<String> renamed = new ArrayList<>();
+        List<String> allNames = names(header ? rows.get(0) : null, width, renamed);
         List<String[]> data = header ? rows.subList(1, rows.size()) : rows;
         long dataOffset = header ? ends.get(0) : bom;
         long dataLine = header ? (rows.size() > 1 ? lines.get(1) : line) : lines.get(0);
@@ -86,7 +87,9 @@ final class Sniffer {
             names.add(allNames.get(fields[j]));
             types[j] = typeOf(data, fields[j], decimalComma);
         }
-        return new Layout(delimiter, decimalComma, header, width, names, fields, types, dataOffset, dataLine);
+        return new Layout(delimiter, decimalComma, header, width, names, fields, types, dataOffset, dataLine,
+                renamed.isEmpty() ? List.of() : List.of("header names renamed to keep them unique: "
+                        + String.join("; ", renamed)));
     }
 
     /** Refuses binary input: a NUL byte is never in a UTF-8 CSV file (common practice for text sniffing). */
@@ -229,19 +232,40 @@ final class Sniffer {
         return ColumnType.CATEGORY;
     }
 
-    /** Header names made usable: blanks become colN, repeats get _2, _3, ... */
-    static List<String> names(String[] header, int width) {
+    /**
+     * Header names made usable: blanks become colN, repeats get _2, _3, ... A new name never takes one the
+     * header holds itself (in {@code a,a,a_2} the second {@code a} becomes {@code a_3}, so {@code a_2}
+     * still means the header's own column). What was renamed is added to {@code renamed}, one note each.
+     */
+    static List<String> names(String[] header, int width, List<String> renamed) {
+        Set<String> inHeader = new HashSet<>();
+        for (int i = 0; header != null && i < width; i++) {
+            if (!header[i].isEmpty()) {
+                inHeader.add(header[i]);
+            }
+        }
         List<String> out = new ArrayList<>(width);
         Set<String> used = new HashSet<>();
         for (int i = 0; i < width; i++) {
-            String name = header == null || header[i].isEmpty() ? "col" + (i + 1) : header[i];
+            boolean blank = header == null || header[i].isEmpty();
+            String name = blank ? "col" + (i + 1) : header[i];
             String unique = name;
-            for (int k = 2; !used.add(unique); k++) {
+            boolean free = blank ? !inHeader.contains(name) && used.add(name) : used.add(name);
+            for (int k = 2; !free; k++) {
                 unique = name + "_" + k;
+                free = !inHeader.contains(unique) && used.add(unique);
             }
             out.add(unique);
+            if (header != null && (blank || !unique.equals(name))) {
+                renamed.add("column " + (i + 1) + (blank ? " (blank)" : " (\"" + name + "\" again)") + " as " + unique);
+            }
         }
         return out;
+    }
+
+    /** As {@link #names(String[], int, List)}, without the notes. */
+    static List<String> names(String[] header, int width) {
+        return names(header, width, new ArrayList<>());
     }
 
     /** The field indexes of the kept columns, ascending and distinct; an unknown required name fails. */

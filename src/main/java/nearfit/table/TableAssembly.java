@@ -46,7 +46,7 @@ final class TableAssembly {
             columns.add(c);
         }
         LoadReport report = new LoadReport(source, rows, bytes, layout.delimiter(), layout.header(),
-                layout.decimalComma(), shortRows, longRows, ragged, badCells, bad, nanos);
+                layout.decimalComma(), shortRows, longRows, ragged, badCells, bad, nanos, layout.notes());
         return new Table(columns, first.lines, report);
     }
 

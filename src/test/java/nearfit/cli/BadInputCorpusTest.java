@@ -54,7 +54,17 @@ class BadInputCorpusTest {
                 // Bytes that are not UTF-8 are decoded with replacement characters, not refused.
                 new Case("latin1-bytes.csv", 0, "latin1-bytes.csv: 30 rows, 5 columns, delimiter comma, header row"),
                 new Case("windows-line-endings.csv", 0, "windows-line-endings.csv: 30 rows, 5 columns, delimiter comma, header row"),
-                new Case("good.csv", 0, "bad cells: 0 (read as missing)"));
+                new Case("good.csv", 0, "bad cells: 0 (read as missing)"),
+                // Escape sequences in a header name and in labels are shown as visible escapes.
+                new Case("escape-sequences.csv", 0, "  turbine\\e]2;pwned\\a\\e[2J: 8 distinct; most frequent T01 (4) T02 (4) "
+                        + "T03\\e[31m (4) T04 (4) T05 (4)"),
+                // air_temp_c twice beside air_temp_c_2: the second becomes air_temp_c_3, and the report says so.
+                new Case("repeated-names.csv", 0, "warning: header names renamed to keep them unique: column 6 "
+                        + "(\"air_temp_c\" again) as air_temp_c_3"),
+                new Case("gzip-magic-only.gz", 2, "nearfit: FILE: truncated gzip stream: the file ends inside the gzip "
+                        + "header (it holds the gzip magic bytes, but no compressed data)"),
+                new Case("relev\u00e9-donn\u00e9es.csv", 0, "relev\u00e9-donn\u00e9es.csv: 30 rows, 5 columns, "
+                        + "delimiter comma, header row"));
     }
 
     /**
@@ -70,6 +80,8 @@ class BadInputCorpusTest {
                         "nearfit: no usable reference rows: power_kw is missing in all 30 rows");
                 case "constant-input.csv" -> new Case(c.file(), 2, "nearfit: column air_temp_c: is constant (7.5) in "
                         + "the reference rows, so it cannot be scaled; leave it out");
+                // The renaming is said on standard error by every command, as a load warning.
+                case "repeated-names.csv" -> new Case(c.file(), 0, "nearfit: " + c.message());
                 default -> c.status() == 2 ? c : new Case(c.file(), 0, "");
             });
         }
@@ -107,7 +119,8 @@ class BadInputCorpusTest {
         if (c.status() == 2) {
             assertEquals(c.message().replace("FILE", file.toString()) + "\n", r.err());
         } else {
-            assertEquals("", r.err());
+            assertEquals(c.message().isEmpty() ? "" : c.message() + "\n", r.err());
+            assertTrue(r.out().indexOf('\u001b') < 0, () -> "an escape character on standard output: " + r.out());
             if (command.equals("fit")) {
                 assertTrue(Files.size(dir.resolve(c.file() + ".nfm")) > 0, "the model file is written");
             } else {
@@ -181,5 +194,57 @@ class BadInputCorpusTest {
         CliRun.Result r = run("describe", "--quiet", p.toString());
         assertEquals(0, r.status(), r.toString());
         assertTrue(r.out().contains("bad cells: 40 (read as missing)\n  line 1000002, column power_kw: \"offline\"\n"), r.out());
+    }
+
+    /** {@code a,a,a_2}: the name a_2 keeps meaning the header's own column, not the renamed second a. */
+    @Test
+    void aRepeatedNameNeverTakesANameTheHeaderHolds() throws IOException {
+        Path file = copy("repeated-names.csv");
+        Path model = dir.resolve("repeated.nfm");
+        CliRun.Result fit = run("fit", file.toString(), "-x", "air_temp_c_2", "-y", "power_kw", "--k", "3", "-o",
+                model.toString(), "--quiet");
+        assertEquals(0, fit.status(), fit::toString);
+        CliRun.Result predicted = run("predict", model.toString(), file.toString(), "--quiet");
+        assertEquals(0, predicted.status(), predicted::toString);
+        List<String> lines = predicted.out().lines().toList();
+        assertTrue(lines.get(0).startsWith("line,air_temp_c_2,power_kw,"), lines.get(0));
+        // The header's air_temp_c_2 holds 0, -1, -2, ...; the second air_temp_c (now air_temp_c_3) 0, 1, 2, ...
+        assertTrue(lines.get(3).startsWith("4,-2.0,") || lines.get(3).startsWith("4,-2,"), lines.get(3));
+    }
+
+    @Test
+    void checkAndPlotShowEscapeSequencesOfAGroupColumnVisibly() throws IOException {
+        Path file = copy("escape-sequences.csv");
+        String group = "turbine\u001b]2;pwned\u0007\u001b[2J";
+        Path model = dir.resolve("escape.nfm");
+        CliRun.Result fit = run("fit", file.toString(), "-x", "wind_ms", "-y", "power_kw", "--k", "3", "--group", group,
+                "-o", model.toString(), "--quiet");
+        assertEquals(0, fit.status(), fit::toString);
+        CliRun.Result check = run("check", model.toString(), file.toString(), "--threshold", "0.01", "--quiet");
+        assertEquals(1, check.status(), check::toString);
+        assertTrue(check.out().contains("turbine\\e]2;pwned\\a\\e[2J") && check.out().contains("T03\\e[31m"), check.out());
+        StringBuilder csv = new StringBuilder("wind\u001b]2;x\u0007_ms,power\n");
+        for (int i = 0; i < 40; i++) {
+            csv.append(i).append(',').append(i * i % 17).append('\n');
+        }
+        Path named = Files.writeString(dir.resolve("named.csv"), csv);
+        CliRun.Result plot = run("plot", named.toString(), "-x", "wind\u001b]2;x\u0007_ms", "-y", "power", "--k", "3",
+                "--quiet");
+        assertEquals(0, plot.status(), plot::toString);
+        assertTrue(plot.out().contains("wind\\e]2;x\\a_ms"), plot::toString);
+        for (CliRun.Result r : List.of(check, plot)) {
+            assertTrue(r.out().indexOf('\u001b') < 0 && r.out().indexOf('\u0007') < 0, r::toString);
+            assertTrue(r.err().indexOf('\u001b') < 0 && r.err().indexOf('\u0007') < 0, r::toString);
+        }
+    }
+
+    @Test
+    void anErrorMessageQuotingTheFilesColumnsShowsTheirEscapesVisibly() throws IOException {
+        Path file = copy("escape-sequences.csv");
+        CliRun.Result r = run("tune", file.toString(), "-x", "wind_ms", "-y", "power_kw", "--where", "nothing = 1",
+                "--quiet");
+        assertEquals(2, r.status(), r::toString);
+        assertEquals("nearfit: --where: no column \"nothing\" in " + file + " (columns: time, turbine\\e]2;pwned\\a\\e[2J, "
+                + "wind_ms, power_kw, air_temp_c)\n", r.err());
     }
 }

@@ -84,4 +84,52 @@ class DescribeCommandTest {
         assertEquals("nearfit: " + dir.resolve("absent.csv") + ": no such file\n", r.err());
         assertEquals("", r.out());
     }
+
+    @Test
+    void numbersKeepTheirExponentAndTheZerosOfAnInteger() {
+        // Before: a trailing-zero rule also ate the exponent's and an integer's zeros (1e+2, -1.5e-2, 1).
+        assertEquals("1e+20", DescribeCommand.number(1e20));
+        assertEquals("-1.5e-20", DescribeCommand.number(-1.5e-20));
+        assertEquals("100000", DescribeCommand.number(100000));
+        assertEquals("2.5", DescribeCommand.number(2.5));
+        assertEquals("20", DescribeCommand.number(20));
+        assertEquals("1.03", DescribeCommand.number(1.03));
+    }
+
+    /**
+     * Checked against Java's own parser (Double.parseDouble) on random doubles of every magnitude: what is
+     * printed reads back to the value within half a unit of its sixth significant digit.
+     */
+    @Test
+    void aPrintedNumberReadsBackToTheValueWithinTheShownPrecision() {
+        java.util.SplittableRandom random = new java.util.SplittableRandom(15);
+        for (int i = 0; i < 200_000; i++) {
+            double v = i % 2 == 0 ? Double.longBitsToDouble(random.nextLong())
+                    : (random.nextDouble() - 0.5) * Math.pow(10, random.nextInt(-30, 30));
+            if (!Double.isFinite(v)) {
+                continue;
+            }
+            String shown = DescribeCommand.number(v);
+            double back = Double.parseDouble(shown);
+            // Half a unit in the sixth significant digit of the printed value (scaled by the decimal exponent).
+            java.math.BigDecimal exact = new java.math.BigDecimal(v);
+            java.math.BigDecimal read = new java.math.BigDecimal(shown);
+            java.math.BigDecimal unit = v == 0 ? java.math.BigDecimal.ZERO
+                    : java.math.BigDecimal.ONE.scaleByPowerOfTen(exact.precision() - exact.scale() - 6);
+            assertTrue(exact.subtract(read).abs().compareTo(unit.divide(java.math.BigDecimal.valueOf(2))) <= 0,
+                    () -> v + " printed as " + shown);
+            assertTrue(back == 0 ? v == 0 || Math.abs(v) < Double.MIN_NORMAL * 1e6 : Math.signum(back) == Math.signum(v),
+                    () -> v + " printed as " + shown);
+        }
+    }
+
+    @Test
+    void escapeSequencesInNamesAndLabelsArePrintedVisiblyNotSentToTheTerminal() throws IOException {
+        Path p = Files.writeString(dir.resolve("esc.csv"), "wind_ms,\u001b]2;pwned\u0007\u001b[2J\n"
+                + "1,T01\u001b[31m\n2,T02\n3,T01\u001b[31m\n");
+        Result r = run("describe", p.toString(), "--quiet");
+        assertEquals(0, r.status(), r.err());
+        assertTrue(r.out().indexOf('\u001b') < 0 && r.out().indexOf('\u0007') < 0, r.out());
+        assertTrue(r.out().contains("\\e]2;pwned\\a\\e[2J: 2 distinct; most frequent T01\\e[31m (2) T02 (1)"), r.out());
+    }
 }
