@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
 
+import nearfit.knn.EstimateKind;
 import nearfit.table.NearfitException;
 import nearfit.tui.CoreWorkbench;
 import nearfit.tui.Look;
@@ -39,6 +40,10 @@ final class ViewCommand implements Callable<Integer> {
     @Option(names = "--k", paramLabel = "K", description = "Neighbours per estimate (default 20).")
     int k;
 
+    @Option(names = "--estimate", paramLabel = "mean|median",
+            description = "The curve: the neighbours' weighted mean or weighted median (default: mean; the c key switches).")
+    String estimate;
+
     @Option(names = "--ascii", description = "Draw with plain ASCII instead of braille and box lines.")
     boolean ascii;
 
@@ -50,6 +55,8 @@ final class ViewCommand implements Callable<Integer> {
         if (k < 0) {
             throw new NearfitException("option --k: k must be at least 1, not " + k);
         }
+        EstimateKind curve = EstimateKind.valueOf(OptionValues.oneOf("--estimate", estimate == null ? "mean" : estimate,
+                nearfit.model.ModelSettings.ESTIMATES).toUpperCase(java.util.Locale.ROOT));
         Path target = file;
         List<String> x = inputs;
         String y = response;
@@ -73,7 +80,7 @@ final class ViewCommand implements Callable<Integer> {
             return Main.EXIT_USAGE;
         }
         return TerminalSession.run(TerminalSession.systemScreen(), target, target.toString(), CoreWorkbench::open,
-                new StartSettings(x, y, k), Look.of(ascii, System.getenv()), err);
+                new StartSettings(x, y, k, curve), Look.of(ascii, System.getenv()), err);
     }
 
     static Path demoLog(Map<String, String> env) {

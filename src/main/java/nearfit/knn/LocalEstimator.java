@@ -8,7 +8,9 @@ import java.util.Arrays;
  * places equally. Every sum runs over the neighbours sorted by (key, response), an order that does
  * not depend on row order or threads, so results are bit-identical under shuffles. Uniform fit:
  * {@code (P[s] + (k - s) (P[e] - P[s]) / (e - s)) / k} with P the prefix sums of y; weighted fits
- * use prefix sums of w*y and w the same way. Per-thread scratch, reused; not thread-safe.
+ * use prefix sums of w*y and w the same way. The median visits the neighbours in response order,
+ * sorted once per load, so the all-k tuning pass gets the median at every k without a sort per k.
+ * Per-thread scratch, reused; not thread-safe.
  */
 final class LocalEstimator {
     private final Metric metric;
@@ -20,6 +22,9 @@ final class LocalEstimator {
     private double[] pwy = new double[17];
     private double[] tmpV = new double[16];
     private double[] tmpW = new double[16];
+    private double[] orderVal = new double[16];
+    private double[] orderPos = new double[16]; // neighbour index as a double, to sort pairs by (value, index)
+    private boolean valueOrdered;
     private Weighting preparedFor;
     private int preparedK;
 
@@ -40,6 +45,7 @@ final class LocalEstimator {
         count = n;
         PairSort.sort(key, val, 0, n);
         preparedFor = null;
+        valueOrdered = false;
     }
 
     private void ensure(int n) {
@@ -50,6 +56,8 @@ final class LocalEstimator {
             weight = new double[len];
             tmpV = new double[len];
             tmpW = new double[len];
+            orderVal = new double[len];
+            orderPos = new double[len];
             pw = new double[len + 1];
             pwy = new double[len + 1];
         }
@@ -167,6 +175,40 @@ final class LocalEstimator {
     double quantile(int k, double p) {
         int m = collect(k, Double.NaN);
         return Quantiles.weightedSortedQuantile(tmpV, tmpW, m, p);
+    }
+
+    /** The fit of the given kind at k; {@link #prepare} must have been called as for {@link #fit}. */
+    double estimate(EstimateKind kind, int k) {
+        return kind == EstimateKind.MEDIAN ? median(k) : fit(k);
+    }
+
+    /**
+     * Weighted median of the responses at k: the same value as {@code quantile(k, 0.5)}, the counted
+     * (value, share weight) pairs in (value, weight) order, but gathered from a response order kept
+     * for the whole load, so the pairs arrive sorted but for weights within equal values.
+     */
+    double median(int k) {
+        if (!valueOrdered) {
+            for (int i = 0; i < count; i++) {
+                orderVal[i] = val[i];
+                orderPos[i] = i;
+            }
+            PairSort.sort(orderVal, orderPos, 0, count);
+            valueOrdered = true;
+        }
+        int s = closer(k);
+        int e = counted(k);
+        int m = 0;
+        for (int j = 0; j < count; j++) {
+            int i = (int) orderPos[j];
+            double w = shareWeight(i, k, s, e);
+            if (w > 0) {
+                tmpV[m] = orderVal[j];
+                tmpW[m++] = w;
+            }
+        }
+        PairSort.sort(tmpV, tmpW, 0, m);
+        return Quantiles.weightedSortedQuantile(tmpV, tmpW, m, 0.5);
     }
 
     /** Weighted MAD of the responses at k: weighted median of |y - weighted median|. */
