@@ -110,7 +110,8 @@ final class PlotCommand implements Callable<Integer> {
         ReferenceData data = engine.data();
         double[] x = data.input(0);
         Scene.Builder b = Scene.builder(x, data.isCategory() ? classesAsNumbers(data) : data.response());
-        String title = "k = " + engine.settings().k() + ", " + data.size() + " rows"
+        String title = "k = " + engine.settings().k() + ("median".equals(model.estimate()) ? ", median" : "")
+                + ", " + data.size() + " rows"
                 + (model.where == null ? "" : ", " + model.where.trim());
         b.labels(title, data.inputNames()[0], data.responseName());
         if (input.source().table().column(data.inputNames()[0]) instanceof TimeColumn) {
