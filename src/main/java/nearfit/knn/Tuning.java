@@ -9,8 +9,8 @@ import nearfit.table.NearfitException;
  * kmax in one neighbour pass per evaluated row. Each row's kmax neighbours (its own position
  * excluded; duplicates of it still count) give the fits at every k through prefix sums under the
  * tie rule, exactly the fits {@link Searcher} computes with that row left out, under the settings'
- * {@link EstimateKind}: the mean from prefix sums in O(1) per k, the median in O(kmax) per k from
- * the neighbours sorted by response once per row (class responses vote either way). Partial sums are
+ * {@link EstimateKind}: the mean from prefix sums in O(1) per k, the median from the neighbours
+ * sorted by response once per row ({@link LocalEstimator#medians}; class responses vote either way). Partial sums are
  * kept per fixed chunk of rows and added in chunk order, so the table does not depend on the
  * thread count, and the canonical row order makes it independent of row order.
  */
@@ -263,8 +263,8 @@ public final class Tuning {
         final int[] map;
         final int kmax;
         final Weighting weighting;
-        final EstimateKind estimate;
         final boolean median;
+        final double[] fits;
         final double[] y;
         final int[] classes;
         final double[] indexValues;
@@ -280,8 +280,8 @@ public final class Tuning {
             this.map = map;
             this.kmax = kmax;
             this.weighting = model.settings().weighting();
-            this.estimate = model.settings().estimate();
-            this.median = estimate == EstimateKind.MEDIAN;
+            this.median = model.settings().estimate() == EstimateKind.MEDIAN;
+            this.fits = new double[kmax];
             this.est = new LocalEstimator(model.settings().metric());
             ReferenceData data = model.data();
             this.y = data.response();
@@ -324,14 +324,19 @@ public final class Tuning {
             }
             est.load(list, indexValues);
             double truth = y != null ? y[pos] : classes[pos];
+            if (median && classes == null) {
+                est.medians(weighting, kmax, fits);
+            }
             for (int k = 1; k <= kmax; k++) {
-                est.prepare(weighting, k);
                 int o = (k - 1) * SUMS;
+                if (!median || classes != null) {
+                    est.prepare(weighting, k); // the medians were weighted inside medians()
+                }
                 if (classes != null) {
                     int winner = est.vote(k, shares, nearest);
                     sums[o + 3] += winner == (int) truth ? 0 : 1;
                 } else {
-                    double e = truth - est.estimate(estimate, k);
+                    double e = truth - (median ? fits[k - 1] : est.fit(k));
                     double e2 = e * e;
                     sums[o] += e2;
                     sums[o + 1] += e2 * e2;

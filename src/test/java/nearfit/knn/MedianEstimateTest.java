@@ -110,6 +110,30 @@ class MedianEstimateTest {
         }
     }
 
+    @Property(tries = 40)
+    void theMediansForEveryKInTurnEqualTheMedianAtEachK(@ForAll long seed, @ForAll @IntRange(min = 1, max = 3) int d,
+                                                        @ForAll @IntRange(min = 1, max = 30) int kmax) {
+        ReferenceData data = TuningTest.coarse(seed, 150, d); // ties at the k-th neighbour are common
+        Random r = new Random(seed);
+        double[] all = new double[kmax];
+        for (Weighting w : Weighting.values()) {
+            KnnModel m = KnnModel.fit(data, KnnSettings.defaults().withK(kmax).withWeighting(w).withThreads(1));
+            Searcher s = m.searcher();
+            for (int t = 0; t < 10; t++) {
+                int row = r.nextInt(150);
+                double[] q = java.util.Arrays.copyOfRange(m.coords(), row * d, row * d + d);
+                s.find(q, kmax, row);
+                LocalEstimator est = s.estimator();
+                est.load(s.list(), data.response());
+                est.medians(w, kmax, all);
+                for (int k = 1; k <= kmax; k++) {
+                    est.prepare(w, k);
+                    assertEquals(est.median(k), all[k - 1], w + " k=" + k);
+                }
+            }
+        }
+    }
+
     @Property(tries = 12)
     void allKTuningUnderTheMedianEqualsLeaveOneOutFlagsAtEachK(@ForAll long seed,
                                                               @ForAll @IntRange(min = 1, max = 3) int d) {
