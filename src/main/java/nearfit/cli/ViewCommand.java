@@ -5,10 +5,12 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
 
 import nearfit.knn.EstimateKind;
+import nearfit.model.ModelSettings;
 import nearfit.table.NearfitException;
 import nearfit.tui.CoreWorkbench;
 import nearfit.tui.Look;
@@ -41,7 +43,8 @@ final class ViewCommand implements Callable<Integer> {
     int k;
 
     @Option(names = "--estimate", paramLabel = "mean|median",
-            description = "The curve: the neighbours' weighted mean or weighted median (default: mean; the c key switches).")
+            description = "The curve: the neighbours' weighted mean or weighted median "
+                    + "(default: mean; the c key switches).")
     String estimate;
 
     @Option(names = "--ascii", description = "Draw with plain ASCII instead of braille and box lines.")
@@ -55,8 +58,8 @@ final class ViewCommand implements Callable<Integer> {
         if (k < 0) {
             throw new NearfitException("option --k: k must be at least 1, not " + k);
         }
-        EstimateKind curve = EstimateKind.valueOf(OptionValues.oneOf("--estimate", estimate == null ? "mean" : estimate,
-                nearfit.model.ModelSettings.ESTIMATES).toUpperCase(java.util.Locale.ROOT));
+        String word = estimate == null ? "mean" : OptionValues.oneOf("--estimate", estimate, ModelSettings.ESTIMATES);
+        EstimateKind curve = EstimateKind.valueOf(word.toUpperCase(Locale.ROOT));
         Path target = file;
         List<String> x = inputs;
         String y = response;

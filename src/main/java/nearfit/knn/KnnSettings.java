@@ -30,7 +30,8 @@ public record KnnSettings(int k, Metric metric, Weighting weighting, Scaling sca
         }
         if (metric == null || weighting == null || scaling == null || band == null || estimate == null
                 || flagScale == null) {
-            throw new NearfitException("model settings need a metric, weighting, scaling, band, estimate and flag scale");
+            throw new NearfitException(
+                    "model settings need a metric, weighting, scaling, band, estimate and flag scale");
         }
         if (!(flagThreshold > 0)) {
             throw new NearfitException("the flag threshold must be positive, got " + flagThreshold);

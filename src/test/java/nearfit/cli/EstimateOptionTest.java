@@ -100,5 +100,8 @@ class EstimateOptionTest {
                 "-o", dir.resolve("bad.nfm").toString());
         assertEquals(2, r.status(), r.toString());
         assertTrue(r.err().contains("--estimate") && r.err().contains("mean, median"), r.err());
+        CliRun.Result view = CliRun.inProcess("view", reference.toString(), "--estimate", "mode");
+        assertEquals(2, view.status(), view.toString());
+        assertTrue(view.err().contains("--estimate: \"mode\" is not one of mean, median"), view.err());
     }
 }
