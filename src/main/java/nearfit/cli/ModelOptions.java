@@ -24,6 +24,12 @@ final class ModelOptions {
             description = "Band around the fit: q10-q90, q05-q95, sd2, none (default: q05-q95; predict and check: the model's).")
     String band;
 
+    @Option(names = "--estimate", paramLabel = "mean|median",
+            description = "The fit: the neighbours' weighted mean, or their weighted median (the band's quantile rule "
+                    + "at 0.5), which rows far off the rest (curtailment, icing) move less; tune and the flags use it "
+                    + "too (default: mean; predict and check: the model's).")
+    String estimate;
+
     @Option(names = "--z-scale", paramLabel = "local|reference",
             description = "What divides a residual to make z: local (the k neighbours' SD at the row) or reference "
                     + "(1.4826 MAD of the reference's leave-one-out residuals) (default: local; predict and check: the model's).")
@@ -64,6 +70,10 @@ final class ModelOptions {
         return word("--z-scale", zScale, "local", ModelSettings.Z_SCALES);
     }
 
+    String estimate() {
+        return word("--estimate", estimate, "mean", ModelSettings.ESTIMATES);
+    }
+
     String band() {
         return word("--band", band, "q05-q95", ModelSettings.BANDS);
     }
@@ -77,7 +87,7 @@ final class ModelOptions {
         return new ModelSettings(metric == null ? stored.metric() : metric(),
                 weights == null ? stored.weights() : weights(), scale == null ? stored.scaling() : scale(),
                 stored.k(), band == null ? stored.band() : band(), stored.flagThreshold(),
-                zScale == null ? stored.zScale() : zScale());
+                zScale == null ? stored.zScale() : zScale(), estimate == null ? stored.estimate() : estimate());
     }
 
     /** The thread count: the option's value, or every available core. */
@@ -93,11 +103,12 @@ final class ModelOptions {
         scale();
         band();
         zScale();
+        estimate();
         threads();
     }
 
     /** The settings for a given k and flag threshold. */
     ModelSettings settings(int k, double flagThreshold) {
-        return new ModelSettings(metric(), weights(), scale(), k, band(), flagThreshold, zScale());
+        return new ModelSettings(metric(), weights(), scale(), k, band(), flagThreshold, zScale(), estimate());
     }
 }

@@ -126,7 +126,8 @@ final class PlotCommand implements Callable<Integer> {
         ReferenceData data = engine.data();
         double[] x = data.input(0);
         Scene.Builder b = Scene.builder(x, data.isCategory() ? classesAsNumbers(data) : data.response());
-        String title = "k = " + engine.settings().k() + ", " + data.size() + " rows"
+        String title = "k = " + engine.settings().k() + ("median".equals(model.estimate()) ? ", median" : "")
+                + ", " + data.size() + " rows"
                 + (model.where == null ? "" : ", " + model.where.trim());
         // Names come from the file: control characters are made visible before they reach a terminal.
         b.labels(VisibleText.of(title), VisibleText.of(data.inputNames()[0]), VisibleText.of(data.responseName()));

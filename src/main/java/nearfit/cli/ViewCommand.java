@@ -5,9 +5,12 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
 
+import nearfit.knn.EstimateKind;
+import nearfit.model.ModelSettings;
 import nearfit.table.NearfitException;
 import nearfit.tui.CoreWorkbench;
 import nearfit.tui.Look;
@@ -39,6 +42,11 @@ final class ViewCommand implements Callable<Integer> {
     @Option(names = "--k", paramLabel = "K", description = "Neighbours per estimate (default 20).")
     int k;
 
+    @Option(names = "--estimate", paramLabel = "mean|median",
+            description = "The curve: the neighbours' weighted mean or weighted median "
+                    + "(default: mean; the c key switches).")
+    String estimate;
+
     @Option(names = "--ascii", description = "Draw with plain ASCII instead of braille and box lines.")
     boolean ascii;
 
@@ -50,6 +58,8 @@ final class ViewCommand implements Callable<Integer> {
         if (k < 0) {
             throw new NearfitException("option --k: k must be at least 1, not " + k);
         }
+        String word = estimate == null ? "mean" : OptionValues.oneOf("--estimate", estimate, ModelSettings.ESTIMATES);
+        EstimateKind curve = EstimateKind.valueOf(word.toUpperCase(Locale.ROOT));
         Path target = file;
         List<String> x = inputs;
         String y = response;
@@ -73,7 +83,7 @@ final class ViewCommand implements Callable<Integer> {
             return Main.EXIT_USAGE;
         }
         return TerminalSession.run(TerminalSession.systemScreen(), target, target.toString(), CoreWorkbench::open,
-                new StartSettings(x, y, k), Look.of(ascii, System.getenv()), err);
+                new StartSettings(x, y, k, curve), Look.of(ascii, System.getenv()), err);
     }
 
     static Path demoLog(Map<String, String> env) {

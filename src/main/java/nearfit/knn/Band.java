@@ -6,7 +6,7 @@ public enum Band {
     Q10_Q90(0.10, 0.90),
     /** Weighted 5% and 95% quantiles. */
     Q05_Q95(0.05, 0.95),
-    /** Weighted mean plus and minus two weighted SDs. */
+    /** The fit plus and minus two weighted SDs (the neighbours' spread about their weighted mean). */
     SD2(Double.NaN, Double.NaN),
     /** No band; low and high are NaN. */
     NONE(Double.NaN, Double.NaN);

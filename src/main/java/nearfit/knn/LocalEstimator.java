@@ -8,7 +8,9 @@ import java.util.Arrays;
  * places equally. Every sum runs over the neighbours sorted by (key, response), an order that does
  * not depend on row order or threads, so results are bit-identical under shuffles. Uniform fit:
  * {@code (P[s] + (k - s) (P[e] - P[s]) / (e - s)) / k} with P the prefix sums of y; weighted fits
- * use prefix sums of w*y and w the same way. Per-thread scratch, reused; not thread-safe.
+ * use prefix sums of w*y and w the same way. The median visits the neighbours in response order,
+ * sorted once per load, so the all-k tuning pass gets the median at every k without a sort per k.
+ * Per-thread scratch, reused; not thread-safe.
  */
 final class LocalEstimator {
     private final Metric metric;
@@ -20,6 +22,10 @@ final class LocalEstimator {
     private double[] pwy = new double[17];
     private double[] tmpV = new double[16];
     private double[] tmpW = new double[16];
+    private double[] orderVal = new double[16];
+    private double[] orderPos = new double[16]; // neighbour index as a double, to sort pairs by (value, index)
+    private boolean valueOrdered;
+    private double[] prefix = new double[16]; // the first k responses (key order) sorted ascending
     private Weighting preparedFor;
     private int preparedK;
 
@@ -40,6 +46,7 @@ final class LocalEstimator {
         count = n;
         PairSort.sort(key, val, 0, n);
         preparedFor = null;
+        valueOrdered = false;
     }
 
     private void ensure(int n) {
@@ -50,6 +57,9 @@ final class LocalEstimator {
             weight = new double[len];
             tmpV = new double[len];
             tmpW = new double[len];
+            orderVal = new double[len];
+            orderPos = new double[len];
+            prefix = new double[len];
             pw = new double[len + 1];
             pwy = new double[len + 1];
         }
@@ -167,6 +177,59 @@ final class LocalEstimator {
     double quantile(int k, double p) {
         int m = collect(k, Double.NaN);
         return Quantiles.weightedSortedQuantile(tmpV, tmpW, m, p);
+    }
+
+    /**
+     * Weighted median of the responses at k: the same value as {@code quantile(k, 0.5)}, the counted
+     * (value, share weight) pairs in (value, weight) order, but gathered from a response order kept
+     * for the whole load, so the pairs arrive sorted but for weights within equal values.
+     */
+    double median(int k) {
+        if (!valueOrdered) {
+            for (int i = 0; i < count; i++) {
+                orderVal[i] = val[i];
+                orderPos[i] = i;
+            }
+            PairSort.sort(orderVal, orderPos, 0, count);
+            valueOrdered = true;
+        }
+        int s = closer(k);
+        int e = counted(k);
+        int m = 0;
+        for (int j = 0; j < count; j++) {
+            int i = (int) orderPos[j];
+            double w = shareWeight(i, k, s, e);
+            if (w > 0) {
+                tmpV[m] = orderVal[j];
+                tmpW[m++] = w;
+            }
+        }
+        PairSort.sort(tmpV, tmpW, 0, m);
+        return Quantiles.weightedSortedQuantile(tmpV, tmpW, m, 0.5);
+    }
+
+    /**
+     * The median at every k from 1 to kmax into {@code out[k - 1]}, each equal to {@link #median(int)}
+     * after {@link #prepare} for that k. With uniform weights and no row tied with the k-th beyond it,
+     * every share weight is 1 and the median is definition 7's of the first k responses: kept sorted by
+     * one insertion per k, so such a k costs O(1) beyond the insertion instead of a walk of the list.
+     */
+    void medians(Weighting w, int kmax, double[] out) {
+        for (int k = 1; k <= kmax; k++) {
+            double v = val[k - 1];
+            int at = k - 1;
+            while (at > 0 && prefix[at - 1] > v) {
+                at--;
+            }
+            System.arraycopy(prefix, at, prefix, at + 1, k - 1 - at);
+            prefix[at] = v;
+            if (w == Weighting.UNIFORM && counted(k) == k) {
+                out[k - 1] = Quantiles.sortedQuantile(prefix, k, 0.5);
+            } else {
+                prepare(w, k);
+                out[k - 1] = median(k);
+            }
+        }
     }
 
     /** Weighted MAD of the responses at k: weighted median of |y - weighted median|. */

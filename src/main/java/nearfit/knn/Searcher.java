@@ -109,7 +109,8 @@ public final class Searcher {
     /**
      * The full estimate at scaled coordinates q into slot i of out, position {@code exclude} left
      * out (none when negative). Neighbours that are exactly one long tied run are summed from the
-     * run's totals ({@link TiedRuns}), the others row by row.
+     * run's totals ({@link TiedRuns}; its median is the run's definition-7 quantile at 0.5), the
+     * others row by row.
      */
     void estimateAt(double[] q, int exclude, Estimates out, int i) {
         KnnSettings s = model.settings();
@@ -123,8 +124,9 @@ public final class Searcher {
         double high = Double.NaN;
         double key;
         int counted;
+        boolean median = s.estimate() == EstimateKind.MEDIAN;
         if (run >= 0) {
-            fit = runs.mean(run, exclude);
+            fit = median ? runs.quantile(run, exclude, 0.5) : runs.mean(run, exclude);
             sd = runs.sd(run, exclude);
             if (band.isQuantile()) {
                 low = runs.quantile(run, exclude, band.lowProbability());
@@ -134,8 +136,9 @@ public final class Searcher {
             counted = runs.size(run, exclude);
         } else {
             LocalEstimator est = rowByRow(q, k, exclude);
-            fit = est.fit(k);
-            sd = est.sd(k, fit);
+            double mean = est.fit(k);
+            sd = est.sd(k, mean); // the spread about the mean under either estimate
+            fit = median ? est.median(k) : mean;
             if (band.isQuantile()) {
                 low = est.quantile(k, band.lowProbability());
                 high = est.quantile(k, band.highProbability());
@@ -156,22 +159,24 @@ public final class Searcher {
     }
 
     /**
-     * The fit at scaled coordinates q for k with position {@code exclude} left out; afterwards
+     * The fit (the settings' estimate) at scaled coordinates q for k with position {@code exclude} left out; afterwards
      * {@link #localScale()} holds the neighbours' spread the flag scale asks for (their SD, or
      * 1.4826 times their MAD; NaN for the global scale). Long tied runs are summed from their
      * totals, except for the local MAD, which walks the rows.
      */
     double fitLeavingOut(double[] q, int k, int exclude, FlagScale scale) {
+        boolean median = model.settings().estimate() == EstimateKind.MEDIAN;
         TiedRuns runs = model.tiedRuns();
         int run = runs == null || scale == FlagScale.LOCAL_MAD ? -1 : runs.runFor(q[0], k, exclude);
         if (run >= 0) {
             localScale = scale == FlagScale.LOCAL_SD ? runs.sd(run, exclude) : Double.NaN;
-            return runs.mean(run, exclude);
+            return median ? runs.quantile(run, exclude, 0.5) : runs.mean(run, exclude);
         }
         rowByRow(q, k, exclude);
-        double fit = estimator.fit(k);
+        double mean = estimator.fit(k);
+        double fit = median ? estimator.median(k) : mean;
         if (scale == FlagScale.LOCAL_SD) {
-            localScale = estimator.sd(k, fit);
+            localScale = estimator.sd(k, mean);
         } else if (scale == FlagScale.LOCAL_MAD) {
             localScale = InputTransform.MAD_TO_SD * estimator.mad(k);
         } else {

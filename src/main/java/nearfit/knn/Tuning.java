@@ -8,7 +8,9 @@ import nearfit.table.NearfitException;
  * Choosing k: leave-one-out (full or sampled) and k-fold cross-validation for every k from 1 to
  * kmax in one neighbour pass per evaluated row. Each row's kmax neighbours (its own position
  * excluded; duplicates of it still count) give the fits at every k through prefix sums under the
- * tie rule, exactly the fits {@link Searcher} computes with that row left out. Partial sums are
+ * tie rule, exactly the fits {@link Searcher} computes with that row left out, under the settings'
+ * {@link EstimateKind}: the mean from prefix sums in O(1) per k, the median from the neighbours
+ * sorted by response once per row ({@link LocalEstimator#medians}; class responses vote either way). Partial sums are
  * kept per fixed chunk of rows and added in chunk order, so the table does not depend on the
  * thread count, and the canonical row order makes it independent of row order.
  */
@@ -261,6 +263,8 @@ public final class Tuning {
         final int[] map;
         final int kmax;
         final Weighting weighting;
+        final boolean median;
+        final double[] fits;
         final double[] y;
         final int[] classes;
         final double[] indexValues;
@@ -276,6 +280,8 @@ public final class Tuning {
             this.map = map;
             this.kmax = kmax;
             this.weighting = model.settings().weighting();
+            this.median = model.settings().estimate() == EstimateKind.MEDIAN;
+            this.fits = new double[kmax];
             this.est = new LocalEstimator(model.settings().metric());
             ReferenceData data = model.data();
             this.y = data.response();
@@ -299,7 +305,7 @@ public final class Tuning {
             int run = runs == null ? -1 : runs.runFor(q[0], kmax, exclude);
             if (run >= 0) {
                 // the run holds every counted neighbour for each k up to kmax: one fit for all k
-                double e = y[pos] - runs.mean(run, exclude);
+                double e = y[pos] - (median ? runs.quantile(run, exclude, 0.5) : runs.mean(run, exclude));
                 double e2 = e * e;
                 for (int o = 0; o < kmax * SUMS; o += SUMS) {
                     sums[o] += e2;
@@ -318,14 +324,19 @@ public final class Tuning {
             }
             est.load(list, indexValues);
             double truth = y != null ? y[pos] : classes[pos];
+            if (median && classes == null) {
+                est.medians(weighting, kmax, fits);
+            }
             for (int k = 1; k <= kmax; k++) {
-                est.prepare(weighting, k);
                 int o = (k - 1) * SUMS;
+                if (!median || classes != null) {
+                    est.prepare(weighting, k); // the medians were weighted inside medians()
+                }
                 if (classes != null) {
                     int winner = est.vote(k, shares, nearest);
                     sums[o + 3] += winner == (int) truth ? 0 : 1;
                 } else {
-                    double e = truth - est.fit(k);
+                    double e = truth - (median ? fits[k - 1] : est.fit(k));
                     double e2 = e * e;
                     sums[o] += e2;
                     sums[o + 1] += e2 * e2;

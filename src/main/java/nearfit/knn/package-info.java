@@ -45,8 +45,12 @@
  * <li><b>Long tied runs.</b> With one input, a query whose counted neighbours are exactly one
  *     run of at least 64 equal coordinates (a rounded sensor) is answered from the run's totals in
  *     O(log n): every weighting gives such a run equal weights, so fit, local SD and band are the
- *     run's mean, SD and definition-7 quantiles, equal to the row-by-row result up to rounding
+ *     run's mean (or definition-7 median, under {@link nearfit.knn.EstimateKind#MEDIAN}), SD and
+ *     definition-7 quantiles, equal to the row-by-row result up to rounding
  *     (the local MAD still walks the rows).</li>
+ * <li><b>Estimate.</b> The fit is the neighbours' weighted mean, or with
+ *     {@link nearfit.knn.KnnSettings#estimate()} {@link nearfit.knn.EstimateKind#MEDIAN} their weighted
+ *     median by the band's quantile rule at 0.5; leave-one-out (tuning, flags) uses the same estimate.</li>
  * <li><b>Units.</b> Window width is in the input's own units with one input and in scaled units
  *     with several. Distances in {@link nearfit.knn.NeighborList} are keys (squared for Euclidean).</li>
  * <li><b>Threads.</b> Models and indexes are immutable and shared; a {@link nearfit.knn.Searcher}

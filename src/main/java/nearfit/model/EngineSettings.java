@@ -3,6 +3,7 @@ package nearfit.model;
 import java.util.Locale;
 
 import nearfit.knn.Band;
+import nearfit.knn.EstimateKind;
 import nearfit.knn.FlagScale;
 import nearfit.knn.KnnSettings;
 import nearfit.knn.Metric;
@@ -20,14 +21,16 @@ public final class EngineSettings {
     /** The engine settings for the given words and thread count. */
     public static KnnSettings of(ModelSettings s, int threads) {
         return new KnnSettings(s.k(), Metric.valueOf(upper(s.metric())), Weighting.valueOf(upper(s.weights())),
-                Scaling.valueOf(upper(s.scaling())), Band.valueOf(upper(s.band())), s.flagThreshold(),
+                Scaling.valueOf(upper(s.scaling())), Band.valueOf(upper(s.band())),
+                EstimateKind.valueOf(upper(s.estimate())), s.flagThreshold(),
                 "local".equals(s.zScale()) ? FlagScale.LOCAL_SD : FlagScale.GLOBAL_MAD, threads);
     }
 
     /** The words for engine settings. */
     public static ModelSettings words(KnnSettings s) {
         return new ModelSettings(lower(s.metric()), lower(s.weighting()), lower(s.scaling()), s.k(),
-                lower(s.band()), s.flagThreshold(), s.flagScale() == FlagScale.GLOBAL_MAD ? "reference" : "local");
+                lower(s.band()), s.flagThreshold(), s.flagScale() == FlagScale.GLOBAL_MAD ? "reference" : "local",
+                lower(s.estimate()));
     }
 
     static String upper(String word) {

@@ -27,6 +27,11 @@ final class ManifestFields {
         return s;
     }
 
+    /** Text, or the fallback when the key is absent (a field added after files were written). */
+    static String textOr(Map<?, ?> m, String key, String fallback) {
+        return m.containsKey(key) ? text(m, key) : fallback;
+    }
+
     /** Text or null; the key must still be present. */
     static String textOrNull(Map<?, ?> m, String key) {
         Object v = required(m, key);

@@ -49,7 +49,8 @@ public final class ModelFile {
      * The manifest fields of a model (ModelArchive adds format, format_version and entries):
      * tool_version, created (ISO 8601 UTC), source {name, size, sha256}, row_condition, rows,
      * columns {inputs, response, response_labels, group, group_labels}, scaling {method, center,
-     * spread, whitening}, metric, weights, k, band, flags {threshold, residual_median, residual_scale,
+     * spread, whitening}, metric, weights, k, band, estimate (absent in files written before it: the
+     * mean), flags {threshold, residual_median, residual_scale,
      * z_scale}, tuning (the tune JSON object, or null).
      */
     static Map<String, Object> manifestOf(ReferenceModel model) {
@@ -81,6 +82,7 @@ public final class ModelFile {
         m.put("weights", model.settings().weights());
         m.put("k", (long) model.settings().k());
         m.put("band", model.settings().band());
+        m.put("estimate", model.settings().estimate());
         Map<String, Object> flags = new LinkedHashMap<>();
         flags.put("threshold", model.settings().flagThreshold());
         flags.put("residual_median", model.residualScale().median());
@@ -123,7 +125,8 @@ public final class ModelFile {
         ModelSettings settings = new ModelSettings(ManifestFields.text(m, "metric"),
                 ManifestFields.text(m, "weights"), ManifestFields.text(scaling, "method"),
                 (int) ManifestFields.whole(m, "k"), ManifestFields.text(m, "band"),
-                ManifestFields.number(flags, "threshold"), ManifestFields.text(flags, "z_scale"));
+                ManifestFields.number(flags, "threshold"), ManifestFields.text(flags, "z_scale"),
+                ManifestFields.textOr(m, "estimate", ModelSettings.ESTIMATES.get(0)));
         ReferenceModel.ResidualScale residual = new ReferenceModel.ResidualScale(
                 numberOrNaN(flags, "residual_median"), numberOrNaN(flags, "residual_scale"));
         Object tuningField = ManifestFields.required(m, "tuning");

@@ -1,6 +1,7 @@
 package nearfit.tui;
 
 import nearfit.knn.Band;
+import nearfit.knn.EstimateKind;
 import nearfit.knn.Metric;
 import nearfit.knn.Scaling;
 import nearfit.knn.Weighting;
@@ -36,6 +37,14 @@ final class ChoiceNames {
             case ROBUST -> "median/MAD";
             case RANGE -> "min-max";
             case NONE -> "none";
+        };
+    }
+
+    /** The command line's words, {@code --estimate mean|median}. */
+    static String of(EstimateKind e) {
+        return switch (e) {
+            case MEAN -> "mean";
+            case MEDIAN -> "median";
         };
     }
 

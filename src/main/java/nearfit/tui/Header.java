@@ -58,7 +58,7 @@ final class Header {
         if (s.mode() != PlotMode.RESPONSE) {
             line.part(s.mode() == PlotMode.RESIDUALS ? "  residuals" : "  residuals over time");
         }
-        String band = "band " + ChoiceNames.of(s.band());
+        String band = "band " + ChoiceNames.of(s.band()) + ", " + ChoiceNames.of(s.estimate());
         String metric = ChoiceNames.of(s.metric());
         int settings = line.part("  " + metric + ", weights " + ChoiceNames.of(s.weighting()) + ", scaling "
                 + ChoiceNames.of(s.scaling()) + ", " + band,

@@ -16,6 +16,7 @@ public enum KeyBinding {
     WEIGHTS("w", "next neighbour weights"),
     SCALING("s", "next input scaling"),
     BAND("b", "next band"),
+    ESTIMATE("c", "curve: the neighbours' mean or median"),
     FLAG_MARKS("f", "flag marks on or off"),
     FLAG_TABLE("F", "flagged-rows table (Enter jumps to the row)"),
     LOAD_REPORT("L", "load report: rows read, ragged lines, blank and bad cells per column with their lines"),

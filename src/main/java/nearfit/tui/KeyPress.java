@@ -9,6 +9,7 @@ import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.input.KeyType;
 
 import nearfit.knn.Band;
+import nearfit.knn.EstimateKind;
 import nearfit.knn.Metric;
 import nearfit.knn.Scaling;
 import nearfit.knn.TuningTable;
@@ -108,6 +109,7 @@ public final class KeyPress {
             case 'w': return Step.of(b.weighting(cycle(Weighting.values(), s.weighting())).build());
             case 's': return Step.of(b.scaling(cycle(Scaling.values(), s.scaling())).build());
             case 'b': return Step.of(b.band(cycle(Band.values(), s.band())).build());
+            case 'c': return Step.of(b.estimate(cycle(EstimateKind.values(), s.estimate())).build());
             case 'f': return Step.of(b.flagMarks(!s.flagMarks()).build());
             case 'r': return Step.of(b.mode(s.mode() == PlotMode.RESIDUALS ? PlotMode.RESPONSE : PlotMode.RESIDUALS)
                     .build());

@@ -18,7 +18,7 @@ final class KnnChoices {
      */
     static KnnSettings settings(ModelSettings m) {
         return new KnnSettings(m.k(), m.metric(), m.weighting(), m.scaling(),
-                m.band(), KnnSettings.DEFAULT_FLAG_THRESHOLD, FlagScale.LOCAL_SD, THREADS);
+                m.band(), m.estimate(), KnnSettings.DEFAULT_FLAG_THRESHOLD, FlagScale.LOCAL_SD, THREADS);
     }
 
     /**

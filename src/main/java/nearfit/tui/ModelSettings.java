@@ -3,6 +3,7 @@ package nearfit.tui;
 import java.util.List;
 
 import nearfit.knn.Band;
+import nearfit.knn.EstimateKind;
 import nearfit.knn.Metric;
 import nearfit.knn.Scaling;
 import nearfit.knn.Weighting;
@@ -19,9 +20,10 @@ import nearfit.knn.Weighting;
  * @param weighting the neighbour weights
  * @param scaling   the input scaling
  * @param band      the band around the curve
+ * @param estimate  the curve: the neighbours' weighted mean or median
  */
 public record ModelSettings(String condition, String response, List<String> inputs, int k, Metric metric,
-        Weighting weighting, Scaling scaling, Band band) {
+        Weighting weighting, Scaling scaling, Band band, EstimateKind estimate) {
     /** Copies the inputs so that the record stays immutable. */
     public ModelSettings {
         inputs = List.copyOf(inputs);
@@ -33,8 +35,14 @@ public record ModelSettings(String condition, String response, List<String> inpu
         }
     }
 
+    /** The settings with the mean as the estimate. */
+    public ModelSettings(String condition, String response, List<String> inputs, int k, Metric metric,
+            Weighting weighting, Scaling scaling, Band band) {
+        this(condition, response, inputs, k, metric, weighting, scaling, band, EstimateKind.MEAN);
+    }
+
     /** The same settings with another k; the tuning key ignores k. */
     public ModelSettings withK(int newK) {
-        return new ModelSettings(condition, response, inputs, newK, metric, weighting, scaling, band);
+        return new ModelSettings(condition, response, inputs, newK, metric, weighting, scaling, band, estimate);
     }
 }

@@ -3,6 +3,7 @@ package nearfit.tui;
 import java.util.ArrayList;
 import java.util.List;
 
+import nearfit.knn.EstimateKind;
 import nearfit.table.NearfitException;
 
 /**
@@ -11,8 +12,9 @@ import nearfit.table.NearfitException;
  * @param inputs   the inputs asked with {@code -x}, empty to choose
  * @param response the response asked with {@code -y}, {@code null} to choose
  * @param k        the k asked with {@code --k}, 0 to choose
+ * @param estimate the curve asked with {@code --estimate}
  */
-public record StartSettings(List<String> inputs, String response, int k) {
+public record StartSettings(List<String> inputs, String response, int k, EstimateKind estimate) {
     /** k when none is asked: small enough for a small file, smooth enough for a long log (common practice). */
     static final int DEFAULT_K = 20;
 
@@ -22,6 +24,11 @@ public record StartSettings(List<String> inputs, String response, int k) {
 
     public StartSettings {
         inputs = List.copyOf(inputs);
+    }
+
+    /** The choices with the mean as the curve. */
+    public StartSettings(List<String> inputs, String response, int k) {
+        this(inputs, response, k, EstimateKind.MEAN);
     }
 
     /**
@@ -59,7 +66,7 @@ public record StartSettings(List<String> inputs, String response, int k) {
             }
         }
         int chosenK = k > 0 ? k : Math.max(1, Math.min(DEFAULT_K, rows - 1));
-        return ViewState.initial(y, x, chosenK);
+        return ViewState.initial(y, x, chosenK, estimate);
     }
 
     private static boolean isNumber(List<ColumnInfo> columns, String name) {

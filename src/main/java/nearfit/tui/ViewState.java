@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Map;
 
 import nearfit.knn.Band;
+import nearfit.knn.EstimateKind;
 import nearfit.knn.Metric;
 import nearfit.knn.Scaling;
 import nearfit.knn.Weighting;
@@ -21,6 +22,7 @@ import nearfit.knn.Weighting;
  * @param weighting     neighbour weights
  * @param scaling       input scaling
  * @param band          band kind
+ * @param estimate      the curve: the neighbours' mean or median
  * @param flagMarks     whether flagged rows are marked on the plot
  * @param mode          what the axes show
  * @param groupColumn   the group column, or {@code null}
@@ -43,7 +45,8 @@ import nearfit.knn.Weighting;
  * @param quit          whether the explorer should end
  */
 public record ViewState(String condition, String response, List<String> inputs, String displayInput, int k,
-        Metric metric, Weighting weighting, Scaling scaling, Band band, boolean flagMarks, PlotMode mode,
+        Metric metric, Weighting weighting, Scaling scaling, Band band, EstimateKind estimate, boolean flagMarks,
+        PlotMode mode,
         String groupColumn, int group, boolean compare, int responseClass, double zoomFrom, double zoomTo,
         double crosshair, Map<String, Double> heldQuantile, String heldInput, boolean nearHeldOnly, int markedRow,
         Overlay overlay, Ask ask, int cursor, String typed, ExportKind export, String message, boolean quit) {
@@ -56,19 +59,24 @@ public record ViewState(String condition, String response, List<String> inputs, 
 
     /** The first state: one response, the given inputs with the first displayed, held values at medians. */
     public static ViewState initial(String response, List<String> inputs, int k) {
+        return initial(response, inputs, k, EstimateKind.MEAN);
+    }
+
+    /** The first state with the given estimate. */
+    public static ViewState initial(String response, List<String> inputs, int k, EstimateKind estimate) {
         java.util.HashMap<String, Double> held = new java.util.HashMap<>();
         for (int i = 1; i < inputs.size(); i++) {
             held.put(inputs.get(i), 0.5);
         }
         return new ViewState("", response, inputs, inputs.get(0), k, Metric.EUCLIDEAN, Weighting.UNIFORM,
-                Scaling.Z, Band.Q10_Q90, true, PlotMode.RESPONSE, null, -1, false, 0,
+                Scaling.Z, Band.Q10_Q90, estimate, true, PlotMode.RESPONSE, null, -1, false, 0,
                 Double.NaN, Double.NaN, 0.5, held, inputs.size() > 1 ? inputs.get(1) : null, false, -1,
                 Overlay.NONE, Ask.NOTHING, 0, "", null, "", false);
     }
 
     /** The settings a fit depends on. */
     public ModelSettings model() {
-        return new ModelSettings(condition, response, inputs, k, metric, weighting, scaling, band);
+        return new ModelSettings(condition, response, inputs, k, metric, weighting, scaling, band, estimate);
     }
 
     /** Whether the view shows the whole range of the display input. */
@@ -92,6 +100,7 @@ public record ViewState(String condition, String response, List<String> inputs, 
         private Weighting weighting;
         private Scaling scaling;
         private Band band;
+        private EstimateKind estimate;
         private boolean flagMarks;
         private PlotMode mode;
         private String groupColumn;
@@ -123,6 +132,7 @@ public record ViewState(String condition, String response, List<String> inputs, 
             weighting = s.weighting;
             scaling = s.scaling;
             band = s.band;
+            estimate = s.estimate;
             flagMarks = s.flagMarks;
             mode = s.mode;
             groupColumn = s.groupColumn;
@@ -154,6 +164,7 @@ public record ViewState(String condition, String response, List<String> inputs, 
         public Builder weighting(Weighting v) { weighting = v; return this; }
         public Builder scaling(Scaling v) { scaling = v; return this; }
         public Builder band(Band v) { band = v; return this; }
+        public Builder estimate(EstimateKind v) { estimate = v; return this; }
         public Builder flagMarks(boolean v) { flagMarks = v; return this; }
         public Builder mode(PlotMode v) { mode = v; return this; }
         public Builder groupColumn(String v) { groupColumn = v; return this; }
@@ -183,7 +194,7 @@ public record ViewState(String condition, String response, List<String> inputs, 
         /** The new state. */
         public ViewState build() {
             return new ViewState(condition, response, inputs, displayInput, k, metric, weighting, scaling, band,
-                    flagMarks, mode, groupColumn, group, compare, responseClass, zoomFrom, zoomTo, crosshair,
+                    estimate, flagMarks, mode, groupColumn, group, compare, responseClass, zoomFrom, zoomTo, crosshair,
                     heldQuantile, heldInput, nearHeldOnly, markedRow, overlay, ask, cursor, typed, export,
                     message, quit);
         }

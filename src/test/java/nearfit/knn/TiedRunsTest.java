@@ -72,6 +72,47 @@ class TiedRunsTest {
         }
     }
 
+    @Property(tries = 30)
+    void runMedianEqualsTheRowByRowMedianUnderEveryWeighting(@ForAll long seed,
+                                                            @ForAll @IntRange(min = 200, max = 3000) int n,
+                                                            @ForAll @IntRange(min = 2, max = 12) int values,
+                                                            @ForAll @IntRange(min = 1, max = 80) int k) {
+        ReferenceData data = rounded(seed, n, values);
+        for (Weighting w : Weighting.values()) {
+            KnnModel m = KnnModel.fit(data, KnnSettings.defaults().withK(k).withWeighting(w)
+                    .withEstimate(EstimateKind.MEDIAN).withThreads(1));
+            TiedRuns runs = m.tiedRuns();
+            if (runs == null) {
+                return; // every run shorter than MIN_LENGTH: nothing to compare
+            }
+            Random r = new Random(seed ^ 91);
+            Searcher rowByRow = m.searcher();
+            int hits = 0;
+            for (int t = 0; t < 100; t++) {
+                int exclude = r.nextBoolean() ? r.nextInt(n) : -1;
+                double q = exclude >= 0 ? m.coords()[exclude] : m.coords()[r.nextInt(n)];
+                int run = runs.runFor(q, k, exclude);
+                if (run < 0) {
+                    continue;
+                }
+                hits++;
+                rowByRow.find(new double[] {q}, k, exclude);
+                LocalEstimator est = rowByRow.estimator();
+                est.load(rowByRow.list(), data.response());
+                est.prepare(w, k);
+                double median = runs.quantile(run, exclude, 0.5);
+                assertEquals(est.median(k), median, w + " k=" + k + " run of " + runs.size(run, exclude));
+                if (exclude >= 0) {
+                    assertEquals(median, rowByRow.fitLeavingOut(new double[] {q}, k, exclude, FlagScale.GLOBAL_MAD),
+                            "leave-one-out takes the run's median");
+                }
+            }
+            if (n / values >= 2 * TiedRuns.MIN_LENGTH && k < TiedRuns.MIN_LENGTH) {
+                assertTrue(hits > 0, "the run's median was used at least once");
+            }
+        }
+    }
+
     @Property(tries = 8)
     void leaveOneOutOverLongRunsEqualsNaiveRecomputation(@ForAll long seed,
                                                           @ForAll @IntRange(min = 260, max = 420) int n) {

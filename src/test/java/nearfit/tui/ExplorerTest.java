@@ -78,6 +78,10 @@ class ExplorerTest {
         try (VirtualScreen v = VirtualScreen.standard(new ScriptedWorkbench())) {
             v.type("?");
             String help = v.text();
+            for (int i = 0; i < KeyBinding.values().length; i++) {
+                v.key(KeyType.ArrowDown); // the list scrolls when it is taller than the panel
+            }
+            help += v.text();
             for (KeyBinding k : KeyBinding.values()) {
                 assertTrue(help.contains(k.meaning()), "help shows " + k.key());
             }
