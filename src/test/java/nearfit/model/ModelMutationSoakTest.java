@@ -14,14 +14,14 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * The model mutations of {@link ModelMutationPropertyTest} run many times (system property
- * {@code fuzz.tries}, 10000 by default, a few minutes), alternating the Euclidean and the
+ * {@code fuzz.tries}, 50000 by default, about four minutes), alternating the Euclidean and the
  * Mahalanobis model; every trial must end as {@link ModelMutations} requires, and the count of each
  * ending (refusals by the kind of their message) is written to target/soak/model-mutations.md and
  * standard output. Tagged "soak": scripts/fuzz-models or scripts/soak runs it.
  */
 @Tag("soak")
 class ModelMutationSoakTest {
-    private static final int TRIES = Integer.getInteger("fuzz.tries", 10_000);
+    private static final int TRIES = Integer.getInteger("fuzz.tries", 50_000);
     private static final int SHOWN_KINDS = 25;
     private static final long SEED = Long.getLong("fuzz.seed", 20261202L);
 
