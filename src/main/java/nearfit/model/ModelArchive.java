@@ -262,10 +262,19 @@ public final class ModelArchive {
          */
         public Contents read(List<Need> needs) {
             Map<String, Object> arrays = new LinkedHashMap<>();
+            long storedBytes = 0;
             try {
                 for (Need need : needs) {
                     if (arrays.containsKey(need.name())) {
                         throw new IllegalArgumentException("array " + need.name() + " asked for twice");
+                    }
+                    ZipEntry entry = zip.getEntry(entryName(need.name(), need.type()));
+                    // Stored arrays are allocated whole, so together they must fit in the file: entries
+                    // whose headers all point at the same bytes cannot multiply the allocation.
+                    storedBytes += entry != null && entry.getMethod() == ZipEntry.STORED ? entry.getCompressedSize() : 0;
+                    if (storedBytes > fileSize) {
+                        throw NearfitException.inFile(name, "is damaged: its entries claim more bytes than the file's "
+                                + fileSize);
                     }
                     arrays.put(need.name(), readArray(need));
                 }

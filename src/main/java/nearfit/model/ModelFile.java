@@ -24,7 +24,7 @@ import nearfit.table.NearfitException;
  */
 public final class ModelFile {
     /** The most inputs a model file may declare (the whitening matrix holds their square). */
-    static final int MAX_INPUTS = 1000;
+    private static final int MAX_INPUTS = 1000;
     /** The largest whole number a JSON number (a double) holds exactly: 2^53. */
     private static final long MAX_EXACT_WHOLE = 1L << 53;
 
@@ -120,14 +120,10 @@ public final class ModelFile {
                     described.whitening());
             return described.with(stored);
         } catch (IllegalArgumentException e) {
-            String detail = e.getMessage().startsWith("manifest field") || e.getMessage().startsWith("the model")
-                    || e.getMessage().startsWith("entry ") ? e.getMessage() : "is a damaged model file: " + e.getMessage();
-            throw NearfitException.inFile(name, detail, e);
+            // Each check says what is wrong in a sentence of its own (the field, entry or row, and why).
+            throw NearfitException.inFile(name, e.getMessage(), e);
         } catch (NearfitException e) {
-            if (e.file() != null) {
-                throw e;
-            }
-            throw NearfitException.inFile(name, "is a damaged model file: " + e.detail(), e);
+            throw e.file() != null ? e : NearfitException.inFile(name, e.detail(), e);
         }
     }
 

@@ -307,4 +307,109 @@ class ModelTrustTest {
         assertEquals("is damaged: entry input.0 is listed as 2097152 f64 values, the model needs 120 f64 values",
                 refusal(p));
     }
+
+    @Test
+    void storedEntriesThatShareTheirBytesCannotMultiplyTheAllocation() throws IOException {
+        // A hand-made ZIP (PKWARE APPNOTE 4.3): one stored array of 2000 values, and central-directory
+        // records for the other three arrays pointing at its bytes; 4 x 16 000 bytes claimed from a
+        // file of about 19 KB.
+        int rows = 2000;
+        byte[] data = doubles(new double[rows]);
+        Map<String, Object> m = ModelEdits.manifest(euclidean);
+        m.put("rows", (double) rows);
+        for (Object o : (List<?>) m.get("entries")) {
+            @SuppressWarnings("unchecked")
+            Map<String, Object> e = (Map<String, Object>) o;
+            e.put("count", (double) rows);
+            java.util.zip.CRC32 crc = new java.util.zip.CRC32();
+            crc.update(data);
+            e.put("crc32", (double) crc.getValue());
+            e.put("sha256", ModelEdits.sha256(data));
+        }
+        byte[] manifest = (Json.write(m) + "\n").getBytes(StandardCharsets.UTF_8);
+        byte[] digest = (ModelEdits.sha256(manifest) + "\n").getBytes(StandardCharsets.US_ASCII);
+        HandZip zip = new HandZip();
+        zip.add(ModelArchive.MANIFEST, manifest);
+        zip.add(ModelArchive.MANIFEST_DIGEST, digest);
+        int shared = zip.add("data/input.0.f64", data);
+        zip.alias("data/input.1.f64", shared, data);
+        zip.alias("data/response.f64", shared, data);
+        zip.alias("data/source_line.i64", shared, data);
+        Path p = file("shared.nfm", zip.finish());
+        assertEquals("is damaged: its entries claim more bytes than the file's " + Files.size(p), refusal(p));
+    }
+
+    /** Writes stored entries and central-directory records by hand, so two records can share bytes. */
+    private static final class HandZip {
+        private final java.io.ByteArrayOutputStream out = new java.io.ByteArrayOutputStream();
+        private final java.io.ByteArrayOutputStream central = new java.io.ByteArrayOutputStream();
+        private int records;
+
+        int add(String name, byte[] data) {
+            int offset = out.size();
+            byte[] n = name.getBytes(StandardCharsets.UTF_8);
+            le(out, 0x04034b50, 4);
+            le(out, 20, 2);
+            le(out, 0, 2);
+            le(out, 0, 2); // stored
+            le(out, 0, 4); // time and date
+            le(out, crc(data), 4);
+            le(out, data.length, 4);
+            le(out, data.length, 4);
+            le(out, n.length, 2);
+            le(out, 0, 2);
+            out.writeBytes(n);
+            out.writeBytes(data);
+            alias(name, offset, data);
+            return offset;
+        }
+
+        void alias(String name, int offset, byte[] data) {
+            byte[] n = name.getBytes(StandardCharsets.UTF_8);
+            le(central, 0x02014b50, 4);
+            le(central, 20, 2);
+            le(central, 20, 2);
+            le(central, 0, 2);
+            le(central, 0, 2);
+            le(central, 0, 4);
+            le(central, crc(data), 4);
+            le(central, data.length, 4);
+            le(central, data.length, 4);
+            le(central, n.length, 2);
+            le(central, 0, 2);
+            le(central, 0, 2);
+            le(central, 0, 2);
+            le(central, 0, 2);
+            le(central, 0, 4);
+            le(central, offset, 4);
+            central.writeBytes(n);
+            records++;
+        }
+
+        byte[] finish() {
+            int at = out.size();
+            out.writeBytes(central.toByteArray());
+            le(out, 0x06054b50, 4);
+            le(out, 0, 2);
+            le(out, 0, 2);
+            le(out, records, 2);
+            le(out, records, 2);
+            le(out, central.size(), 4);
+            le(out, at, 4);
+            le(out, 0, 2);
+            return out.toByteArray();
+        }
+
+        private static long crc(byte[] data) {
+            java.util.zip.CRC32 c = new java.util.zip.CRC32();
+            c.update(data);
+            return c.getValue();
+        }
+
+        private static void le(java.io.ByteArrayOutputStream o, long v, int bytes) {
+            for (int i = 0; i < bytes; i++) {
+                o.write((int) (v >>> (8 * i)) & 0xff);
+            }
+        }
+    }
 }
