@@ -70,8 +70,10 @@ class ModelFileTest {
     @Test
     void aModelWithoutGroupOrTuningHasNeither() {
         ReferenceModel m = sample(false);
+        // Without whitening, so with a metric other than Mahalanobis.
+        ModelSettings euclidean = new ModelSettings("euclidean", "tricube", "robust", 2, "sd2", 3.0, "reference");
         ReferenceModel plain = new ReferenceModel(m.toolVersion(), m.created(),
-                new SourceInfo("-", -1, null, null), m.columns(), new ModelSettings("euclidean", "tricube", "robust", 2, "sd2", 3.0, "reference"), m.scaleCenter(),
+                new SourceInfo("-", -1, null, null), m.columns(), euclidean, m.scaleCenter(),
                 m.scaleSpread(), null, m.residualScale(), null, m.rows());
         ReferenceModel back = ModelFile.read(saved(plain));
         assertNull(back.columns().group());
