@@ -39,6 +39,7 @@ class ModelMutationSoakTest {
         for (int i = 0; i < TRIES; i++) {
             ModelMutations.Trial t = models[i % 2].run(seeds.nextLong());
             String kind = t.edit().startsWith("bytes") || t.edit().startsWith("cut") ? "byte edit"
+                    : t.edit().startsWith("manifest text") ? "manifest text edit"
                     : t.edit().contains(" byte ") ? "array edit" : "field edit";
             endings.merge(kind + ": " + t.ending().name().toLowerCase(java.util.Locale.ROOT).replace('_', ' '), 1,
                     Integer::sum);

@@ -20,7 +20,7 @@ import nearfit.table.NearfitException;
 
 /**
  * Random damage to a real small model file, and what must follow: a {@link NearfitException} of one
- * line naming the file, or a correct result, within a time bound. Three kinds, each drawn from a seed:
+ * line naming the file, or a correct result, within a time bound. Four kinds, each drawn from a seed:
  * <ul>
  * <li>byte edits of the file as it is (1 to 4 bytes changed, or the file cut short): every accepted
  *     file must give exactly the original estimates, since the checksums let no change of meaning
@@ -30,6 +30,8 @@ import nearfit.table.NearfitException;
  *     an accepted file must give estimates that are missing or inside the range of its usable stored
  *     responses (a weighted mean or a quantile of neighbours' responses, with weights of 0 or more,
  *     lies within their range: common practice);</li>
+ * <li>1 to 3 bytes of the manifest's text changed, its CRC-32 and digest recomputed: the same range
+ *     rule;</li>
  * <li>byte edits of one array, its checksums recomputed: the same range rule.</li>
  * </ul>
  */
@@ -71,11 +73,12 @@ final class ModelMutations {
     /** One trial drawn from the seed; asserts its ending (fails the test otherwise). */
     Trial run(long seed) {
         SplittableRandom r = new SplittableRandom(seed);
-        int kind = r.nextInt(3);
+        int kind = r.nextInt(4);
         StringBuilder edit = new StringBuilder();
         byte[] damaged = switch (kind) {
             case 0 -> byteEdits(r, edit);
             case 1 -> fieldEdit(r, edit);
+            case 2 -> manifestTextEdit(r, edit);
             default -> arrayEdit(r, edit);
         };
         Path p = write("mutated-" + seed + ".nfm", damaged);
@@ -141,6 +144,25 @@ final class ModelMutations {
         } else if (node instanceof List<?> list) {
             list.forEach(ModelMutations::dropMarker);
         }
+    }
+
+    /** 1 to 3 bytes of the manifest's text changed, its CRC-32 and digest recomputed: the parser's turn. */
+    private byte[] manifestTextEdit(SplittableRandom r, StringBuilder edit) {
+        Map<String, byte[]> entries = ModelEdits.entries(original);
+        byte[] text = entries.get(ModelArchive.MANIFEST).clone();
+        int n = 1 + r.nextInt(3);
+        edit.append("manifest text");
+        for (int i = 0; i < n; i++) {
+            int at = r.nextInt(text.length);
+            // mostly characters that keep JSON almost valid, sometimes any byte
+            String likely = "0123456789-.eE,:[]{}\"n ";
+            text[at] = r.nextInt(4) == 0 ? (byte) r.nextInt(256) : (byte) likely.charAt(r.nextInt(likely.length()));
+            edit.append(i == 0 ? " byte " : ", ").append(at).append('=').append(text[at] & 0xff);
+        }
+        entries.put(ModelArchive.MANIFEST, text);
+        entries.put(ModelArchive.MANIFEST_DIGEST,
+                (ModelEdits.sha256(text) + "\n").getBytes(java.nio.charset.StandardCharsets.US_ASCII));
+        return ModelEdits.stored(entries);
     }
 
     private byte[] arrayEdit(SplittableRandom r, StringBuilder edit) {
