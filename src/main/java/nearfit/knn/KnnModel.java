@@ -76,8 +76,19 @@ public final class KnnModel {
             throw new NearfitException("the stored scaling has " + transform.dimensions() + " inputs, the rows " + data.dimensions());
         }
         double[] coords = transform.pack(data);
+        requireFinite(coords, data.dimensions());
         NeighborIndex index = NeighborIndex.build(coords, data.dimensions(), settings.metric(), settings.threads());
         return new KnnModel(data, settings, transform, coords, index, tiedRunsOf(index, data));
+    }
+
+    /** A non-finite coordinate would stall the index search (no key compares equal), so none is let in. */
+    private static void requireFinite(double[] coords, int d) {
+        for (int i = 0; i < coords.length; i++) {
+            if (!Double.isFinite(coords[i])) {
+                throw new NearfitException("the stored scaling makes coordinate " + (i % d + 1) + " of reference row "
+                        + (i / d + 1) + " " + coords[i] + "; the model's scaling is damaged");
+            }
+        }
     }
 
     /** Which columns left the rows out, e.g. {@code power_kw is missing in all 30 rows}. */

@@ -286,6 +286,9 @@ public final class Json {
                     throw error("expected a key");
                 }
                 String key = readString();
+                if (map.containsKey(key)) {
+                    throw error("the key \"" + key + "\" appears twice"); // which one counts would be a guess
+                }
                 skipSpace();
                 expect(':');
                 skipSpace();

@@ -5,77 +5,118 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * Typed reads of fields from a parsed manifest (see {@link Json#parse}); each failure is an
- * {@link IllegalArgumentException} naming the field, which {@link ModelFile} turns into a message
- * about the file.
+ * Typed, checked reads of one JSON object of a parsed manifest (see {@link Json#parse}), which knows
+ * its path from the manifest's root ({@code ""}, {@code "scaling"}, {@code "tuning"}), so each failure
+ * is an {@link IllegalArgumentException} naming the whole field, e.g.
+ * {@code manifest field "scaling.spread[0]" is 0; a spread must be positive}, which {@link ModelFile}
+ * prefixes with the file.
+ *
+ * <p>Numbers are read as the JSON reader gives them (doubles); a whole number must be exactly whole
+ * and within the range asked for, so {@code 4294967306} is never read as an int 10.
+ *
+ * @param path the object's dotted path, {@code ""} for the manifest itself
+ * @param map  the object's fields
  */
-final class ManifestFields {
-    private ManifestFields() {
+record ManifestFields(String path, Map<?, ?> map) {
+    /** The manifest's root object. */
+    static ManifestFields root(Map<?, ?> manifest) {
+        return new ManifestFields("", manifest);
     }
 
-    static Object required(Map<?, ?> m, String key) {
-        if (!m.containsKey(key)) {
-            throw new IllegalArgumentException("field \"" + key + "\" is missing");
+    /** The full name of a field of this object, as messages spell it. */
+    String nameOf(String key) {
+        return path.isEmpty() ? key : path + "." + key;
+    }
+
+    /** The error for a field: {@code manifest field "a.b" } followed by what is wrong. */
+    IllegalArgumentException bad(String key, String what) {
+        return new IllegalArgumentException("manifest field \"" + nameOf(key) + "\" " + what);
+    }
+
+    Object required(String key) {
+        if (!map.containsKey(key)) {
+            throw bad(key, "is missing");
         }
-        return m.get(key);
+        return map.get(key);
     }
 
-    static String text(Map<?, ?> m, String key) {
-        if (!(required(m, key) instanceof String s)) {
-            throw new IllegalArgumentException("field \"" + key + "\" is not text");
+    /** Whether the field is present and not null. */
+    boolean present(String key) {
+        return map.get(key) != null;
+    }
+
+    String text(String key) {
+        if (!(required(key) instanceof String s)) {
+            throw bad(key, "is not text");
         }
         return s;
     }
 
-    /** Text, or the fallback when the key is absent (a field added after files were written). */
-    static String textOr(Map<?, ?> m, String key, String fallback) {
-        return m.containsKey(key) ? text(m, key) : fallback;
-    }
-
     /** Text or null; the key must still be present. */
-    static String textOrNull(Map<?, ?> m, String key) {
-        Object v = required(m, key);
+    String textOrNull(String key) {
+        Object v = required(key);
         if (v != null && !(v instanceof String)) {
-            throw new IllegalArgumentException("field \"" + key + "\" is not text or null");
+            throw bad(key, "is not text or null");
         }
         return (String) v;
     }
 
-    static double number(Map<?, ?> m, String key) {
-        if (!(required(m, key) instanceof Double d)) {
-            throw new IllegalArgumentException("field \"" + key + "\" is not a number");
+    /** Text that is one of the words allowed. */
+    String oneOf(String key, List<String> allowed) {
+        String s = text(key);
+        if (!allowed.contains(s)) {
+            throw bad(key, "is \"" + s + "\"; it must be one of " + String.join(", ", allowed));
+        }
+        return s;
+    }
+
+    /** A finite number. */
+    double number(String key) {
+        if (!(required(key) instanceof Double d) || !Double.isFinite(d)) {
+            throw bad(key, "is not a finite number");
         }
         return d;
     }
 
-    /** A number that is a whole number (the reader gives every number as a double). */
-    static long whole(Map<?, ?> m, String key) {
-        double d = number(m, key);
-        if (d != Math.rint(d) || Math.abs(d) > 1e15) {
-            throw new IllegalArgumentException("field \"" + key + "\" is not a whole number");
-        }
-        return (long) d;
+    /** A finite number, or NaN for JSON null (how the writer spells a number it does not have). */
+    double numberOrNaN(String key) {
+        return required(key) == null ? Double.NaN : number(key);
     }
 
-    static Map<?, ?> object(Map<?, ?> m, String key) {
-        if (!(required(m, key) instanceof Map<?, ?> o)) {
-            throw new IllegalArgumentException("field \"" + key + "\" is not an object");
+    /** A whole number from {@code min} to {@code max}. */
+    long whole(String key, long min, long max) {
+        Object v = required(key);
+        if (!(v instanceof Double d) || d != Math.rint(d) || d < min || d > max) {
+            throw bad(key, "is " + Json.write(v) + "; it must be a whole number from " + min + " to " + max);
         }
-        return o;
+        return (long) (double) d;
     }
 
-    static List<?> list(Map<?, ?> m, String key) {
-        if (!(required(m, key) instanceof List<?> l)) {
-            throw new IllegalArgumentException("field \"" + key + "\" is not a list");
+    /** A whole number from {@code min} to {@code max}, both within the int range. */
+    int integer(String key, int min, int max) {
+        return (int) whole(key, min, max);
+    }
+
+    ManifestFields object(String key) {
+        if (!(required(key) instanceof Map<?, ?> o)) {
+            throw bad(key, "is not an object");
+        }
+        return new ManifestFields(nameOf(key), o);
+    }
+
+    List<?> list(String key) {
+        if (!(required(key) instanceof List<?> l)) {
+            throw bad(key, "is not a list");
         }
         return l;
     }
 
-    static List<String> texts(Map<?, ?> m, String key) {
+    List<String> texts(String key) {
         List<String> out = new ArrayList<>();
-        for (Object o : list(m, key)) {
-            if (!(o instanceof String s)) {
-                throw new IllegalArgumentException("field \"" + key + "\" holds a value that is not text");
+        List<?> l = list(key);
+        for (int i = 0; i < l.size(); i++) {
+            if (!(l.get(i) instanceof String s)) {
+                throw bad(key + "[" + i + "]", "is not text");
             }
             out.add(s);
         }
@@ -83,8 +124,8 @@ final class ManifestFields {
     }
 
     /** A list of numbers; JSON null (how the writer spells a non-finite number) reads as NaN. */
-    static double[] doubles(Map<?, ?> m, String key) {
-        List<?> l = list(m, key);
+    double[] doubles(String key) {
+        List<?> l = list(key);
         double[] out = new double[l.size()];
         for (int i = 0; i < out.length; i++) {
             Object o = l.get(i);
@@ -93,20 +134,38 @@ final class ManifestFields {
             } else if (o instanceof Double d) {
                 out[i] = d;
             } else {
-                throw new IllegalArgumentException("field \"" + key + "\" holds a value that is not a number");
+                throw bad(key + "[" + i + "]", "is not a number");
             }
         }
         return out;
     }
 
-    static int[] ints(Map<?, ?> m, String key) {
-        double[] d = doubles(m, key);
-        int[] out = new int[d.length];
-        for (int i = 0; i < d.length; i++) {
-            if (d[i] != Math.rint(d[i]) || Math.abs(d[i]) > Integer.MAX_VALUE) {
-                throw new IllegalArgumentException("field \"" + key + "\" holds a value that is not a whole number");
+    /** A list of exactly {@code length} finite numbers. */
+    double[] finiteDoubles(String key, int length) {
+        double[] out = doubles(key);
+        if (out.length != length) {
+            throw bad(key, "has " + out.length + " values; it must have " + length);
+        }
+        for (int i = 0; i < out.length; i++) {
+            if (!Double.isFinite(out[i])) {
+                throw bad(key + "[" + i + "]", "is " + (Double.isNaN(out[i]) ? "missing (null)" : out[i])
+                        + "; it must be a finite number");
             }
-            out[i] = (int) d[i];
+        }
+        return out;
+    }
+
+    /** A list of whole numbers from {@code min} to {@code max}. */
+    int[] ints(String key, int min, int max) {
+        List<?> l = list(key);
+        int[] out = new int[l.size()];
+        for (int i = 0; i < out.length; i++) {
+            Object o = l.get(i);
+            if (!(o instanceof Double d) || d != Math.rint(d) || d < min || d > max) {
+                throw bad(key + "[" + i + "]", "is " + Json.write(o) + "; it must be a whole number from "
+                        + min + " to " + max);
+            }
+            out[i] = (int) (double) d;
         }
         return out;
     }

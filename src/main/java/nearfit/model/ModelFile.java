@@ -23,6 +23,11 @@ import nearfit.table.NearfitException;
  * naming the file.
  */
 public final class ModelFile {
+    /** The most inputs a model file may declare (the whitening matrix holds their square). */
+    private static final int MAX_INPUTS = 1000;
+    /** The largest whole number a JSON number (a double) holds exactly: 2^53. */
+    private static final long MAX_EXACT_WHOLE = 1L << 53;
+
     private ModelFile() {
     }
 
@@ -94,53 +99,173 @@ public final class ModelFile {
     }
 
     /**
-     * Reads a model file.
+     * Reads a model file: the manifest first, every value checked (finite, in range, consistent with
+     * the others), then only the arrays the model needs, each with exactly the manifest's row count,
+     * then the arrays themselves (stored inputs finite, codes inside their dictionaries, the stored
+     * scaling giving finite coordinates, enough usable rows for k). So a file that loads cannot make
+     * the index search spin or fail inside the engine.
      *
-     * @throws NearfitException naming the file when it is missing, not a model, damaged, truncated,
-     *                          of another major version, or its manifest is incomplete or inconsistent
+     * @throws NearfitException in one line naming the file when it is missing, not a model, damaged,
+     *                          truncated, of another major version, or a manifest value is missing,
+     *                          out of range or inconsistent (naming the field)
      */
     public static ReferenceModel read(Path path) {
-        ModelArchive.Contents contents = ModelArchive.read(path);
-        try {
-            return modelOf(contents);
-        } catch (IllegalArgumentException | NearfitException e) {
-            String detail = e instanceof NearfitException ne ? ne.detail() : e.getMessage();
-            throw NearfitException.inFile(path.toString(), "is a damaged model file: " + detail, e);
+        String name = path.toString();
+        try (ModelArchive.Opened archive = ModelArchive.open(path)) {
+            ManifestFields m = ManifestFields.root(archive.manifest());
+            int rows = m.integer("rows", 0, Integer.MAX_VALUE);
+            ModelColumns columns = columnsOf(m.object("columns"));
+            Described described = describedOf(m, columns, rows);
+            ReferenceRows stored = rowsOf(archive.read(needs(columns, rows)), columns);
+            checkCodes(stored, columns);
+            StoredRowCheck.check(stored, columns, described.settings(), described.center(), described.spread(),
+                    described.whitening());
+            return described.with(stored);
+        } catch (IllegalArgumentException e) {
+            // Each check says what is wrong in a sentence of its own (the field, entry or row, and why).
+            throw NearfitException.inFile(name, e.getMessage(), e);
+        } catch (NearfitException e) {
+            throw e.file() != null ? e : NearfitException.inFile(name, e.detail(), e);
         }
     }
 
-    private static ReferenceModel modelOf(ModelArchive.Contents contents) {
-        Map<String, Object> m = contents.manifest();
-        Map<?, ?> src = ManifestFields.object(m, "source");
-        Object size = ManifestFields.required(src, "size");
-        SourceInfo source = new SourceInfo(ManifestFields.text(src, "name"),
-                size == null ? -1 : ManifestFields.whole(src, "size"),
-                ManifestFields.textOrNull(src, "sha256"), ManifestFields.textOrNull(m, "row_condition"));
-        Map<?, ?> col = ManifestFields.object(m, "columns");
-        ModelColumns columns = new ModelColumns(ManifestFields.texts(col, "inputs"),
-                ManifestFields.text(col, "response"), ManifestFields.texts(col, "response_labels"),
-                ManifestFields.textOrNull(col, "group"), ManifestFields.texts(col, "group_labels"));
-        Map<?, ?> scaling = ManifestFields.object(m, "scaling");
-        Map<?, ?> flags = ManifestFields.object(m, "flags");
-        ModelSettings settings = new ModelSettings(ManifestFields.text(m, "metric"),
-                ManifestFields.text(m, "weights"), ManifestFields.text(scaling, "method"),
-                (int) ManifestFields.whole(m, "k"), ManifestFields.text(m, "band"),
-                ManifestFields.number(flags, "threshold"), ManifestFields.text(flags, "z_scale"),
-                ManifestFields.textOr(m, "estimate", ModelSettings.ESTIMATES.get(0)));
-        ReferenceModel.ResidualScale residual = new ReferenceModel.ResidualScale(
-                numberOrNaN(flags, "residual_median"), numberOrNaN(flags, "residual_scale"));
-        Object tuningField = ManifestFields.required(m, "tuning");
-        TuningSummary tuning = tuningField == null ? null : TuningSummary.fromJson(ManifestFields.object(m, "tuning"));
-        ReferenceRows rows = rowsOf(contents, columns);
-        if (ManifestFields.whole(m, "rows") != rows.size()) {
-            throw new IllegalArgumentException("field \"rows\" does not match the stored rows");
+    /** The arrays of a model with these columns and rows, in the order the writer stores them. */
+    private static List<ModelArchive.Need> needs(ModelColumns columns, int rows) {
+        List<ModelArchive.Need> needs = new ArrayList<>();
+        for (int j = 0; j < columns.inputs().size(); j++) {
+            needs.add(new ModelArchive.Need("input." + j, ModelArchive.ElementType.F64, rows));
         }
-        checkCodes(rows, columns);
-        return new ReferenceModel(ManifestFields.text(m, "tool_version"), created(m), source, columns, settings,
-                ManifestFields.doubles(scaling, "center"), ManifestFields.doubles(scaling, "spread"),
-                ManifestFields.required(scaling, "whitening") == null ? null
-                        : ManifestFields.doubles(scaling, "whitening"),
-                residual, tuning, rows);
+        needs.add(columns.categoryResponse() ? new ModelArchive.Need("response_code", ModelArchive.ElementType.I32, rows)
+                : new ModelArchive.Need("response", ModelArchive.ElementType.F64, rows));
+        if (columns.group() != null) {
+            needs.add(new ModelArchive.Need("group_code", ModelArchive.ElementType.I32, rows));
+        }
+        needs.add(new ModelArchive.Need("source_line", ModelArchive.ElementType.I64, rows));
+        return needs;
+    }
+
+    private static ModelColumns columnsOf(ManifestFields col) {
+        List<String> inputs = col.texts("inputs");
+        String response = col.text("response");
+        List<String> responseLabels = col.texts("response_labels");
+        String group = col.textOrNull("group");
+        List<String> groupLabels = col.texts("group_labels");
+        if (inputs.isEmpty() || inputs.size() > MAX_INPUTS) {
+            throw col.bad("inputs", "has " + inputs.size() + " names; a model has 1 to " + MAX_INPUTS + " inputs");
+        }
+        try {
+            return new ModelColumns(inputs, response, responseLabels, group, groupLabels);
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException("manifest field \"" + col.path() + "\": " + e.getMessage(), e);
+        }
+    }
+
+    /** What the manifest says of a model besides its rows, every value checked. */
+    private record Described(String toolVersion, Instant created, SourceInfo source, ModelColumns columns,
+                             ModelSettings settings, double[] center, double[] spread, double[] whitening,
+                             ReferenceModel.ResidualScale residual, TuningSummary tuning) {
+        ReferenceModel with(ReferenceRows rows) {
+            return new ReferenceModel(toolVersion, created, source, columns, settings, center, spread, whitening,
+                    residual, tuning, rows);
+        }
+    }
+
+    private static Described describedOf(ManifestFields m, ModelColumns columns, int rows) {
+        ManifestFields src = m.object("source");
+        String sha = src.textOrNull("sha256");
+        if (sha != null && !sha.matches("[0-9a-f]{64}")) {
+            throw src.bad("sha256", "is not 64 lower-case hex digits");
+        }
+        String sourceName = src.text("name");
+        if (sourceName.isEmpty()) {
+            throw src.bad("name", "is empty");
+        }
+        SourceInfo source = new SourceInfo(sourceName,
+                src.required("size") == null ? -1 : src.whole("size", 0, MAX_EXACT_WHOLE), sha,
+                m.textOrNull("row_condition"));
+        ModelSettings settings = settingsOf(m, rows);
+        ManifestFields scaling = m.object("scaling");
+        int d = columns.inputs().size();
+        double[] center = scaling.finiteDoubles("center", d);
+        double[] spread = scaling.finiteDoubles("spread", d);
+        checkScaling(scaling, settings.scaling(), center, spread);
+        double[] whitening = whiteningOf(scaling, settings.metric(), d);
+        ManifestFields flags = m.object("flags");
+        ReferenceModel.ResidualScale residual = new ReferenceModel.ResidualScale(
+                flags.numberOrNaN("residual_median"), flags.numberOrNaN("residual_scale"));
+        if (residual.scale() < 0) {
+            throw flags.bad("residual_scale", "is " + Json.write(residual.scale()) + "; a scale cannot be negative");
+        }
+        TuningSummary tuning = m.required("tuning") == null ? null : TuningSummary.fromJson(m.object("tuning"));
+        return new Described(m.text("tool_version"), created(m), source, columns, settings, center, spread,
+                whitening, residual, tuning);
+    }
+
+    /** The settings; k must be at least 1 and at most the stored rows. */
+    private static ModelSettings settingsOf(ManifestFields m, int rows) {
+        ManifestFields scaling = m.object("scaling");
+        ManifestFields flags = m.object("flags");
+        String metric = m.oneOf("metric", ModelSettings.METRICS);
+        String weights = m.oneOf("weights", ModelSettings.WEIGHTS);
+        String method = scaling.oneOf("method", ModelSettings.SCALINGS);
+        String band = m.oneOf("band", ModelSettings.BANDS);
+        String zScale = flags.oneOf("z_scale", ModelSettings.Z_SCALES);
+        if (rows == 0) {
+            throw new IllegalArgumentException("the model holds no usable reference rows (its manifest says \"rows\": 0)");
+        }
+        int k = m.integer("k", 1, rows);
+        double threshold = flags.number("threshold");
+        if (!(threshold > 0)) {
+            throw flags.bad("threshold", "is " + Json.write(threshold) + "; a flag threshold must be positive");
+        }
+        // Files written before the estimate existed have no field: they were fitted with the mean.
+        String estimate = m.present("estimate") ? m.oneOf("estimate", ModelSettings.ESTIMATES) : ModelSettings.ESTIMATES.get(0);
+        return new ModelSettings(metric, weights, method, k, band, threshold, zScale, estimate);
+    }
+
+    /** Spreads positive and of normal size (a subnormal divisor overflows); "none" is centre 0, spread 1. */
+    private static void checkScaling(ManifestFields scaling, String method, double[] center, double[] spread) {
+        for (int j = 0; j < spread.length; j++) {
+            if (!(spread[j] >= Double.MIN_NORMAL)) {
+                throw scaling.bad("spread[" + j + "]", "is " + Json.write(spread[j]) + "; a spread must be positive"
+                        + (spread[j] > 0 ? " and at least " + Double.MIN_NORMAL : ""));
+            }
+            if ("none".equals(method) && (center[j] != 0 || spread[j] != 1)) {
+                throw scaling.bad(center[j] != 0 ? "center[" + j + "]" : "spread[" + j + "]",
+                        "must be " + (center[j] != 0 ? "0" : "1") + " when \"scaling.method\" is none");
+            }
+        }
+    }
+
+    /**
+     * The whitening matrix: for the Mahalanobis metric d×d finite values, lower triangular with a
+     * positive diagonal (the inverse of a Cholesky factor, as the fit computes it); else null.
+     */
+    private static double[] whiteningOf(ManifestFields scaling, String metric, int d) {
+        boolean mahalanobis = "mahalanobis".equals(metric);
+        if (!mahalanobis) {
+            if (scaling.required("whitening") != null) {
+                throw scaling.bad("whitening", "must be null for the " + metric + " metric");
+            }
+            return null;
+        }
+        if (scaling.required("whitening") == null) {
+            throw scaling.bad("whitening", "is missing (null); the mahalanobis metric needs it");
+        }
+        double[] w = scaling.finiteDoubles("whitening", d * d);
+        for (int i = 0; i < d; i++) {
+            if (!(w[i * d + i] > 0)) {
+                throw scaling.bad("whitening[" + (i * d + i) + "]", "is " + Json.write(w[i * d + i])
+                        + "; the diagonal of the whitening matrix must be positive");
+            }
+            for (int k = i + 1; k < d; k++) {
+                if (w[i * d + k] != 0) {
+                    throw scaling.bad("whitening[" + (i * d + k) + "]", "is " + Json.write(w[i * d + k])
+                            + "; the whitening matrix is lower triangular, so it must be 0");
+                }
+            }
+        }
+        return w;
     }
 
     private static ReferenceRows rowsOf(ModelArchive.Contents contents, ModelColumns columns) {
@@ -174,16 +299,12 @@ public final class ModelFile {
         }
     }
 
-    private static double numberOrNaN(Map<?, ?> m, String key) {
-        return ManifestFields.required(m, key) == null ? Double.NaN : ManifestFields.number(m, key);
-    }
-
-    private static Instant created(Map<?, ?> m) {
-        String text = ManifestFields.text(m, "created");
+    private static Instant created(ManifestFields m) {
+        String text = m.text("created");
         try {
             return Instant.parse(text);
         } catch (DateTimeParseException e) {
-            throw new IllegalArgumentException("field \"created\" is not an ISO 8601 UTC time: " + text);
+            throw m.bad("created", "is not an ISO 8601 UTC time: " + text);
         }
     }
 }

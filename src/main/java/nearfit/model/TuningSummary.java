@@ -63,19 +63,26 @@ public record TuningSummary(long rows, int[] k, double[] rmse, double[] rmseSe, 
     }
 
     /** Reads the object {@link #toJson()} writes; throws {@link IllegalArgumentException} naming a bad field. */
-    public static TuningSummary fromJson(Map<?, ?> m) {
-        int[] k = ManifestFields.ints(m, "k");
-        boolean categories = m.containsKey("error_rate");
-        Object sampled = m.get("sampled");
-        return new TuningSummary(ManifestFields.whole(m, "rows"), k,
-                categories ? null : ManifestFields.doubles(m, "rmse"),
-                categories ? null : ManifestFields.doubles(m, "rmse_se"),
-                categories ? null : ManifestFields.doubles(m, "mae"),
-                categories ? null : ManifestFields.doubles(m, "press"),
-                categories ? null : ManifestFields.doubles(m, "r2_pred"),
-                categories ? ManifestFields.doubles(m, "error_rate") : null,
-                categories ? ManifestFields.doubles(m, "error_rate_se") : null,
-                (int) ManifestFields.whole(m, "best_k"), (int) ManifestFields.whole(m, "one_se_k"),
-                sampled == null ? -1 : ManifestFields.whole(m, "sampled"));
+    static TuningSummary fromJson(ManifestFields m) {
+        int[] k = m.ints("k", 1, Integer.MAX_VALUE);
+        boolean categories = m.map().containsKey("error_rate");
+        long sampled = m.present("sampled") ? m.whole("sampled", 0, Long.MAX_VALUE >> 11) : -1;
+        try {
+            return new TuningSummary(m.whole("rows", 0, Integer.MAX_VALUE), k,
+                    categories ? null : m.doubles("rmse"),
+                    categories ? null : m.doubles("rmse_se"),
+                    categories ? null : m.doubles("mae"),
+                    categories ? null : m.doubles("press"),
+                    categories ? null : m.doubles("r2_pred"),
+                    categories ? m.doubles("error_rate") : null,
+                    categories ? m.doubles("error_rate_se") : null,
+                    m.integer("best_k", 1, Integer.MAX_VALUE), m.integer("one_se_k", 1, Integer.MAX_VALUE),
+                    sampled);
+        } catch (IllegalArgumentException e) {
+            if (e.getMessage().startsWith("manifest field")) {
+                throw e;
+            }
+            throw new IllegalArgumentException("manifest field \"" + m.path() + "\": " + e.getMessage(), e);
+        }
     }
 }

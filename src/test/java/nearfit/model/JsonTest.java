@@ -48,4 +48,12 @@ class JsonTest {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> Json.parse("{} x"));
         assertEquals("not valid JSON at character 3: text after the end of the document", e.getMessage());
     }
+
+    // RFC 8259 §4: names within an object SHOULD be unique; readers differ on which value wins, so none is guessed.
+    @Test
+    void rejectsAKeyGivenTwiceInOneObject() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> Json.parse("{\"k\":7,\"k\":70}"));
+        assertEquals("not valid JSON at character 10: the key \"k\" appears twice", e.getMessage());
+    }
 }

@@ -66,7 +66,7 @@ class ModelEstimateFieldTest {
         manifest.put("estimate", "mode");
         Path p = write(manifest, m, "mode.nfm");
         NearfitException e = assertThrows(NearfitException.class, () -> ModelFile.read(p));
-        assertTrue(e.getMessage().contains("damaged model file") && e.getMessage().contains("estimate"),
+        assertTrue(e.getMessage().contains("mode.nfm: manifest field \"estimate\" is \"mode\"; it must be one of mean, median"),
                 e.getMessage());
     }
 }

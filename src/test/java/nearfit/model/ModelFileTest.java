@@ -38,7 +38,7 @@ class ModelFileTest {
                 null, null, 2, 2, -1);
         return new ReferenceModel("0.1.0", Instant.parse("2026-03-01T10:15:30Z"),
                 new SourceInfo("site-log.csv.gz", 1234, "ab".repeat(32), "turbine != T03"), columns,
-                new ModelSettings("manhattan", "tricube", "robust", 2, "sd2", 3.0, "reference"),
+                new ModelSettings("mahalanobis", "tricube", "robust", 2, "sd2", 3.0, "reference"),
                 new double[] {7.0, 10.5}, new double[] {2.0, 1.25}, new double[] {1, 0, 0.5, 2},
                 new ReferenceModel.ResidualScale(-0.5, 42.0), tuning, rows);
     }
@@ -70,8 +70,10 @@ class ModelFileTest {
     @Test
     void aModelWithoutGroupOrTuningHasNeither() {
         ReferenceModel m = sample(false);
+        // Without whitening, so with a metric other than Mahalanobis.
+        ModelSettings euclidean = new ModelSettings("euclidean", "tricube", "robust", 2, "sd2", 3.0, "reference");
         ReferenceModel plain = new ReferenceModel(m.toolVersion(), m.created(),
-                new SourceInfo("-", -1, null, null), m.columns(), m.settings(), m.scaleCenter(),
+                new SourceInfo("-", -1, null, null), m.columns(), euclidean, m.scaleCenter(),
                 m.scaleSpread(), null, m.residualScale(), null, m.rows());
         ReferenceModel back = ModelFile.read(saved(plain));
         assertNull(back.columns().group());
@@ -88,7 +90,7 @@ class ModelFileTest {
             String manifest = new String(z.getInputStream(z.getEntry("manifest.json")).readAllBytes(),
                     StandardCharsets.UTF_8);
             assertTrue(manifest.contains("\"created\":\"2026-03-01T10:15:30Z\""), manifest);
-            assertTrue(manifest.contains("\"metric\":\"manhattan\""), manifest);
+            assertTrue(manifest.contains("\"metric\":\"mahalanobis\""), manifest);
         }
     }
 
@@ -101,8 +103,7 @@ class ModelFileTest {
         arrays.put("source_line", new long[0]);
         ModelArchive.write(p, false, List.of(), manifest, arrays);
         NearfitException e = assertThrows(NearfitException.class, () -> ModelFile.read(p));
-        assertTrue(e.getMessage().contains("damaged model file") && e.getMessage().contains("\"metric\""),
-                e.getMessage());
+        assertEquals(p + ": manifest field \"metric\" is missing", e.getMessage());
     }
 
     @Test
@@ -113,7 +114,8 @@ class ModelFileTest {
         manifest.put("rows", 5L);
         ModelArchive.write(p, false, List.of(), manifest, arraysOf(m));
         NearfitException e = assertThrows(NearfitException.class, () -> ModelFile.read(p));
-        assertTrue(e.getMessage().contains("\"rows\""), e.getMessage());
+        assertEquals(p + ": is damaged: entry input.0 is listed as 4 f64 values, the model needs 5 f64 values",
+                e.getMessage());
     }
 
     @Test
