@@ -47,6 +47,13 @@ final class SourceTable {
      * when quiet, since they are about the data, not progress.
      */
     static SourceTable load(String name, ColumnRequest request, int threads, boolean quiet, PrintWriter err) {
+        return load(name, request, false, threads, quiet, err);
+    }
+
+    /** As {@link #load(String, ColumnRequest, int, boolean, PrintWriter)}; {@code keepTime} also keeps the
+     * file's first time column, so that scored rows can be traced by their time. */
+    static SourceTable load(String name, ColumnRequest request, boolean keepTime, int threads, boolean quiet,
+                            PrintWriter err) {
         boolean stdin = "-".equals(name);
         Path path = stdin ? null : Path.of(name);
         if (!stdin && !Files.isRegularFile(path)) {
@@ -55,7 +62,7 @@ final class SourceTable {
         CompletableFuture<String> sha = stdin ? CompletableFuture.completedFuture(null)
                 : CompletableFuture.supplyAsync(() -> sha256Of(path, name));
         LoadOptions options = LoadOptions.builder().threads(threads).keepColumns(request.required())
-                .keepIfPresent(request.optional()).build();
+                .keepIfPresent(request.optional()).keepFirstTimeColumn(keepTime).build();
         long start = System.nanoTime();
         Table table;
         try {
