@@ -22,7 +22,8 @@ import java.util.Arrays;
  * The reference widths are computed when asked, from the model in effect (its metric, scaling and k), on
  * at most {@link #SAMPLE_ROWS} reference rows taken at an even stride in canonical order (sorted by the
  * inputs, so the stride covers the input space); the rest of a big reference adds little to a 99th
- * percentile. With k at least the number of reference rows minus one, no width leaves a row out and the
+ * percentile. When that quantile is 0 (k exact duplicates beside nearly every reference row) the largest
+ * sampled width stands in for it. With k at least the number of reference rows minus one, no width leaves a row out and the
  * far rule is off ({@link #farRuleOn()} false).
  */
 public final class ReferenceReach {
@@ -78,7 +79,10 @@ public final class ReferenceReach {
             }
         }, Progress.NONE);
         Arrays.sort(widths);
-        return new ReferenceReach(min, max, Quantiles.sortedQuantile(widths, m, WIDTH_QUANTILE), m);
+        double q = Quantiles.sortedQuantile(widths, m, WIDTH_QUANTILE);
+        // Heavily tied data (readings rounded to a few steps) can put k equal rows beside almost every row; a
+        // quantile of 0 would call every row between two steps far, so the largest width stands in for it.
+        return new ReferenceReach(min, max, q > 0 ? q : widths[m - 1], m);
     }
 
     /** The window width at scaled point q with reference position i left out. */
