@@ -75,6 +75,10 @@ final class SourceTable {
         if (!quiet) {
             String bad = report.badCells() == 0 ? "" : String.format(Locale.ROOT, " (%d bad cells, read as missing)",
                     report.badCells());
+            if (report.droppedRows() > 0) {
+                bad += String.format(Locale.ROOT, "; %d ragged rows dropped (another number of fields than the "
+                        + "header; describe lists their lines)", report.droppedRows());
+            }
             err.printf(Locale.ROOT, "nearfit: read %d rows from %s in %.1f s%s%n", table.rowCount(), name,
                     (System.nanoTime() - start) / 1e9, bad);
         }

@@ -70,6 +70,18 @@ class CheckCommandTest {
     }
 
     @Test
+    void aRaggedRowIsNotScoredAndTheLoadLineSaysItWasDropped() throws IOException {
+        Path ragged = dir.resolve("ragged.csv");
+        Files.writeString(ragged, "time,turbine,wind_ms,power_kw\n2026-02-01T00:00:00Z,T01,7.5,800\n"
+                + "2026-02-01T00:10:00Z,T01,7,5,800\n2026-02-01T00:20:00Z,T01,8.5,1100\n", StandardCharsets.UTF_8);
+        CliRun.Result r = CliRun.inProcess("check", model, ragged.toString(), "--limit", "100", "--format", "json");
+        assertEquals(0, r.status(), r.toString());
+        assertEquals(2.0, ((Map<?, ?>) Json.parse(r.out())).get("rows"), "the line with a decimal comma is not a row");
+        assertTrue(r.err().contains(" in ") && r.err().contains("; 1 ragged rows dropped (another number of fields "
+                + "than the header; describe lists their lines)\n"), r.err());
+    }
+
+    @Test
     void windSpeedsInKilometresPerHourAreReportedBeyondTheReference() throws IOException {
         // The same site's readings with wind in km/h against a reference in m/s: most rows lie above the
         // reference's largest wind speed, where a k-NN curve is flat.
