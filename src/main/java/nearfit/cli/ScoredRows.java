@@ -64,8 +64,8 @@ final class ScoredRows {
      * @param votes       class votes (category response), or {@code null}
      * @param z           z at each row, or {@code null} without a number response in the file
      */
-    record Block(int from, long[] lines, double[] times, int[] groups, double[][] x, double[] response, int[] actualClass,
-                 Estimates estimates, ClassVotes votes, double[] z) {
+    record Block(int from, long[] lines, double[] times, int[] groups, double[][] x, double[] response,
+                 int[] actualClass, Estimates estimates, ClassVotes votes, double[] z) {
         /** Rows in the block. */
         int size() {
             return lines.length;
