@@ -2,17 +2,23 @@ package nearfit.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.time.Instant;
+import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
 
+import nearfit.knn.ReferenceReach;
 import nearfit.model.ModelColumns;
 import nearfit.model.ModelFile;
+import nearfit.model.ModelSettings;
 import nearfit.model.ReferenceModel;
 import nearfit.model.RestoredModel;
 import nearfit.model.SafeOutput;
+import nearfit.model.TuningSummary;
 import nearfit.table.CategoryColumn;
 import nearfit.table.NearfitException;
+import nearfit.table.VisibleText;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -25,9 +31,15 @@ import picocli.CommandLine.Spec;
  * within the limit, 1 when it is not, 2 for a usage or input error.
  */
 @Command(name = "check", mixinStandardHelpOptions = true, sortOptions = false,
-        description = "Score the rows of FILE against a reference model: rows, rows scored, rows flagged "
-                + "(|z| above the threshold) and their share, per group, and the worst rows. "
-                + "Exit status 0 when the flagged share is within --limit, 1 when it is not, 2 for an error.")
+        description = "Score the rows of FILE against a reference model. The report names what was checked (model "
+                + "file and its SHA-256, data file, row condition, k and how it was chosen, metric, threshold, z scale, "
+                + "tool version, time of the run), then gives rows, rows scored, rows flagged (|z| above the "
+                + "threshold) and their share, the rows beyond the reference (outside an input's range, or far from "
+                + "every reference row: the fit there is an extrapolation), counts per group, and the worst rows with "
+                + "their line, time, group and inputs. "
+                + "Exit status 0 when the flagged share is within --limit (and the share beyond the reference within "
+                + "--max-outside, when given), 1 when it is not, 2 for an error, including fewer than --min-rows "
+                + "rows scored (an empty batch or a row condition that matches nothing never passes).")
 final class CheckCommand implements Callable<Integer> {
     /** Worst rows listed in the report. */
     static final int WORST_ROWS = 10;
@@ -42,6 +54,16 @@ final class CheckCommand implements Callable<Integer> {
             description = "Largest flagged share that passes, in percent (default: ${DEFAULT-VALUE}).")
     String limit;
 
+    @Option(names = "--max-outside", paramLabel = "PCT",
+            description = "Largest share of scored rows beyond the reference that passes, in percent "
+                    + "(default: no limit; the share is always reported).")
+    String maxOutside;
+
+    @Option(names = "--min-rows", paramLabel = "N", defaultValue = "1",
+            description = "Fewest rows scored for a check to be judged; fewer is an error, exit status 2 "
+                    + "(default: ${DEFAULT-VALUE}).")
+    String minRows;
+
     @Option(names = "--threshold", paramLabel = "Z",
             description = "|z| above which a row is flagged (default: the model's, normally 3.5).")
     String threshold;
@@ -50,7 +72,10 @@ final class CheckCommand implements Callable<Integer> {
             description = "Report format (default: ${DEFAULT-VALUE}).")
     String format;
 
-    @Option(names = "-o", paramLabel = "FLAGGED", description = "Also write the flagged rows here as CSV.")
+    @Option(names = "-o", paramLabel = "FLAGGED",
+            description = "Also write the flagged rows here as CSV (line, time, group, inputs, response, fit, band, "
+                    + "resid, z). An existing file is kept unless --force is given: add --force when a cron job "
+                    + "writes the same file every run.")
     Path flaggedOutput;
 
     @Mixin
@@ -62,6 +87,8 @@ final class CheckCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         double limitFraction = OptionValues.percent("--limit", limit);
+        double maxOutsideFraction = maxOutside == null ? Double.NaN : OptionValues.percent("--max-outside", maxOutside);
+        int leastRows = OptionValues.positive("--min-rows", minRows, "a whole number of at least 1");
         Double z = threshold == null ? null : OptionValues.positiveNumber("--threshold", threshold);
         boolean json = "json".equals(OptionValues.oneOf("--format", format, List.of("text", "json")));
         model.validate();
@@ -78,6 +105,7 @@ final class CheckCommand implements Callable<Integer> {
             throw new NearfitException("check: needs a model of a number response; " + columns.response()
                     + " is a category (use predict for class votes)");
         }
+        String modelSha = SourceTable.sha256Of(modelFile, modelFile.toString());
         RestoredModel restored = RestoredModel.of(stored, model.over(stored.settings()), model.threads());
         ScoredRows scored = ScoredRows.open(restored, file, model, spec.commandLine().getErr());
         if (!scored.hasResponse()) {
@@ -86,38 +114,87 @@ final class CheckCommand implements Callable<Integer> {
         }
         double cut = z == null ? stored.settings().flagThreshold() : z;
         CategoryColumn g = scored.group();
-        CheckReport.Tally tally = new CheckReport.Tally(g == null ? List.of() : g.labels(), cut, WORST_ROWS);
+        CheckReport.About about = about(stored, restored, modelSha, scored, cut);
+        ReferenceReach reach = ReferenceReach.of(restored.engine());
+        CheckReport.Tally tally = new CheckReport.Tally(about, g == null ? List.of() : g.labels(), cut, reach,
+                WORST_ROWS);
         if (flaggedOutput == null) {
-            scored.forEachBlock(b -> count(tally, b));
+            scored.forEachBlock(tally::add);
+            requireRows(tally, scored, leastRows);
         } else {
-            // Flagged rows are written as they are found, so none is kept in memory.
+            // Flagged rows are written as they are found, so none is kept in memory; too few rows scored
+            // fails inside the write, so no file is left behind.
             PredictionCsv.write(flaggedOutput, model.force, inputs, null, w -> {
                 PredictionCsv csv = new PredictionCsv(w, scored, columns.response(), List.of());
                 scored.forEachBlock(b -> {
-                    count(tally, b);
+                    tally.add(b);
                     csv.rows(b, (block, i) -> Math.abs(block.z()[i]) > cut);
                 });
+                requireRows(tally, scored, leastRows);
                 csv.flush();
             });
         }
-        CheckReport report = tally.report(limitFraction);
+        CheckReport report = tally.report(limitFraction, maxOutsideFraction);
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
             out.println(report.toJson());
             out.flush();
         } else {
-            report.writeText(out, columns.response(), g == null ? null : g.name());
+            report.writeText(out);
         }
         return report.passed() ? 0 : Main.EXIT_CHECK_FAILED;
     }
 
-    private static void count(CheckReport.Tally tally, ScoredRows.Block b) {
-        double[] zs = b.z();
-        double[] y = b.response();
-        double[] fit = b.estimates().fit();
-        int[] groups = b.groups();
-        for (int i = 0; i < b.size(); i++) {
-            tally.add(zs[i], y[i], fit[i], b.lines()[i], groups == null ? -1 : groups[i]);
+    /** What the check runs on, for the report's header. */
+    private CheckReport.About about(ReferenceModel stored, RestoredModel restored, String modelSha, ScoredRows scored,
+                                    double cut) {
+        ModelSettings s = restored.settings();
+        String where = model.where == null || model.where.isBlank() ? null : model.where.trim();
+        ModelColumns c = stored.columns();
+        return new CheckReport.About(modelFile.toString(), modelSha, file, where, s.k(), s.metric(), s.weights(),
+                s.scaling(), s.band(), scheme(stored.tuning()), s.zScale(), stored.residualScale().median(),
+                stored.residualScale().scale(), ToolVersion.get(), Instant.now().truncatedTo(ChronoUnit.SECONDS),
+                c.inputs(), c.response(), scored.group() == null ? null : scored.group().name(),
+                scored.time() == null ? null : scored.time().name());
+    }
+
+    /** How the model's k was chosen, in words; what the model file records and nothing more. */
+    static String scheme(TuningSummary tuning) {
+        if (tuning == null) {
+            return "given at fit, not tuned";
         }
+        if (tuning.scheme() != null) {
+            return "one-SE k by " + tuning.scheme();
+        }
+        if (tuning.sampled() >= 0) {
+            return "one-SE k by leave-one-out on " + tuning.sampled() + " sampled rows";
+        }
+        return "one-SE k by cross-validation; this model file does not record the scheme";
+    }
+
+    /**
+     * Fails with exit status 2 when fewer than {@code least} rows were scored, saying in one line what
+     * matched nothing: the file's rows, those meeting the row condition, those left out for missing values.
+     */
+    private void requireRows(CheckReport.Tally tally, ScoredRows scored, int least) {
+        if (tally.scored() >= least) {
+            return;
+        }
+        StringBuilder sb = new StringBuilder(tally.scored() == 0 ? "no row scored"
+                : "only " + tally.scored() + (tally.scored() == 1 ? " row" : " rows") + " scored");
+        sb.append(" (--min-rows ").append(least).append("): ");
+        boolean where = model.where != null && !model.where.isBlank();
+        if (where) {
+            sb.append(tally.rows()).append(" of ").append(scored.fileRows()).append(" rows meet --where \"")
+                    .append(VisibleText.of(model.where.trim())).append('"');
+        } else {
+            sb.append("the file has ").append(tally.rows()).append(tally.rows() == 1 ? " row" : " rows");
+        }
+        long left = tally.rows() - tally.scored();
+        if (left > 0) {
+            sb.append("; ").append(left).append(" left out for missing values (").append(tally.missingValues())
+                    .append(')');
+        }
+        throw NearfitException.inFile(file, sb.toString());
     }
 }

@@ -73,7 +73,7 @@ final class DescribeCommand implements Callable<Integer> {
     /** The one JSON object of {@code --format json}; times in epoch milliseconds, absent values null. */
     static String json(LoadReport report, List<ColumnSummary> summaries) {
         Json.Writer w = new Json.Writer().beginObject();
-        w.key("rows").value(report.rows()).key("ragged_rows").value(report.raggedRows()).key("columns").beginArray();
+        w.key("rows").value(report.rows()).key("dropped_rows").value(report.droppedRows()).key("ragged_rows").value(report.raggedRows()).key("columns").beginArray();
         for (ColumnSummary s : summaries) {
             w.beginObject().key("name").value(s.name()).key("type").value(s.type().label())
                     .key("count").value(s.count()).key("missing").value(s.missing()).key("bad").value(s.bad())
@@ -107,7 +107,8 @@ final class DescribeCommand implements Callable<Integer> {
             }
         }
         StringBuilder out = new StringBuilder();
-        out.append(String.format(Locale.ROOT, "%s: %d rows, %d columns, delimiter %s, %s%s%n", shown(r.source()), r.rows(),
+        out.append(String.format(Locale.ROOT, "%s: %d rows kept, %d dropped, %d columns, delimiter %s, %s%s%n",
+                shown(r.source()), r.rows(), r.droppedRows(),
                 summaries.size(), r.delimiterName(), r.headerPresent() ? "header row" : "no header row",
                 r.decimalComma() ? ", decimal comma" : ""));
         out.append(align(rows));
@@ -119,7 +120,7 @@ final class DescribeCommand implements Callable<Integer> {
     }
 
     private static void appendReport(StringBuilder out, LoadReport r) {
-        out.append(String.format(Locale.ROOT, "ragged rows: %d (%d short, padded with missing; %d long, extra fields dropped)%n",
+        out.append(String.format(Locale.ROOT, "ragged rows: %d dropped (%d short, %d long; none of their cells is used)%n",
                 r.raggedRows(), r.shortRows(), r.longRows()));
         for (BadCell c : r.raggedExamples()) {
             out.append(String.format(Locale.ROOT, "  line %d: %s%n", c.line(), shown(c.text())));

@@ -77,6 +77,9 @@ final class FitCommand implements Callable<Integer> {
         ReferenceModel saved = ReferenceCapture.capture(ToolVersion.get(), source.info, engine, loo, table,
                 tuned == null ? -1 : tuned.sampled(), source.responseLabels, source.groupName, source.groupLabels,
                 source.facts);
+        if (tuned != null) {
+            saved = saved.withTuning(saved.tuning().withScheme(tuned.scheme()));
+        }
         ModelFile.write(saved, output, model.force, inputs);
         spec.commandLine().getOut().printf("fitted k = %d on %s; wrote %s%n", saved.settings().k(),
                 nearfit.table.VisibleText.of(source.described), nearfit.table.VisibleText.of(output.toString()));

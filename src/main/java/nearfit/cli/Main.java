@@ -84,6 +84,7 @@ public final class Main implements Runnable {
         boolean debug = java.util.Arrays.asList(args).contains("--debug");
         cli.setParameterExceptionHandler((ex, a) -> {
             err.println("nearfit: " + ex.getMessage());
+            TypoHint.of(ex).ifPresent(err::println);
             err.flush();
             return EXIT_USAGE;
         });

@@ -19,7 +19,8 @@ import org.apache.commons.csv.CSVPrinter;
 
 /**
  * Writes scored rows as CSV (RFC 4180 quoting by Commons CSV; text cells neutralised by
- * {@link CsvCells}): {@code line}, the group, the inputs, the response, then {@code fit, band_lo,
+ * {@link CsvCells}): {@code line}, the file's first time column (when it has one and it is not an
+ * input), the group, the inputs, the response, then {@code fit, band_lo,
  * band_hi, resid, z} for a number response or {@code class, share} for a category response. Times
  * are written in ISO 8601 (UTC).
  */
@@ -39,12 +40,15 @@ final class PredictionCsv {
     private final CSVPrinter csv;
     private final ScoredRows source;
     private final List<String> classLabels;
+    /** Whether the time column is written on its own (it is not one of the inputs). */
+    private final boolean timeColumn;
 
     /** Starts a CSV of {@code source}'s rows on {@code w} and writes its header. */
     PredictionCsv(Writer w, ScoredRows source, String responseName, List<String> classLabels) throws IOException {
         this.csv = new CSVPrinter(w, CSVFormat.RFC4180.builder().setRecordSeparator('\n').get());
         this.source = source;
         this.classLabels = classLabels;
+        this.timeColumn = source.time() != null && !source.inputNames().contains(source.time().name());
         header(responseName);
     }
 
@@ -90,6 +94,9 @@ final class PredictionCsv {
 
     private void header(String responseName) throws IOException {
         csv.print("line");
+        if (timeColumn) {
+            csv.print(CsvCells.text(source.time().name()));
+        }
         if (source.group() != null) {
             csv.print(CsvCells.text(source.group().name()));
         }
@@ -117,6 +124,9 @@ final class PredictionCsv {
 
     private void record(ScoredRows.Block b, int i) throws IOException {
         csv.print(Long.toString(b.lines()[i]));
+        if (timeColumn) {
+            csv.print(cell(b.times()[i], true));
+        }
         if (b.groups() != null) {
             int g = b.groups()[i];
             csv.print(g < 0 ? "" : CsvCells.text(source.group().labels().get(g)));

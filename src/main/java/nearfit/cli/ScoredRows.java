@@ -54,6 +54,8 @@ final class ScoredRows {
      *
      * @param from        the position of the block's first row among the scored rows
      * @param lines       the source line of each row
+     * @param times       the file's first time column at each row (epoch ms, NaN missing), or {@code null}
+     *                    when the file has no time column
      * @param groups      the group code of each row (-1 missing), or {@code null} without a group column
      * @param x           the inputs' values, one array per input, NaN when missing (times in epoch ms)
      * @param response    the response values, or {@code null} (no response column, or a category response)
@@ -62,8 +64,8 @@ final class ScoredRows {
      * @param votes       class votes (category response), or {@code null}
      * @param z           z at each row, or {@code null} without a number response in the file
      */
-    record Block(int from, long[] lines, int[] groups, double[][] x, double[] response, int[] actualClass,
-                 Estimates estimates, ClassVotes votes, double[] z) {
+    record Block(int from, long[] lines, double[] times, int[] groups, double[][] x, double[] response,
+                 int[] actualClass, Estimates estimates, ClassVotes votes, double[] z) {
         /** Rows in the block. */
         int size() {
             return lines.length;
@@ -85,6 +87,8 @@ final class ScoredRows {
     private final CategoryColumn actual;
     private final int[] modelCodeOfFileCode;
     private final CategoryColumn group;
+    /** The file's first time column, or {@code null}: it lets a row be traced beyond its line. */
+    private final TimeColumn time;
     private final PrintWriter err;
     private final boolean quiet;
     private final int blockRows;
@@ -113,6 +117,7 @@ final class ScoredRows {
                 ? source.category("model response", columns.response()) : null;
         this.modelCodeOfFileCode = actual == null ? null : codeMap(actual, columns.responseLabels());
         this.group = groupColumn(table, columns.group());
+        this.time = firstTime(table);
         this.err = err;
         this.quiet = options.quiet;
         this.blockRows = options.blockRows;
@@ -126,13 +131,23 @@ final class ScoredRows {
         ModelColumns columns = model.stored().columns();
         ColumnRequest request = ColumnRequest.NONE.require("model input", columns.inputs())
                 .allow(columns.response(), columns.group()).where(options.where);
-        SourceTable source = SourceTable.load(file, request, options.threads(), options.quiet, err);
+        SourceTable source = SourceTable.load(file, request, true, options.threads(), options.quiet, err);
         return new ScoredRows(model, source, options, err);
     }
 
     /** Rows to score (those meeting the row condition). */
     int rowCount() {
         return rowCount;
+    }
+
+    /** Rows the file holds (ragged rows, dropped by the loader, not among them). */
+    int fileRows() {
+        return table.rowCount();
+    }
+
+    /** The file's first time column, or {@code null} when it has none. */
+    TimeColumn time() {
+        return time;
     }
 
     List<String> inputNames() {
@@ -179,20 +194,21 @@ final class ScoredRows {
                 groups[i] = group.code(row);
             }
         }
+        double[] times = time == null ? null : values(time, from, size);
         double[][] x = new double[inputs.length][];
         for (int j = 0; j < x.length; j++) {
             x[j] = values(inputs[j], from, size);
         }
         Progress offset = blockProgress(progress, from);
         if (category) {
-            return new Block(from, lines, groups, x, null, actualClasses(from, size), null,
+            return new Block(from, lines, times, groups, x, null, actualClasses(from, size), null,
                     engine.voteAll(x, offset), null);
         }
         double[] y = response == null ? null : values(response, from, size);
         Estimates est = engine.estimateAll(x, offset);
         double[] z = y == null ? null : localZ ? localZ(y, est.fit(), est.localSd())
                 : zScores(y, est.fit(), residualScale);
-        return new Block(from, lines, groups, x, y, null, est, null, z);
+        return new Block(from, lines, times, groups, x, y, null, est, null, z);
     }
 
     /** The whole run's progress seen from a block starting at {@code from}. */
@@ -274,6 +290,16 @@ final class ScoredRows {
             return e / s;
         }
         return e == 0 ? 0 : Math.copySign(Double.POSITIVE_INFINITY, e);
+    }
+
+    /** The first time column of the table (file order), or {@code null}. */
+    private static TimeColumn firstTime(Table table) {
+        for (Column c : table.columns()) {
+            if (c instanceof TimeColumn t) {
+                return t;
+            }
+        }
+        return null;
     }
 
     private static CategoryColumn groupColumn(Table table, String group) {

@@ -48,6 +48,13 @@ final class SourceTable {
      * when quiet, since they are about the data, not progress.
      */
     static SourceTable load(String name, ColumnRequest request, int threads, boolean quiet, PrintWriter err) {
+        return load(name, request, false, threads, quiet, err);
+    }
+
+    /** As {@link #load(String, ColumnRequest, int, boolean, PrintWriter)}; {@code keepTime} also keeps the
+     * file's first time column, so that scored rows can be traced by their time. */
+    static SourceTable load(String name, ColumnRequest request, boolean keepTime, int threads, boolean quiet,
+                            PrintWriter err) {
         boolean stdin = "-".equals(name);
         Path path = stdin ? null : ArgumentPath.of(name);
         if (!stdin && (Files.isDirectory(path) || !Files.exists(path))) {
@@ -58,7 +65,7 @@ final class SourceTable {
         CompletableFuture<String> sha = stream ? CompletableFuture.completedFuture(null)
                 : CompletableFuture.supplyAsync(() -> sha256Of(path, name));
         LoadOptions options = LoadOptions.builder().threads(threads).keepColumns(request.required())
-                .keepIfPresent(request.optional()).build();
+                .keepIfPresent(request.optional()).keepFirstTimeColumn(keepTime).build();
         long start = System.nanoTime();
         Table table;
         try {
@@ -71,6 +78,10 @@ final class SourceTable {
         if (!quiet) {
             String bad = report.badCells() == 0 ? "" : String.format(Locale.ROOT, " (%d bad cells, read as missing)",
                     report.badCells());
+            if (report.droppedRows() > 0) {
+                bad += String.format(Locale.ROOT, "; %d ragged rows dropped (another number of fields than the "
+                        + "header; describe lists their lines)", report.droppedRows());
+            }
             err.printf(Locale.ROOT, "nearfit: read %d rows from %s in %.1f s%s%n", table.rowCount(), VisibleText.of(name),
                     (System.nanoTime() - start) / 1e9, bad);
         }

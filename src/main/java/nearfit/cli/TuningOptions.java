@@ -68,7 +68,9 @@ final class TuningOptions {
         }
         progress.done();
         long sampled = t.evaluatedRows() < t.referenceRows() ? t.evaluatedRows() : -1;
-        return new Result(t, sampled);
+        String scheme = folds > 0 ? folds + "-fold cross-validation"
+                : sampled >= 0 ? "leave-one-out on " + sampled + " sampled rows" : "leave-one-out";
+        return new Result(t, sampled, scheme);
     }
 
     /**
@@ -91,7 +93,7 @@ final class TuningOptions {
     record Fitted(KnnModel engine, Result tuned) {
     }
 
-    /** A tuning table and the sample size (-1 when every row was evaluated). */
-    record Result(TuningTable table, long sampled) {
+    /** A tuning table, the sample size (-1 when every row was evaluated) and how rows were held out. */
+    record Result(TuningTable table, long sampled, String scheme) {
     }
 }

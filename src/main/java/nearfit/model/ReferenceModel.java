@@ -49,7 +49,13 @@ public record ReferenceModel(String toolVersion, Instant created, SourceInfo sou
         }
     }
 
-    /**
+    /** This model with another tuning table (say, one that records its held-out scheme). */
+    public ReferenceModel withTuning(TuningSummary table) {
+        return new ReferenceModel(toolVersion, created, source, columns, settings, scaleCenter, scaleSpread, whitening,
+                residualScale, table, rows);
+    }
+
+        /**
      * The centre and scale of the reference's leave-one-out residuals: median and 1.4826·MAD (the
      * MAD scaled to estimate a normal distribution's standard deviation; Iglewicz and Hoaglin 1993).
      * For a category response both are NaN.

@@ -14,10 +14,24 @@ import java.util.Map;
  * @param rows    rows the figures were computed on
  * @param k       the candidate k values, ascending
  * @param sampled rows in the leave-one-out sample, or -1 when every row was used
+ * @param scheme  how rows were held out, e.g. {@code leave-one-out} or {@code 5-fold cross-validation}; {@code null}
+ *                when not recorded (model files written before it was, and the tune command's own table)
  */
 public record TuningSummary(long rows, int[] k, double[] rmse, double[] rmseSe, double[] mae,
                             double[] press, double[] r2Pred, double[] errorRate, double[] errorRateSe,
-                            int bestK, int oneSeK, long sampled) {
+                            int bestK, int oneSeK, long sampled, String scheme) {
+    /** A table without its held-out scheme recorded. */
+    public TuningSummary(long rows, int[] k, double[] rmse, double[] rmseSe, double[] mae, double[] press,
+                         double[] r2Pred, double[] errorRate, double[] errorRateSe, int bestK, int oneSeK, long sampled) {
+        this(rows, k, rmse, rmseSe, mae, press, r2Pred, errorRate, errorRateSe, bestK, oneSeK, sampled, null);
+    }
+
+    /** This table with its held-out scheme recorded. */
+    public TuningSummary withScheme(String heldOut) {
+        return new TuningSummary(rows, k, rmse, rmseSe, mae, press, r2Pred, errorRate, errorRateSe, bestK, oneSeK,
+                sampled, heldOut);
+    }
+
     /** Checks that exactly one family of figures is present and every array matches {@code k}. */
     public TuningSummary {
         boolean regression = rmse != null;
@@ -59,6 +73,9 @@ public record TuningSummary(long rows, int[] k, double[] rmse, double[] rmseSe, 
         m.put("best_k", (long) bestK);
         m.put("one_se_k", (long) oneSeK);
         m.put("sampled", sampled < 0 ? null : (Object) sampled);
+        if (scheme != null) {
+            m.put("scheme", scheme);
+        }
         return m;
     }
 
@@ -77,7 +94,7 @@ public record TuningSummary(long rows, int[] k, double[] rmse, double[] rmseSe, 
                     categories ? m.doubles("error_rate") : null,
                     categories ? m.doubles("error_rate_se") : null,
                     m.integer("best_k", 1, Integer.MAX_VALUE), m.integer("one_se_k", 1, Integer.MAX_VALUE),
-                    sampled);
+                    sampled, m.present("scheme") ? m.text("scheme") : null);
         } catch (IllegalArgumentException e) {
             if (e.getMessage().startsWith("manifest field")) {
                 throw e;

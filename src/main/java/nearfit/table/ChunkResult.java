@@ -55,7 +55,12 @@ final class ChunkResult {
         return this;
     }
 
-    /** Adds one tokenized row that starts on {@code line}; blank lines are skipped. */
+    /**
+     * Adds one tokenized row that starts on {@code line}; blank lines are skipped. A ragged row (more
+     * or fewer fields than the header) is counted and not used at all: with a field missing or one too
+     * many, nothing says which field it was, so keeping its cells in order would put values after the
+     * gap into other columns (a decimal comma splitting a number moved rotor speeds into oil temperature).
+     */
     void row(byte[] b, RowTokenizer tok, long line) {
         int n = tok.fields();
         if (n == 1 && !tok.quoted(0) && tok.contentEnd(0) == tok.contentStart(0)) {
@@ -64,15 +69,12 @@ final class ChunkResult {
         int width = layout.width();
         if (n != width) {
             ragged(n, width, line);
+            return;
         }
         int[] fields = layout.fields();
         for (int j = 0; j < columns.length; j++) {
             int f = fields[j];
             ColumnBuilder c = columns[j];
-            if (f >= n) {
-                c.addMissing();
-                continue;
-            }
             if (tok.rawEnd(f) - tok.rawStart(f) > scratch.length) {
                 scratch = new byte[Math.max(tok.rawEnd(f) - tok.rawStart(f), 2 * scratch.length)];
             }
@@ -117,11 +119,10 @@ final class ChunkResult {
     private void ragged(int n, int width, long line) {
         if (n < width) {
             shortRows++;
-            ChunkParser.keep(raggedExamples, line, null, n + " fields, padded to " + width);
         } else {
             longRows++;
-            ChunkParser.keep(raggedExamples, line, null, n + " fields, " + (n - width) + " extra dropped");
         }
+        ChunkParser.keep(raggedExamples, line, null, n + " fields, not " + width + "; row dropped");
     }
 
     private void keepBad(long line, int column, byte[] b, int s, int e) {

@@ -15,7 +15,7 @@ public sealed interface Column permits NumericColumn, CategoryColumn, TextColumn
     /** The number of rows, equal to the table's row count. */
     int size();
 
-    /** Whether the value at {@code row} is missing (empty, NA, unparseable, or a padded short row). */
+    /** Whether the value at {@code row} is missing (empty, NA or unparseable). */
     boolean isMissing(int row);
 
     /** The number of missing values, bad cells included. */

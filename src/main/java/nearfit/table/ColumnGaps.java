@@ -6,7 +6,7 @@ import java.util.List;
  * The missing cells of one column, as a load report lists them.
  *
  * @param column      the column's name
- * @param blank       missing cells that were not bad: empty, a missing-value token, or padded into a short row
+ * @param blank       missing cells that were not bad: empty or a missing-value token
  * @param bad         cells present but not of the column's type, read as missing
  * @param firstLines  the source lines of its first few missing cells, in file order
  * @param blankOnly   whether {@code firstLines} holds blank cells only; false when the column has bad cells

@@ -25,6 +25,7 @@ public final class LoadOptions {
     private final LoadProgress progress;
     private final List<String> keepColumns;
     private final List<String> keepIfPresent;
+    private final boolean keepFirstTimeColumn;
     private final BooleanSupplier cancelSignal;
     private final long parallelMinBytes;
 
@@ -36,6 +37,7 @@ public final class LoadOptions {
         this.progress = b.progress;
         this.keepColumns = b.keepColumns;
         this.keepIfPresent = b.keepIfPresent;
+        this.keepFirstTimeColumn = b.keepFirstTimeColumn;
         this.cancelSignal = b.cancelSignal;
     }
 
@@ -53,6 +55,7 @@ public final class LoadOptions {
         b.progress = progress;
         b.keepColumns = keepColumns;
         b.keepIfPresent = keepIfPresent;
+        b.keepFirstTimeColumn = keepFirstTimeColumn;
         b.cancelSignal = cancelSignal;
         b.parallelMinBytes = parallelMinBytes;
         return b;
@@ -91,6 +94,11 @@ public final class LoadOptions {
         return keepIfPresent;
     }
 
+    /** Whether the file's first time column is kept too, whatever its name (for traceable output rows). */
+    public boolean keepFirstTimeColumn() {
+        return keepFirstTimeColumn;
+    }
+
     /** Whether every column is kept: no column was named to keep, required or optional. */
     boolean keepsAll() {
         return keepColumns.isEmpty() && keepIfPresent.isEmpty();
@@ -114,6 +122,7 @@ public final class LoadOptions {
         private LoadProgress progress = LoadProgress.NONE;
         private List<String> keepColumns = List.of();
         private List<String> keepIfPresent = List.of();
+        private boolean keepFirstTimeColumn;
         private BooleanSupplier cancelSignal = () -> false;
         private long parallelMinBytes = 8L << 20;
 
@@ -162,6 +171,15 @@ public final class LoadOptions {
          */
         public Builder keepIfPresent(List<String> names) {
             this.keepIfPresent = List.copyOf(names);
+            return this;
+        }
+
+        /**
+         * Also keeps the file's first column typed as a time, when only some columns are kept: a scored row
+         * can then be traced by its time as well as its line.
+         */
+        public Builder keepFirstTimeColumn(boolean keep) {
+            this.keepFirstTimeColumn = keep;
             return this;
         }
 

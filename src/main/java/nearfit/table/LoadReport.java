@@ -6,13 +6,13 @@ import java.util.List;
  * What a load found, for the user: sizes, ragged rows, examples of bad cells, and the time taken.
  *
  * @param source         the file as the user named it ("-" for standard input)
- * @param rows           data rows loaded
+ * @param rows           data rows kept (ragged rows are not among them)
  * @param bytes          input bytes read (decompressed for gzip)
  * @param delimiter      the field delimiter used
  * @param headerPresent  whether the first row was read as a header
  * @param decimalComma   whether numbers were read with a decimal comma
- * @param shortRows      rows with fewer fields than the header, padded with missing values
- * @param longRows       rows with more fields than the header, whose extra fields were dropped
+ * @param shortRows      rows with fewer fields than the header, dropped (none of their cells is used)
+ * @param longRows       rows with more fields than the header, dropped (none of their cells is used)
  * @param raggedExamples the first ragged rows (line and what was wrong)
  * @param badCells       total cells that did not parse in number or time columns
  * @param badExamples    the first bad cells (line, column, text)
@@ -62,9 +62,19 @@ public record LoadReport(String source, int rows, long bytes, char delimiter, bo
         };
     }
 
-    /** Rows with the wrong number of fields, short and long together. */
+    /** Rows with the wrong number of fields, short and long together: all dropped. */
     public long raggedRows() {
         return shortRows + longRows;
+    }
+
+    /** Rows not used: the ragged ones. */
+    public long droppedRows() {
+        return raggedRows();
+    }
+
+    /** Data rows read: those kept and those dropped. */
+    public long rowsRead() {
+        return rows + droppedRows();
     }
 
     /** Load time in seconds. */

@@ -81,6 +81,9 @@ final class Sniffer {
             dataOffset = ends.get(0);
         }
         int[] fields = keptFields(source, allNames, options);
+        if (options.keepFirstTimeColumn() && !options.keepsAll()) {
+            fields = withFirstTime(fields, data, width, decimalComma);
+        }
         List<String> names = new ArrayList<>();
         ColumnType[] types = new ColumnType[fields.length];
         for (int j = 0; j < fields.length; j++) {
@@ -269,7 +272,22 @@ final class Sniffer {
     }
 
     /** The field indexes of the kept columns, ascending and distinct; an unknown required name fails. */
-    private static int[] keptFields(String source, List<String> names, LoadOptions options) {
+    /** {@code fields} with the first field typed as a time added in file order, when there is one. */
+    private static int[] withFirstTime(int[] fields, List<String[]> data, int width, boolean decimalComma) {
+        for (int f = 0; f < width; f++) {
+            if (typeOf(data, f, decimalComma) == ColumnType.TIME) {
+                java.util.BitSet kept = new java.util.BitSet(width);
+                for (int k : fields) {
+                    kept.set(k);
+                }
+                kept.set(f);
+                return kept.stream().toArray();
+            }
+        }
+        return fields;
+    }
+
+        private static int[] keptFields(String source, List<String> names, LoadOptions options) {
         if (options.keepsAll()) {
             int[] all = new int[names.size()];
             for (int i = 0; i < all.length; i++) {

@@ -35,6 +35,11 @@ final class TableAssembly {
             }
         }
         int rows = first.lines.size();
+        if (rows == 0 && shortRows + longRows > 0) {
+            throw NearfitException.inFile(source, "no data rows: all " + (shortRows + longRows)
+                    + " rows have another number of fields than the " + (layout.header() ? "header" : "first row")
+                    + " (" + layout.width() + "), so none is used");
+        }
         if (rows == 0) {
             throw NearfitException.inFile(source, layout.header() ? "header only: no data rows" : "no data rows");
         }

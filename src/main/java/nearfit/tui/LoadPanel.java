@@ -25,13 +25,14 @@ final class LoadPanel {
     static List<String> lines(LoadNotes notes) {
         LoadReport r = notes.report();
         List<String> out = new ArrayList<>();
-        out.add(String.format(Locale.ROOT, "%s: %s data rows read, %s kept; delimiter %s, %s%s", r.source(),
-                Figures.count(r.rows()), Figures.count(r.rows()), r.delimiterName(),
+        out.add(String.format(Locale.ROOT, "%s: %s data rows read, %s kept, %s dropped; delimiter %s, %s%s",
+                r.source(), Figures.count(r.rowsRead()), Figures.count(r.rows()), Figures.count(r.droppedRows()),
+                r.delimiterName(),
                 r.headerPresent() ? "header row" : "no header row", r.decimalComma() ? ", decimal comma" : ""));
         for (String w : r.warnings()) {
             out.add("warning: " + w);
         }
-        out.add(String.format(Locale.ROOT, "ragged lines: %s (%s short, padded with missing; %s long, extra fields dropped)",
+        out.add(String.format(Locale.ROOT, "ragged lines: %s dropped (%s short, %s long; none of their cells is used)",
                 Figures.count(r.raggedRows()), Figures.count(r.shortRows()), Figures.count(r.longRows())));
         for (BadCell c : r.raggedExamples()) {
             out.add("  line " + c.line() + ": " + c.text());

@@ -45,15 +45,15 @@ class BadInputCorpusTest {
                 new Case("truncated.csv.gz", 2, "nearfit: FILE: truncated or damaged gzip stream before any row "
                         + "(Unexpected end of ZLIB input stream)"),
                 new Case("quote-never-closed.csv", 2, "nearfit: FILE:13: the quote opened on this line is never closed"),
-                // Lines 11 and 12 use ; and tab: each is one field, padded, and its whole text a bad time.
-                new Case("mixed-delimiters.csv", 0, "ragged rows: 2 (2 short, padded with missing; 0 long, extra fields dropped)"),
+                // Lines 11 and 12 use ; and tab: each is one field, a short row, dropped whole.
+                new Case("mixed-delimiters.csv", 0, "ragged rows: 2 dropped (2 short, 0 long; none of their cells is used)"),
                 new Case("all-missing-power.csv", 0, "power_kw    number        0       30    0"),
                 new Case("constant-input.csv", 0, "air_temp_c  number       40        0    0"),
                 // NaN, nan, NAN are missing tokens; the ten spellings of infinity are bad cells.
                 new Case("nan-and-infinity.csv", 0, "bad cells: 10 (read as missing)"),
                 // Bytes that are not UTF-8 are decoded with replacement characters, not refused.
-                new Case("latin1-bytes.csv", 0, "latin1-bytes.csv: 30 rows, 5 columns, delimiter comma, header row"),
-                new Case("windows-line-endings.csv", 0, "windows-line-endings.csv: 30 rows, 5 columns, delimiter comma, header row"),
+                new Case("latin1-bytes.csv", 0, "latin1-bytes.csv: 30 rows kept, 0 dropped, 5 columns, delimiter comma, header row"),
+                new Case("windows-line-endings.csv", 0, "windows-line-endings.csv: 30 rows kept, 0 dropped, 5 columns, delimiter comma, header row"),
                 new Case("good.csv", 0, "bad cells: 0 (read as missing)"),
                 // Escape sequences in a header name and in labels are shown as visible escapes.
                 new Case("escape-sequences.csv", 0, "  turbine\\e]2;pwned\\a\\e[2J: 8 distinct; most frequent T01 (4) T02 (4) "
@@ -63,7 +63,7 @@ class BadInputCorpusTest {
                         + "(\"air_temp_c\" again) as air_temp_c_3"),
                 new Case("gzip-magic-only.gz", 2, "nearfit: FILE: truncated gzip stream: the file ends inside the gzip "
                         + "header (it holds the gzip magic bytes, but no compressed data)"),
-                new Case("relev\u00e9-donn\u00e9es.csv", 0, "relev\u00e9-donn\u00e9es.csv: 30 rows, 5 columns, "
+                new Case("relev\u00e9-donn\u00e9es.csv", 0, "relev\u00e9-donn\u00e9es.csv: 30 rows kept, 0 dropped, 5 columns, "
                         + "delimiter comma, header row"));
     }
 

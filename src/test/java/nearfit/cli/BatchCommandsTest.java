@@ -44,17 +44,19 @@ class BatchCommandsTest {
     }
 
     @Test
-    void predictWritesEveryRowWithLineFitBandResidualAndZ() {
+    void predictWritesEveryRowWithLineTimeGroupInputsFitBandResidualAndZ() {
         CliRun.Result r = CliRun.inProcess("predict", model, healthy.toString(), "--quiet");
         assertEquals(0, r.status(), r.toString());
         List<String> lines = r.out().lines().toList();
-        assertEquals("line,turbine,wind_ms,power_kw,fit,band_lo,band_hi,resid,z", lines.get(0));
+        // The time column is not a model column; it is kept so that each row can be traced by its time too.
+        assertEquals("line,time,turbine,wind_ms,power_kw,fit,band_lo,band_hi,resid,z", lines.get(0));
         assertEquals(901, lines.size());
         String[] first = lines.get(1).split(",");
         assertEquals("2", first[0]);
-        double fit = Double.parseDouble(first[4]);
-        double lo = Double.parseDouble(first[5]);
-        double hi = Double.parseDouble(first[6]);
+        assertTrue(first[1].matches("\\d{4}-\\d\\d-\\d\\dT\\d\\d:\\d\\d:\\d\\dZ"), lines.get(1));
+        double fit = Double.parseDouble(first[5]);
+        double lo = Double.parseDouble(first[6]);
+        double hi = Double.parseDouble(first[7]);
         assertTrue(lo <= fit && fit <= hi, lines.get(1));
     }
 

@@ -65,7 +65,7 @@ class DemoLogCheckTest {
         java.util.List<String> lines = Files.readAllLines(flagged);
         long mid = 0;
         for (String line : lines.subList(1, lines.size())) {
-            double wind = Double.parseDouble(line.split(",")[2]);
+            double wind = Double.parseDouble(line.split(",")[3]); // line, time, turbine, wind_ms, ...
             mid += wind >= 6.5 && wind < 11.5 ? 1 : 0;
         }
         long all = lines.size() - 1;

@@ -33,7 +33,7 @@ class DescribeCommandTest {
     private Path siteLog() throws IOException {
         return Files.writeString(dir.resolve("site.csv"), "time,turbine,wind_ms\n"
                 + "2025-03-01T00:00:00Z,T01,4\n2025-03-01T00:10:00Z,T02,6\n"
-                + "2025-03-01T00:20:00Z,T01,\n2025-03-01T00:30:00Z,T01,8,extra\n"
+                + "2025-03-01T00:20:00Z,T01,\n2025-03-01T00:30:00Z,T01,8,extra\n2025-03-01T00:35:00Z,T01,8\n"
                 + "2025-03-01T00:40:00Z,T03,1\n".repeat(6) + "2025-03-01T00:50:00Z,T03,fast\n");
     }
 
@@ -43,14 +43,14 @@ class DescribeCommandTest {
         assertEquals(0, r.status(), r.err());
         assertEquals("", r.err());
         List<String> lines = r.out().lines().toList();
-        assertTrue(lines.get(0).endsWith("site.csv: 11 rows, 3 columns, delimiter comma, header row"), lines.get(0));
+        assertTrue(lines.get(0).endsWith("site.csv: 11 rows kept, 1 dropped, 3 columns, delimiter comma, header row"), lines.get(0));
         assertTrue(lines.get(1).matches("column +type +count +missing +bad +min +p01 +p25 +median +p75 +p99 +max +mean +sd"), lines.get(1));
         // wind_ms present: 4, 6, 8 and six 1s. Expected from numpy 1.24: percentile([1,25,50,75,99]) =
         // 1, 1, 1, 4, 7.84; mean 2.6666666666666665; std(ddof=1) 2.6925824035672523 (printed to 6 digits).
         assertTrue(lines.get(4).matches("wind_ms +number +9 +2 +1 +1 +1 +1 +1 +4 +7\\.84 +8 +2\\.66667 +2\\.69258"), lines.get(4));
         assertTrue(r.out().contains("  turbine: 3 distinct; most frequent T03 (7) T01 (3) T02 (1)\n"), r.out());
-        assertTrue(r.out().contains("ragged rows: 1 (0 short, padded with missing; 1 long, extra fields dropped)\n  line 5: 4 fields, 1 extra dropped\n"), r.out());
-        assertTrue(r.out().contains("bad cells: 1 (read as missing)\n  line 12, column wind_ms: \"fast\"\n"), r.out());
+        assertTrue(r.out().contains("ragged rows: 1 dropped (0 short, 1 long; none of their cells is used)\n  line 5: 4 fields, not 3; row dropped\n"), r.out());
+        assertTrue(r.out().contains("bad cells: 1 (read as missing)\n  line 13, column wind_ms: \"fast\"\n"), r.out());
         assertTrue(r.out().matches("(?s).*loaded [0-9.]+ MB in [0-9.]+ s \\([0-9]+ MB/s\\)\n"), r.out());
     }
 
@@ -63,6 +63,7 @@ class DescribeCommandTest {
         Map<String, Object> doc = (Map<String, Object>) Json.parse(r.out());
         assertEquals(11.0, ((Number) doc.get("rows")).doubleValue());
         assertEquals(1.0, ((Number) doc.get("ragged_rows")).doubleValue());
+        assertEquals(1.0, ((Number) doc.get("dropped_rows")).doubleValue());
         @SuppressWarnings("unchecked")
         List<Map<String, Object>> cols = (List<Map<String, Object>>) doc.get("columns");
         assertEquals(List.of("time", "turbine", "wind_ms"), cols.stream().map(c -> c.get("name")).toList());

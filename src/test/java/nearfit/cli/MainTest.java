@@ -27,6 +27,32 @@ class MainTest {
     }
 
     @Test
+    void aMistypedOptionGetsTheClosestOptionOnASecondLine() {
+        Result r = run("check", "ref.nfm", "log.csv", "--grup", "turbine");
+        assertEquals(2, r.status());
+        assertEquals("nearfit: Unknown options: '--grup', 'turbine'\nnearfit: did you mean --group?\n", r.err());
+        // A swap of neighbouring letters is one edit: --wehre is --where, not --weights.
+        assertTrue(run("fit", "log.csv", "-x", "a", "-y", "b", "-o", "m.nfm", "--wehre", "a > 1").err().endsWith("nearfit: did you mean --where?\n"));
+        assertTrue(run("check", "--limt=3", "a", "b").err().endsWith("nearfit: did you mean --limit?\n"));
+    }
+
+    @Test
+    void aMistypedCommandGetsTheClosestCommand() {
+        Result r = run("chek", "ref.nfm", "log.csv");
+        assertEquals(2, r.status());
+        assertTrue(r.err().startsWith("nearfit: "), r.err());
+        assertTrue(r.err().endsWith("\nnearfit: did you mean check?\n"), r.err());
+        assertEquals(2, r.err().lines().count(), r.err());
+    }
+
+    @Test
+    void aWordCloseToNoNameGetsNoGuess() {
+        Result r = run("xyz");
+        assertEquals(2, r.status());
+        assertEquals(1, r.err().lines().count(), r.err());
+    }
+
+    @Test
     void versionPrintsTheToolName() {
         Result r = run("--version");
         assertEquals(0, r.status());

@@ -2,6 +2,7 @@ package nearfit.model;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -65,6 +66,17 @@ class ModelFileTest {
         assertArrayEquals(m.rows().groupCodes(), back.rows().groupCodes());
         assertArrayEquals(m.rows().sourceLines(), back.rows().sourceLines());
         assertEquals(Json.write(m.tuning().toJson()), Json.write(back.tuning().toJson()));
+    }
+
+    @Test
+    void theHeldOutSchemeOfTheTuningTableSurvivesAndAnOlderFileWithoutItReadsAsNotRecorded() {
+        ReferenceModel m = sample(true);
+        assertNull(ModelFile.read(saved(m)).tuning().scheme(), "the sample's table records no scheme");
+        ReferenceModel withScheme = m.withTuning(m.tuning().withScheme("5-fold cross-validation"));
+        Path p = dir.resolve("scheme.nfm");
+        ModelFile.write(withScheme, p, false, List.of());
+        assertEquals("5-fold cross-validation", ModelFile.read(p).tuning().scheme());
+        assertFalse(Json.write(m.tuning().toJson()).contains("scheme"), "no key when not recorded, as before");
     }
 
     @Test

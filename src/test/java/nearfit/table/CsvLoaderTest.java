@@ -3,6 +3,7 @@ package nearfit.table;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertInstanceOf;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.charset.StandardCharsets;
@@ -116,15 +117,46 @@ class CsvLoaderTest {
     }
 
     @Test
-    void raggedRowsArePaddedOrCutAndReportedByLine() {
-        Table t = CsvFiles.load(dir, "a,b,c\n1,2,3\n4,5\n6,7,8,9\n");
-        assertEquals(3, t.rowCount());
+    void raggedRowsAreDroppedWholeCountedAndReportedByLine() {
+        Table t = CsvFiles.load(dir, "a,b,c\n1,2,3\n4,5\n6,7,8,9\n10,11,12\n");
+        assertEquals(2, t.rowCount(), "the short and the long row are not used");
         assertEquals(1, t.report().shortRows());
         assertEquals(1, t.report().longRows());
-        assertTrue(((NumberColumn) t.column("c")).isMissing(1));
-        assertEquals(8.0, ((NumberColumn) t.column("c")).get(2));
+        assertEquals(2, t.report().droppedRows());
+        assertEquals(4, t.report().rowsRead());
+        assertEquals(2, t.lineOf(0));
+        assertEquals(5, t.lineOf(1), "the row after the dropped ones keeps its own line");
+        assertEquals(12.0, ((NumberColumn) t.column("c")).get(1));
         assertEquals(3, t.report().raggedExamples().get(0).line());
+        assertEquals("2 fields, not 3; row dropped", t.report().raggedExamples().get(0).text());
         assertEquals(4, t.report().raggedExamples().get(1).line());
+        assertEquals("4 fields, not 3; row dropped", t.report().raggedExamples().get(1).text());
+    }
+
+    @Test
+    void aNumberSplitByADecimalCommaNeverShiftsItsNeighboursIntoOtherColumns() {
+        // The demo log's line 88849 has this shape: one field too many, so the values after the split
+        // number would land one column to the left; before the fix rotor_rpm read 45.5 (an oil temperature).
+        Table t = CsvFiles.load(dir, "time,wind_ms,rotor_rpm,gearbox_oil_c\n"
+                + "2025-01-01T00:00:00Z,7.5,14.2,55.0\n"
+                + "2025-01-01T00:10:00Z,7,6,14.1,55.5\n"
+                + "2025-01-01T00:20:00Z,7.4,14.0\n"
+                + "2025-01-01T00:30:00Z,7.3,13.9,54.5\n");
+        NumberColumn rpm = (NumberColumn) t.column("rotor_rpm");
+        NumberColumn oil = (NumberColumn) t.column("gearbox_oil_c");
+        assertEquals(2, t.rowCount());
+        assertEquals(List.of(14.2, 13.9), List.of(rpm.get(0), rpm.get(1)));
+        assertEquals(List.of(55.0, 54.5), List.of(oil.get(0), oil.get(1)));
+        assertEquals(0, t.report().badCells(), "a dropped row's cells are not typed, so none is a bad cell");
+        assertEquals(2, t.lineOf(0));
+        assertEquals(5, t.lineOf(1));
+    }
+
+    @Test
+    void aFileOfOnlyRaggedRowsSaysSoInsteadOfHeaderOnly() {
+        NearfitException e = assertThrows(NearfitException.class, () -> CsvFiles.load(dir, "a,b,c\n1,2\n3,4\n"));
+        assertTrue(e.getMessage().contains("no data rows: all 2 rows have another number of fields than the header (3)"),
+                e.getMessage());
     }
 
     @Test

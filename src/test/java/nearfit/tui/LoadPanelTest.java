@@ -56,13 +56,13 @@ class LoadPanelTest {
         try (VirtualScreen v = open(plantedLog())) {
             v.type("L");
             String panel = v.text();
-            assertTrue(panel.contains("60 data rows read"), panel);
-            assertTrue(panel.contains("ragged lines: 2 (1 short, padded with missing; 1 long, extra fields dropped)"), panel);
+            assertTrue(panel.contains("60 data rows read, 58 kept, 2 dropped"), panel);
+            assertTrue(panel.contains("ragged lines: 2 dropped (1 short, 1 long; none of their cells is used)"), panel);
             assertTrue(panel.contains("line 20:") && panel.contains("line 25:"), panel);
             assertTrue(panel.contains("bad cells: 2 in all"), panel);
             assertTrue(find(panel, "wind_ms\\s+1\\s+1\\s+blank at 10; bad at 30 \"calm\""), panel);
-            // The short line's missing power is padded, so it counts as blank.
-            assertTrue(find(panel, "power_kw\\s+1\\s+1\\s+blank at 20; bad at 15 \"ERR\""), panel);
+            // The short line is dropped whole: its missing power is not a blank cell of power_kw.
+            assertTrue(find(panel, "power_kw\\s+0\\s+1\\s+bad at 15 \"ERR\""), panel);
             assertFalse(panel.contains("turbine  "), "a column with no gaps is not listed: " + panel);
         }
     }
@@ -70,10 +70,10 @@ class LoadPanelTest {
     @Test
     void theHeaderCountsTheNotesAndLClosesThePanel() throws Exception {
         try (VirtualScreen v = open(plantedLog())) {
-            // Ragged lines, then blank and bad cells in wind_ms and in power_kw.
-            assertTrue(v.row(0).contains("(5 load notes, L)"), v.row(0));
+            // Ragged lines, blank and bad cells in wind_ms, bad cells in power_kw.
+            assertTrue(v.row(0).contains("(4 load notes, L)"), v.row(0));
             v.type("L");
-            assertTrue(v.text().contains("load report: 5 notes"), v.text());
+            assertTrue(v.text().contains("load report: 4 notes"), v.text());
             v.type("L");
             assertFalse(v.text().contains("load report:"), "L closes the panel");
             v.type("L").key(KeyType.Escape);
@@ -102,10 +102,10 @@ class LoadPanelTest {
         LoadNotes warned = new LoadNotes(notes.report().withWarning(
                 "planted.csv: was modified while it was read (same size, 2400 bytes); if it was rewritten, load it again"),
                 notes.columns());
-        assertEquals(5, notes.count());
+        assertEquals(4, notes.count());
         // The header's "(N load notes, L)" marker is ScreenPainter's print of this count.
-        assertEquals(6, warned.count());
-        assertTrue(LoadPanel.title(warned).startsWith("load report: 6 notes"), LoadPanel.title(warned));
+        assertEquals(5, warned.count());
+        assertTrue(LoadPanel.title(warned).startsWith("load report: 5 notes"), LoadPanel.title(warned));
     }
 
     @Test
@@ -167,18 +167,18 @@ class LoadPanelTest {
         // take the test from seconds to half a minute.
         Workbench wb = CoreWorkbench.open(demoLog(), "site-log.csv.gz", JobControl.NONE);
         String panel = String.join("\n", LoadPanel.lines(wb.loadNotes()));
-        assertTrue(panel.contains("420,480 data rows read"), panel);
+        assertTrue(panel.contains("420,480 data rows read, 420,477 kept, 3 dropped"), panel);
         for (long line : DEMO_MALFORMED) {
             assertTrue(panel.contains("line " + line + ":") || panel.contains(" " + line + " \"ERR\""),
                     "line " + line + " in the panel:\n" + panel);
         }
-        // data-demo/README.md: 3008 blank cells in the default file, plus the cells padded into its two short
-        // lines (rotor_rpm on line 30739, five fields on line 221216).
+        // data-demo/README.md: 3008 blank cells in the default file; its two short lines (30739, 221216) are
+        // dropped whole, so no cell is padded into them any more.
         long blank = 0;
         for (ColumnGaps g : wb.loadNotes().columns()) {
             blank += g.blank();
         }
-        assertEquals(3008 + 1 + 5, blank);
+        assertEquals(3008, blank);
     }
 
     /** The demo log of the build (scripts/test makes it), or one generated here with the same script. */
