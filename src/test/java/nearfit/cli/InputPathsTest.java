@@ -83,8 +83,9 @@ class InputPathsTest {
         assertEquals("", r.err());
         CliRun.Result fromFile = CliRun.inProcess(argsFor(command, dir.resolve("jan.csv")));
         if (!command.equals("fit")) {
-            assertEquals(fromFile.out().replace(dir.resolve("jan.csv").toString(), "FILE"),
-                    r.out().replace(fifo.toString(), "FILE"), "the same output as from the file itself");
+            assertEquals(BadModelCorpusTest.withoutRunFacts(fromFile.out().replace(dir.resolve("jan.csv").toString(), "FILE")),
+                    BadModelCorpusTest.withoutRunFacts(r.out().replace(fifo.toString(), "FILE")),
+                    "the same output as from the file itself");
         }
     }
 
@@ -95,7 +96,7 @@ class InputPathsTest {
         String out = new String(check.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
         CliRun.Result r = OutputSafetyTest.finish(check);
         assertEquals(0, r.status(), r::toString);
-        assertTrue(out.startsWith("rows 400, scored 400,"), out);
+        assertTrue(out.contains("\nrows 400, scored 400,"), out);
         try (OutputStream gz = new GZIPOutputStream(Files.newOutputStream(dir.resolve("jan.csv.gz")))) {
             gz.write(Files.readAllBytes(dir.resolve("jan.csv")));
         }
@@ -132,7 +133,7 @@ class InputPathsTest {
         CliRun.Result r = OutputSafetyTest.finish(p);
         assertEquals(0, r.status(), () -> r + out);
         assertEquals("", r.err());
-        assertTrue(out.contains(".csv: 400 rows, 5 columns, delimiter comma, header row"), out);
+        assertTrue(out.contains(".csv: 400 rows kept, 0 dropped, 5 columns, delimiter comma, header row"), out);
         assertTrue(out.contains("fitted k = 10 on 400 reference rows"), out);
         assertTrue(out.contains("rows 400, scored 400,"), out);
         assertEquals(401, Files.readAllLines(dir.resolve("pr\u00e9dit.csv")).size(), "the output has the name given");
