@@ -17,15 +17,23 @@ final class Header {
         HeaderLine line = new HeaderLine();
         int name = line.part("nearfit  ", "");
         // The name after the last slash; not java.nio.file.Path, which refuses some names a user may give.
-        String file = in.source().substring(in.source().lastIndexOf('/') + 1);
-        int source = line.part(in.source(), file);
+        // The file's name is the user's, but it may hold control characters: they are made visible.
+        String path = nearfit.table.VisibleText.of(in.source());
+        String file = path.substring(path.lastIndexOf('/') + 1);
+        int source = line.part(path, file);
         String used = Figures.count(r.rowsUsed());
         String total = Figures.count(in.totalRows());
-        int rows = line.part("  rows " + used + " of " + total, "  rows " + used + "/" + total);
+        boolean narrowed = !s.condition().isEmpty() && !s.conditionNarrowsReference();
+        String shown = narrowed ? " shown" : "";
+        int rows = line.part("  rows " + used + shown + " of " + total, "  rows " + used + "/" + total);
         String c = s.condition();
         int where = line.part(c.isEmpty() ? new String[] {""} : new String[] {"  where " + c,
             "  where " + Figures.fit(c, 40, ascii), "  where " + Figures.fit(c, 20, ascii),
             "  where " + Figures.fit(c, 10, ascii), "  where " + Figures.fit(c, 1, ascii), ""});
+        // Whether the condition narrows the reference too is said whenever there is a condition (R switches).
+        int reference = line.part(c.isEmpty() ? new String[] {""} : s.conditionNarrowsReference()
+                ? new String[] {"  reference: condition", "  ref: condition", "  ref cond"}
+                : new String[] {"  reference: all rows", "  ref: all rows", "  ref all"});
         int n = in.notes().count();
         int notes = line.part(n == 0 ? new String[] {""} : new String[] {
             "  (" + n + (n == 1 ? " load note, L)" : " load notes, L)"), "  (" + n + " notes, L)", "  (" + n + " notes)",
@@ -38,34 +46,36 @@ final class Header {
             line.part("  loading " + Math.round(100 * in.loading()) + " %");
         }
         line.thenShorten(source).thenShorten(name).thenShorten(notes).thenShorten(where).thenShorten(where)
-                .thenShorten(where).thenShorten(notes).thenShorten(where).thenShorten(rows).thenShorten(where)
-                .thenShorten(notes);
+                .thenShorten(where).thenShorten(notes).thenShorten(reference).thenShorten(where).thenShorten(rows)
+                .thenShorten(reference).thenShorten(where).thenShorten(notes);
         return line.fit(width, ascii);
     }
 
     /** The model line: what is fitted, k and the band first, then where it is held and the other settings. */
     static String second(ViewState s, FrameInput in, int width, boolean ascii) {
         HeaderLine line = new HeaderLine();
-        String f = s.response() + " ~ " + String.join(" + ", s.inputs());
+        String f = nearfit.table.VisibleText.of(s.response() + " ~ " + String.join(" + ", s.inputs()));
         int formula = line.part(f, Figures.fit(f, 32, ascii), Figures.fit(f, 24, ascii), Figures.fit(f, 16, ascii));
         if (!in.classLabels().isEmpty()) {
             line.part("  share of " + ScreenPainter.label(in.classLabels(), s.responseClass()));
         }
         line.part("  k=" + s.k());
-        int held = line.part(held(s, in, true), held(s, in, false));
+        int held = line.part(held(s, in, true), held(s, in, false), "");
         int near = line.part(s.nearHeldOnly() ? new String[] {"  near held only", "  near held"} : new String[] {""});
         int group = line.part(group(s, in, "  group "), group(s, in, "  "));
-        if (s.mode() != PlotMode.RESPONSE) {
-            line.part(s.mode() == PlotMode.RESIDUALS ? "  residuals" : "  residuals over time");
-        }
-        String band = "band " + ChoiceNames.of(s.band());
+        int mode = line.part(s.mode() == PlotMode.RESPONSE ? new String[] {""} : s.mode() == PlotMode.RESIDUALS
+                ? new String[] {"  residuals", "  resid"} : new String[] {"  residuals over time", "  resid/time"});
+        // The estimator's settings are never left out, since m, w, s and b change them and the results with
+        // them; they use the batch commands' option names and values.
         String metric = ChoiceNames.of(s.metric());
-        int settings = line.part("  " + metric + ", weights " + ChoiceNames.of(s.weighting()) + ", scaling "
-                + ChoiceNames.of(s.scaling()) + ", " + band,
-                "  " + metric + ", " + ChoiceNames.of(s.weighting()) + ", " + ChoiceNames.of(s.scaling()) + ", " + band,
-                "  " + band);
-        line.thenShorten(settings).thenShorten(held).thenShorten(near).thenShorten(group).thenShorten(settings)
-                .thenShorten(formula).thenShorten(formula).thenShorten(formula);
+        String weights = ChoiceNames.of(s.weighting());
+        String scale = ChoiceNames.of(s.scaling());
+        String band = ChoiceNames.of(s.band());
+        int settings = line.part("  metric " + metric + ", weights " + weights + ", scale " + scale + ", band " + band,
+                "  " + metric + ", " + weights + ", scale " + scale + ", band " + band,
+                "  " + metric + " " + weights + " " + scale + ", band " + band);
+        line.thenShorten(settings).thenShorten(held).thenShorten(near).thenShorten(group).thenShorten(formula)
+                .thenShorten(settings).thenShorten(formula).thenShorten(mode).thenShorten(formula).thenShorten(held);
         return line.fit(width, ascii);
     }
 
@@ -74,7 +84,7 @@ final class Header {
         for (Map.Entry<String, Double> e : new TreeMap<>(in.heldValues()).entrySet()) {
             boolean moving = e.getKey().equals(s.heldInput());
             boolean time = ScreenPainter.kindOf(in, e.getKey()) == ColumnKind.TIME;
-            sb.append(moving ? "  [" : "  ").append(e.getKey()).append('=')
+            sb.append(moving ? "  [" : "  ").append(nearfit.table.VisibleText.of(e.getKey())).append('=')
                     .append(time ? Figures.time(e.getValue()) : Figures.value(e.getValue()));
             if (quantiles) {
                 sb.append(" q").append(Math.round(100 * s.heldQuantile().getOrDefault(e.getKey(), 0.5)));
@@ -88,7 +98,8 @@ final class Header {
         if (s.groupColumn() == null) {
             return "";
         }
-        return lead + s.groupColumn() + ' ' + (s.group() < 0 ? "all" : ScreenPainter.label(in.groupLabels(), s.group()))
+        return lead + nearfit.table.VisibleText.of(s.groupColumn()) + ' '
+                + (s.group() < 0 ? "all" : nearfit.table.VisibleText.of(ScreenPainter.label(in.groupLabels(), s.group())))
                 + (s.compare() ? " vs others" : "");
     }
 }
