@@ -73,9 +73,9 @@ final class Header {
         String band = ChoiceNames.of(s.band());
         int settings = line.part("  metric " + metric + ", weights " + weights + ", scale " + scale + ", band " + band,
                 "  " + metric + ", " + weights + ", scale " + scale + ", band " + band,
-                "  " + metric + " " + weights + " " + scale + ", band " + band);
+                "  " + metric + " " + weights + " scale " + scale + " band " + band);
         line.thenShorten(settings).thenShorten(held).thenShorten(near).thenShorten(group).thenShorten(formula)
-                .thenShorten(settings).thenShorten(formula).thenShorten(mode).thenShorten(formula).thenShorten(held);
+                .thenShorten(formula).thenShorten(held).thenShorten(formula).thenShorten(mode).thenShorten(settings);
         return line.fit(width, ascii);
     }
 
