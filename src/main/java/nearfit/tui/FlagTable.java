@@ -15,15 +15,8 @@ import nearfit.table.VisibleText;
  * made visible ({@link VisibleText}).
  */
 final class FlagTable {
-    /** One column: its heading and its cell for a row, both right-aligned to the widest. */
-    private record Column(String heading, List<String> cells, boolean left) {
-        int width() {
-            int w = heading.length();
-            for (String c : cells) {
-                w = Math.max(w, c.length());
-            }
-            return w;
-        }
+    /** One column: its heading and its cell for each row, aligned to the widest of them ({@code width}). */
+    private record Column(String heading, List<String> cells, boolean left, int width) {
     }
 
     private FlagTable() {
@@ -75,10 +68,13 @@ final class FlagTable {
     private static Column column(String heading, List<FlaggedRow> rows, java.util.function.Function<FlaggedRow, String> cell,
             boolean left) {
         List<String> cells = new ArrayList<>(rows.size());
+        int width = heading.length();
         for (FlaggedRow f : rows) {
-            cells.add(cell.apply(f));
+            String c = cell.apply(f);
+            cells.add(c);
+            width = Math.max(width, c.length());
         }
-        return new Column(heading, cells, left);
+        return new Column(heading, cells, left, width);
     }
 
     private static String line(List<Column> columns, int kept, int row) {

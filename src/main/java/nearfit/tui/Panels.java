@@ -59,8 +59,8 @@ final class Panels {
         }
         String updating = Double.isNaN(r.flagsProgress()) ? ""
                 : " (updating " + Math.round(100 * r.flagsProgress()) + " %)";
-        return "flagged rows" + updating + ": " + Figures.count(r.flags().result().flaggedCount()) + " with |z| > "
-                + Figures.value(r.flags().result().threshold()) + ", largest first (Enter jumps, Esc)";
+        return "flagged rows" + updating + ": " + Figures.count(r.flags().shownFlagged()) + " with |z| > "
+                + Figures.value(r.flags().result().threshold()) + ", largest first (Enter marks, Esc)";
     }
 
     /** A picker or menu: a boxed list only as tall as its lines (up to the plot's height). */

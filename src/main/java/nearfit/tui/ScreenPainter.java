@@ -49,8 +49,8 @@ final class ScreenPainter {
             return;
         }
         boolean time = kindOf(in, s.displayInput()) == ColumnKind.TIME;
-        String unit = time ? "a duration" : nearfit.table.VisibleText.of(s.displayInput()) + " units";
-        String caption = (pen.look().ascii() ? "v" : "▼") + " window width (distance to the k-th neighbour), in " + unit;
+        String unit = time ? "as a duration" : "in " + nearfit.table.VisibleText.of(s.displayInput()) + " units";
+        String caption = (pen.look().ascii() ? "v" : "▼") + " window width (distance to the k-th neighbour), " + unit;
         int row = layout.plotTop() + layout.plotHeight() - 1;
         // Only over blank cells: the axis name sits at the right end of this row.
         int free = 0;
@@ -59,7 +59,7 @@ final class ScreenPainter {
         while (free < plot.width() && plot.codePoint(free, last) == ' ') {
             free++;
         }
-        String[] tries = {caption, (pen.look().ascii() ? "v" : "▼") + " window width, in " + unit,
+        String[] tries = {caption, (pen.look().ascii() ? "v" : "▼") + " window width, " + unit,
             (pen.look().ascii() ? "v" : "▼") + " width, " + unit};
         for (String t : tries) {
             if (t.length() + 2 <= free) {
