@@ -37,6 +37,8 @@ final class HeaderLine {
             level[n] = Math.min(level[n] + 1, parts.get(n).length - 1);
             line = joined(level);
         }
+        // A part that led the line may have given way, leaving the next one's separator in front.
+        line = line.stripLeading();
         return Figures.fit(line, width, ascii);
     }
 
