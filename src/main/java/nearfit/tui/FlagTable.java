@@ -32,7 +32,11 @@ final class FlagTable {
         if (s.groupColumn() != null) {
             columns.add(column(VisibleText.of(s.groupColumn()), rows, f -> VisibleText.of(f.group()), true));
         }
-        if (rows.stream().anyMatch(f -> !f.time().isEmpty())) {
+        boolean anyTime = false;
+        for (FlaggedRow f : rows) {
+            anyTime |= !f.time().isEmpty();
+        }
+        if (anyTime) {
             columns.add(column("time", rows, f -> shortTime(f.time()), true));
         }
         columns.add(column("line", rows, f -> Long.toString(f.line()), false));

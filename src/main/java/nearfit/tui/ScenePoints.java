@@ -109,19 +109,20 @@ final class ScenePoints {
         return b.build();
     }
 
-    /** The marked row where its point is drawn: the same x and y as the points (or its flag) use. */
+    /** The marked row where its point is drawn: the same x and y as the points use. */
     private void mark(Scene.Builder b, PlotScene s, Points p) {
         int row = s.markedRow();
         if (row >= table.rowCount()) {
             return;
         }
-        Integer at = indexOf(p, row);
-        if (at != null) {
+        int at = indexOf(p, row);
+        if (at >= 0) {
             b.marked(p.x()[at], p.y()[at]);
         }
     }
 
-    private Integer indexOf(Points p, int row) {
+    /** The index of a row among the points, -1 when it is not drawn. */
+    private int indexOf(Points p, int row) {
         if (pointIndex == null) {
             pointIndex = new it.unimi.dsi.fastutil.ints.Int2IntOpenHashMap(p.rows().length);
             pointIndex.defaultReturnValue(-1);
@@ -129,8 +130,7 @@ final class ScenePoints {
                 pointIndex.put(p.rows()[i], i);
             }
         }
-        int i = pointIndex.get(row);
-        return i < 0 ? null : i;
+        return pointIndex.get(row);
     }
 
     private void marks(Scene.Builder b, PlotScene s, boolean residuals) {
@@ -147,8 +147,8 @@ final class ScenePoints {
             fy[i] = residuals ? r.residual() : r.response();
             if (compared) {
                 // A highlighted row's residual is drawn against the others' curve; its flag goes with it.
-                Integer at = indexOf(p, r.row());
-                fy[i] = at == null ? fy[i] : p.y()[at];
+                int at = indexOf(p, r.row());
+                fy[i] = at < 0 ? fy[i] : p.y()[at];
             }
         }
         b.flags(fx, fy);
