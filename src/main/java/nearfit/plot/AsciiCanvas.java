@@ -7,7 +7,7 @@ package nearfit.plot;
  * <p>Glyphs: points by density level 1..5 as {@code . : + o @}; the highlighted group
  * {@code #}; category codes as letters {@code a}..{@code h}; band edges {@code =} and band
  * shading {@code ~}; the curve {@code - / \ |} following its local slope; flags {@code x}; the
- * crosshair {@code !}. None is used by two layers, so the picture reads without colour.
+ * crosshair {@code !}; a marked row {@code *}. None is used by two layers, so the picture reads without colour.
  */
 public final class AsciiCanvas extends Canvas {
     private static final String DENSITY_RAMP = ".:+o@";
@@ -39,6 +39,7 @@ public final class AsciiCanvas extends Canvas {
             case CURVE -> curveGlyph(col, row);
             case FLAG -> 'x';
             case CROSSHAIR -> flagged(col, row) ? 'x' : '!';
+            case MARK -> '*';
         };
     }
 

@@ -10,13 +10,15 @@ package nearfit.plot;
  * <p>Shapes that stay distinct without colour: points are single dots; the band's edges are
  * dashed and its shading a sparse checker; the curve is a solid line that clears the points in
  * the cells it crosses; a flagged cell shows {@code ×} (U+00D7) instead of dots; the crosshair
- * is a full dot column merged with what is below.
+ * is a full dot column merged with what is below; a marked row's cell shows {@code ◆}.
  */
 public final class BrailleCanvas extends Canvas {
     /** The empty pattern, U+2800. */
     public static final int BLANK_PATTERN = 0x2800;
     /** The glyph of a flagged cell. */
     public static final int FLAG_GLYPH = 0x00D7;
+    /** The glyph of a marked row's cell, U+25C6 BLACK DIAMOND. */
+    public static final int MARK_GLYPH = 0x25C6;
 
     // BIT[sy][sx]: the Unicode dot number n gives bit n - 1 (dots 1-3 left, 4-6 right, 7-8 bottom).
     private static final int[][] BIT = {{0x01, 0x08}, {0x02, 0x10}, {0x04, 0x20}, {0x40, 0x80}};
@@ -60,6 +62,9 @@ public final class BrailleCanvas extends Canvas {
 
     @Override
     int glyph(int col, int row, Layer top, int dots, Role role) {
+        if (top == Layer.MARK) {
+            return MARK_GLYPH;
+        }
         if (top == Layer.FLAG || (top == Layer.CROSSHAIR && flagged(col, row))) {
             return FLAG_GLYPH;
         }

@@ -16,7 +16,11 @@ import java.util.Arrays;
  *   <li>band edges and the curve are opaque: a cell they cross shows only their own dots, so
  *       the lines stay legible through dense points;
  *   <li>a flag cell shows the subclass's flag glyph, hiding what is below;
- *   <li>crosshair dots merge with the glyph below when that glyph is made of dots.
+ *   <li>crosshair dots merge with the glyph below when that glyph is made of dots;
+ *   <li>a cell holding a point of the highlighted group shows its points above the band and the
+ *       curve (a group's flat run along the curve must not hide under it); flags, the crosshair
+ *       and a marked row stay above it;
+ *   <li>a marked row's cell shows the subclass's mark glyph, hiding everything below.
  * </ul>
  * Points are coloured by density: level 1 + floor((L − 1) · ln(count) / ln(max count)) with
  * L = {@link Role#DENSITY_LEVELS}, a log scale so that a single stray row and a cell holding
@@ -273,9 +277,13 @@ public abstract sealed class Canvas permits BrailleCanvas, AsciiCanvas {
         if (top == null) {
             return;
         }
+        if ((top == Layer.BAND || top == Layer.BAND_EDGE || top == Layer.CURVE) && highlightCounts != null
+                && highlightCounts[cell] > 0) {
+            top = Layer.POINTS;
+        }
         int dots = switch (top) {
             case POINTS, BAND -> (masks[0][cell] | masks[1][cell]) & 0xFF;
-            case BAND_EDGE, CURVE, FLAG -> masks[top.ordinal()][cell] & 0xFF;
+            case BAND_EDGE, CURVE, FLAG, MARK -> masks[top.ordinal()][cell] & 0xFF;
             case CROSSHAIR -> mergedUnderCrosshair(cell);
         };
         Role role = switch (top) {
@@ -284,6 +292,7 @@ public abstract sealed class Canvas permits BrailleCanvas, AsciiCanvas {
             case CURVE -> Role.CURVE;
             case FLAG -> Role.FLAG;
             case CROSSHAIR -> Role.CROSSHAIR;
+            case MARK -> Role.MARKER;
         };
         grid.set(col0 + c, row0 + r, glyph(c, r, top, dots, role), role);
     }

@@ -2,7 +2,8 @@ package nearfit.plot;
 
 /**
  * The layers of a {@link Canvas}, bottom to top. Where layers share a cell the top one's
- * role wins; how their dots merge is described on {@link Canvas}.
+ * role wins (except that the highlighted group's points rise above the band and the curve); how
+ * their dots merge is described on {@link Canvas}.
  */
 public enum Layer {
     /** Data points; counted per cell for density. */
@@ -16,5 +17,7 @@ public enum Layer {
     /** Flagged rows. */
     FLAG,
     /** The crosshair. */
-    CROSSHAIR
+    CROSSHAIR,
+    /** One marked row (chosen in a table), drawn over everything so it is found at once. */
+    MARK
 }

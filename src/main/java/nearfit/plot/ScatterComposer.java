@@ -75,7 +75,7 @@ public final class ScatterComposer {
         drawOverPoints(scene, f, canvas);
     }
 
-    /** Draws band, curve, flags and crosshair, the layers over the points. */
+    /** Draws band, curve, flags, crosshair and a marked row, the layers over the points. */
     private static void drawOverPoints(Scene scene, PlotFrame f, Canvas canvas) {
         if (scene.band() != null) {
             drawBand(scene.band(), f, canvas);
@@ -97,6 +97,15 @@ public final class ScatterComposer {
         int cx = f.dotColumn(scene.crosshairX());
         if (cx >= 0) {
             canvas.line(Layer.CROSSHAIR, cx, 0, cx, canvas.dotHeight() - 1, false);
+        }
+        if (scene.marked() != null) {
+            for (int i = 0; i < scene.marked().x().length; i++) {
+                int dx = f.dotColumn(scene.marked().x()[i]);
+                int dy = f.dotRow(scene.marked().y()[i]);
+                if (dx >= 0 && dy >= 0) {
+                    canvas.mark(Layer.MARK, dx, dy);
+                }
+            }
         }
     }
 

@@ -23,10 +23,11 @@ import java.util.Objects;
  * @param band       the band around the curve, or null
  * @param flags      flagged rows' positions, or null
  * @param crosshairX the crosshair's x, or NaN for none
+ * @param marked     one marked row's position (one x and one y), or null
  */
 public record Scene(String title, String xName, String yName, AxisKind xKind, double[] x, double[] y,
                     PointColouring colouring, Range xRange, Range yRange, Curve curve, Band band, Marks flags,
-                    double crosshairX) {
+                    double crosshairX, Marks marked) {
 
     /** Checks lengths and kinds. */
     public Scene {
@@ -182,6 +183,7 @@ public record Scene(String title, String xName, String yName, AxisKind xKind, do
         private Band band;
         private Marks flags;
         private double crosshairX = Double.NaN;
+        private Marks marked;
 
         private Builder(double[] x, double[] y) {
             this.x = Objects.requireNonNull(x, "x");
@@ -250,9 +252,15 @@ public record Scene(String title, String xName, String yName, AxisKind xKind, do
             return this;
         }
 
+        /** Marks one row's position, drawn over every other layer. */
+        public Builder marked(double mx, double my) {
+            this.marked = new Marks(new double[] {mx}, new double[] {my});
+            return this;
+        }
+
         /** @return the scene */
         public Scene build() {
-            return new Scene(title, xName, yName, xKind, x, y, colouring, xRange, yRange, curve, band, flags, crosshairX);
+            return new Scene(title, xName, yName, xKind, x, y, colouring, xRange, yRange, curve, band, flags, crosshairX, marked);
         }
     }
 }

@@ -35,9 +35,17 @@ public final class TuningChart {
         }
         CellGrid.Builder g = CellGrid.builder(width, height);
         canvas.writeTo(g, f.col0(), f.row0());
+        // The header gives way by whole words, never cutting a number: the axis name shortens, then goes.
         String legend = legend(s, kind);
         String title = s.title().isEmpty() ? legend : s.title() + "  " + legend;
-        AxesPainter.paint(g, f, kind, "leave-one-out RMSE", title, "k");
+        String yName = "leave-one-out RMSE";
+        for (String y : new String[] {"leave-one-out RMSE", "RMSE", ""}) {
+            yName = y;
+            if (y.length() + (y.isEmpty() ? 0 : 2) + title.length() <= width) {
+                break;
+            }
+        }
+        AxesPainter.paint(g, f, kind, yName, title, "k");
         mark(g, f, s.oneSeK(), s.rmseAt(s.oneSeK()), kind == CanvasKind.BRAILLE ? '○' : 'o');
         mark(g, f, s.bestK(), s.rmseAt(s.bestK()), kind == CanvasKind.BRAILLE ? '●' : '*');
         return g.build();

@@ -7,7 +7,8 @@ import nearfit.knn.Scaling;
 import nearfit.knn.Weighting;
 
 /**
- * The names the explorer shows for the knn package's choices. The switches have no default, so a new
+ * The names the explorer shows for the knn package's choices: the batch commands' option values
+ * ({@code --metric}, {@code --weights}, {@code --scale}, {@code --band}), so what the header says can be typed. The switches have no default, so a new
  * choice in knn fails to compile here until it has a name; the keys cycle through the knn enums themselves.
  */
 final class ChoiceNames {
@@ -16,26 +17,26 @@ final class ChoiceNames {
 
     static String of(Metric m) {
         return switch (m) {
-            case EUCLIDEAN -> "Euclidean";
-            case MANHATTAN -> "Manhattan";
-            case CHEBYSHEV -> "Chebyshev";
-            case MAHALANOBIS -> "Mahalanobis";
+            case EUCLIDEAN -> "euclidean";
+            case MANHATTAN -> "manhattan";
+            case CHEBYSHEV -> "chebyshev";
+            case MAHALANOBIS -> "mahalanobis";
         };
     }
 
     static String of(Weighting w) {
         return switch (w) {
-            case UNIFORM -> "equal";
-            case INVERSE -> "1/distance";
+            case UNIFORM -> "uniform";
+            case INVERSE -> "inverse";
             case TRICUBE -> "tricube";
         };
     }
 
     static String of(Scaling s) {
         return switch (s) {
-            case Z -> "z-score";
-            case ROBUST -> "median/MAD";
-            case RANGE -> "min-max";
+            case Z -> "z";
+            case ROBUST -> "robust";
+            case RANGE -> "range";
             case NONE -> "none";
         };
     }
@@ -52,8 +53,8 @@ final class ChoiceNames {
         return switch (b) {
             case Q10_Q90 -> "q10-q90";
             case Q05_Q95 -> "q05-q95";
-            case SD2 -> "±2 SD";
-            case NONE -> "off";
+            case SD2 -> "sd2";
+            case NONE -> "none";
         };
     }
 }

@@ -202,18 +202,23 @@ public final class CoreWorkbench implements Workbench {
     }
 
     @Override
-    public FlaggedRows flags(ModelSettings m, String groupColumn, JobControl control) {
+    public FlaggedRows flags(ModelSettings m, String groupColumn, String shownCondition, JobControl control) {
         KnnModel model = references.model(m, null, -1).withSettings(KnnChoices.longSettings(m));
         if (model.data().isCategory()) {
             return FlaggedRows.forCategory();
         }
-        try {
-            FlagResult f = Flags.leaveOneOut(model, KnnChoices.progress(control));
+        // The same settings give the same flags, so a new shown condition only filters the kept ones.
+        FlagResult f = references.flags(m);
+        if (f == null) {
+            try {
+                f = Flags.leaveOneOut(model, KnnChoices.progress(control));
+            } catch (CancelledException e) {
+                throw new CancellationException("flags superseded");
+            }
             references.keepFlags(m, f);
-            return FlaggedRows.of(table, model, f, timeColumn, groupColumn);
-        } catch (CancelledException e) {
-            throw new CancellationException("flags superseded");
         }
+        nearfit.table.RowSet shown = shownCondition.equals(m.condition()) ? null : references.rows(shownCondition);
+        return FlaggedRows.of(table, model, f, timeColumn, groupColumn, shown);
     }
 
     @Override

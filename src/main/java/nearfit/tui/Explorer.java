@@ -291,7 +291,7 @@ public final class Explorer implements AutoCloseable {
                 results = results.withRowsUsed(rows).withFailure("");
                 failedKind = null;
             } catch (NearfitException e) {
-                state = state.edit().message(e.getMessage()).build();
+                state = state.edit().warning(e.getMessage()).build();
             }
         } else if (effect instanceof Effect.Export x) {
             state = exporter.export(x, state, results, frameInput());
@@ -314,7 +314,9 @@ public final class Explorer implements AutoCloseable {
             forgetFailureOf(Jobs.Kind.CURVE);
             jobs.start(Jobs.Kind.CURVE, generation, c -> workbench.curve(model, request, c));
         }
-        List<Object> fk = java.util.Arrays.asList(model, state.groupColumn());
+        // The flagged rows listed are those the row condition shows, which may be fewer than the reference's.
+        String shown = state.condition();
+        List<Object> fk = java.util.Arrays.asList(model, state.groupColumn(), shown);
         if (request != null && !ck.equals(curveDoneKey)) {
             // Stale flags would only slow the curve down; they start again once it is in.
             if (!fk.equals(flagsKey)) {
@@ -331,7 +333,7 @@ public final class Explorer implements AutoCloseable {
             results = results.withFlags(results.flags(), 0);
             String group = state.groupColumn();
             forgetFailureOf(Jobs.Kind.FLAGS);
-            jobs.start(Jobs.Kind.FLAGS, generation, c -> workbench.flags(model, group, c));
+            jobs.start(Jobs.Kind.FLAGS, generation, c -> workbench.flags(model, group, shown, c));
         }
         ModelSettings anyK = model.withK(1);
         if (!anyK.equals(tuningKey)) {

@@ -53,9 +53,9 @@ final class Exporter {
             SafeOutput.write(target, x.force(), List.of(Path.of(workbench.source())), content(x.kind(), s, r, in, w, h));
             return s.edit().close().message("wrote " + file).build();
         } catch (NearfitException e) {
-            return s.edit().close().message(e.getMessage()).build();
+            return s.edit().close().warning(e.getMessage()).build();
         } catch (IllegalStateException e) {
-            return s.edit().close().message(e.getMessage()).build();
+            return s.edit().close().warning(e.getMessage()).build();
         }
     }
 

@@ -11,6 +11,7 @@ import nearfit.knn.KnnModel;
 import nearfit.knn.KnnSettings;
 import nearfit.knn.ReferenceData;
 import nearfit.table.CategoryColumn;
+import nearfit.table.RowSet;
 import nearfit.table.Table;
 import nearfit.table.TimeColumn;
 
@@ -19,12 +20,22 @@ import nearfit.table.TimeColumn;
  *
  * @param result  the core's flags over every reference row; no rows for a category response
  * @param looRmse {@code result.looRmse()}, kept since that is a pass over the rows
- * @param rows    the flagged rows with their lines, times and group labels, largest |z| first
+ * @param rows    the flagged rows that the row condition shows, with their lines, times and group labels,
+ *                largest |z| first
+ * @param shownExamined the reference rows that the row condition shows (all of them when it narrows the
+ *                reference itself)
+ * @param shownFlagged  the flagged rows among them: the length of {@code rows}
  */
-public record FlaggedRows(FlagResult result, double looRmse, List<FlaggedRow> rows) {
+public record FlaggedRows(FlagResult result, double looRmse, List<FlaggedRow> rows, int shownExamined,
+        int shownFlagged) {
     /** Copies the list so that the record stays immutable. */
     public FlaggedRows {
         rows = List.copyOf(rows);
+    }
+
+    /** Flags of which every reference row is shown. */
+    public FlaggedRows(FlagResult result, double looRmse, List<FlaggedRow> rows) {
+        this(result, looRmse, rows, result.rowIds().length, result.flaggedCount());
     }
 
     /** No flags: leave-one-out flags do not apply to a category response. */
@@ -40,16 +51,23 @@ public record FlaggedRows(FlagResult result, double looRmse, List<FlaggedRow> ro
         return result.rowIds().length;
     }
 
-    /** The flagged share of the examined rows, 0 when there are none. */
+    /** The flagged share of the shown rows, 0 when there are none. */
     public double share() {
-        return examined() == 0 ? 0 : (double) result.flaggedCount() / examined();
+        return shownExamined == 0 ? 0 : (double) shownFlagged / shownExamined;
     }
 
-    static FlaggedRows of(Table table, KnnModel model, FlagResult f, String timeColumn, String groupColumn) {
+    /**
+     * @param shown the rows the row condition shows, or {@code null} when every reference row is shown
+     */
+    static FlaggedRows of(Table table, KnnModel model, FlagResult f, String timeColumn, String groupColumn,
+            RowSet shown) {
         int[] order = new int[f.flaggedCount()];
         int n = 0;
+        int examined = 0;
         for (int i = 0; i < f.flagged().length; i++) {
-            if (f.flagged()[i]) {
+            boolean in = shown == null || shown.contains(f.rowIds()[i]);
+            examined += in ? 1 : 0;
+            if (in && f.flagged()[i]) {
                 order[n++] = i;
             }
         }
@@ -75,6 +93,6 @@ public record FlaggedRows(FlagResult result, double looRmse, List<FlaggedRow> ro
             rows.add(new FlaggedRow(row, table.lineOf(row), when, label, inputs, data.response()[i], f.looFit()[i],
                     f.residual()[i], z[i]));
         }
-        return new FlaggedRows(f, f.looRmse(), rows);
+        return new FlaggedRows(f, f.looRmse(), rows, examined, n);
     }
 }

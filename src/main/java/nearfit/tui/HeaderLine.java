@@ -24,7 +24,11 @@ final class HeaderLine {
         return this;
     }
 
-    /** The line at {@code width} columns: the fewest steps that make it fit, then cut if even that is too long. */
+    /**
+     * The line at {@code width} columns: the fewest steps that make it fit. Parts give way whole (a spelling
+     * never cuts a number); only a line still too long after every step is cut at the end, which the callers'
+     * spellings make rare: it takes a window narrower than the explorer's minimum or very long names.
+     */
     String fit(int width, boolean ascii) {
         int[] level = new int[parts.size()];
         String line = joined(level);
@@ -33,6 +37,8 @@ final class HeaderLine {
             level[n] = Math.min(level[n] + 1, parts.get(n).length - 1);
             line = joined(level);
         }
+        // A part that led the line may have given way, leaving the next one's separator in front.
+        line = line.stripLeading();
         return Figures.fit(line, width, ascii);
     }
 

@@ -91,12 +91,12 @@ public final class KeyPress {
         switch (c) {
             case '?': return Step.of(b.open(Overlay.HELP, Ask.NOTHING).build());
             case 'q': return Step.of(b.quit(true).build());
-            case 'x': return Step.of(b.open(Overlay.PICKER, Ask.DISPLAY_INPUT).build());
-            case 'y': return Step.of(b.open(Overlay.PICKER, Ask.RESPONSE).build());
-            case 'i': return Step.of(b.open(Overlay.PICKER, Ask.INPUTS).build());
-            case 'g': return Step.of(b.open(Overlay.PICKER, Ask.GROUP).build());
-            case 'v': return s.inputs().size() > 1 ? Step.of(b.open(Overlay.PICKER, Ask.HELD_INPUT).build())
-                    : Step.of(b.message("only one input: nothing is held").build());
+            case 'x': return Step.of(openPicker(s, Ask.DISPLAY_INPUT, cx));
+            case 'y': return Step.of(openPicker(s, Ask.RESPONSE, cx));
+            case 'i': return Step.of(openPicker(s, Ask.INPUTS, cx));
+            case 'g': return Step.of(openPicker(s, Ask.GROUP, cx));
+            case 'v': return s.inputs().size() > 1 ? Step.of(openPicker(s, Ask.HELD_INPUT, cx))
+                    : Step.of(b.warning("only one input: nothing is held").build());
             case '+': return Step.of(b.k(KLadder.up(s.k(), Math.max(1, cx.results().rowsUsed() - 1))).build());
             case '-': return Step.of(b.k(KLadder.down(s.k())).build());
             case 'k': return Step.of(b.open(Overlay.PROMPT, Ask.K).build());
@@ -105,31 +105,52 @@ public final class KeyPress {
             case 'F': return Step.of(b.open(Overlay.FLAGS, Ask.NOTHING).build());
             case 'L': return Step.of(b.open(Overlay.LOAD, Ask.NOTHING).build());
             case 'e': return Step.of(b.open(Overlay.EXPORT, Ask.NOTHING).build());
-            case 'm': return Step.of(b.metric(cycle(Metric.values(), s.metric())).build());
-            case 'w': return Step.of(b.weighting(cycle(Weighting.values(), s.weighting())).build());
-            case 's': return Step.of(b.scaling(cycle(Scaling.values(), s.scaling())).build());
-            case 'b': return Step.of(b.band(cycle(Band.values(), s.band())).build());
-            case 'c': return Step.of(b.estimate(cycle(EstimateKind.values(), s.estimate())).build());
+            case 'm': {
+                Metric m = cycle(Metric.values(), s.metric());
+                return Step.of(b.metric(m).message("metric " + ChoiceNames.of(m)).build());
+            }
+            case 'w': {
+                Weighting w = cycle(Weighting.values(), s.weighting());
+                return Step.of(b.weighting(w).message("weights " + ChoiceNames.of(w)).build());
+            }
+            case 's': {
+                Scaling sc = cycle(Scaling.values(), s.scaling());
+                return Step.of(b.scaling(sc).message("scale " + ChoiceNames.of(sc)).build());
+            }
+            case 'b': {
+                Band band = cycle(Band.values(), s.band());
+                return Step.of(b.band(band).message("band " + ChoiceNames.of(band)).build());
+            }
+            case 'R': {
+                boolean narrows = !s.conditionNarrowsReference();
+                return Step.of(b.conditionNarrowsReference(narrows).markedRow(-1).message(narrows
+                        ? "the row condition now narrows the reference too (R: all rows)"
+                        : "the reference is all rows; the row condition narrows what is shown (R: condition)").build());
+            }
+            case 'c': {
+                EstimateKind e = cycle(EstimateKind.values(), s.estimate());
+                return Step.of(b.estimate(e).message("estimate " + ChoiceNames.of(e)).build());
+            }
             case 'f': return Step.of(b.flagMarks(!s.flagMarks()).build());
             case 'r': return Step.of(b.mode(s.mode() == PlotMode.RESIDUALS ? PlotMode.RESPONSE : PlotMode.RESIDUALS)
                     .build());
             case 'T': return cx.hasTime() ? Step.of(b.mode(s.mode() == PlotMode.RESIDUALS_OVER_TIME
                     ? PlotMode.RESPONSE : PlotMode.RESIDUALS_OVER_TIME).build())
-                    : Step.of(b.message("no time column in this file").build());
+                    : Step.of(b.warning("no time column in this file").build());
             case 'n': return Step.of(stepGroup(s, cx, 1));
             case 'p': return Step.of(stepGroup(s, cx, -1));
             case 'a': return Step.of(b.group(-1).compare(false).build());
-            case 'o': return s.group() < 0 ? Step.of(b.message("highlight a group first: g, then n or p").build())
+            case 'o': return s.group() < 0 ? Step.of(b.warning("highlight a group first: g, then n or p").build())
                     : Step.of(b.compare(!s.compare()).build());
             case ']': return Step.of(zoom(s, cx, 0.5));
-            case '[': return Step.of(s.wholeRange() ? b.message("already showing the whole data").build()
+            case '[': return Step.of(s.wholeRange() ? b.warning("already showing the whole data").build()
                     : zoom(s, cx, 2.0));
-            case '0': return Step.of(s.wholeRange() ? b.message("already showing the whole data").build()
+            case '0': return Step.of(s.wholeRange() ? b.warning("already showing the whole data").build()
                     : b.zoom(Double.NaN, Double.NaN).build());
             case '<': return Step.of(moveHeld(s, -HELD_STEP));
             case '>': return Step.of(moveHeld(s, HELD_STEP));
             case 'h': return s.inputs().size() > 1 ? Step.of(b.nearHeldOnly(!s.nearHeldOnly()).build())
-                    : Step.of(b.message("only one input: nothing is held").build());
+                    : Step.of(b.warning("only one input: nothing is held").build());
             default: return Step.of(s);
         }
     }
@@ -144,7 +165,7 @@ public final class KeyPress {
 
     private static ViewState moveHeld(ViewState s, double by) {
         if (s.heldInput() == null) {
-            return s.edit().message("only one input: nothing is held").build();
+            return s.edit().warning("only one input: nothing is held").build();
         }
         Map<String, Double> held = new HashMap<>(s.heldQuantile());
         double q = held.getOrDefault(s.heldInput(), 0.5) + by;
@@ -162,7 +183,7 @@ public final class KeyPress {
         if (cx.classCount() > 0) {
             return s.edit().responseClass(Math.floorMod(s.responseClass() + by, cx.classCount())).build();
         }
-        return s.edit().message("no group column: choose one with g").build();
+        return s.edit().warning("no group column: choose one with g").build();
     }
 
     /** Halves or doubles the view's width keeping the crosshair's value at the same place on screen. */
@@ -187,19 +208,39 @@ public final class KeyPress {
         return t == null ? 0 : TuningCriterion.line(t, s.k());
     }
 
+    /** Opens a picker with its cursor on the current choice. */
+    private static ViewState openPicker(ViewState s, Ask ask, KeyContext cx) {
+        ViewState opened = s.edit().open(Overlay.PICKER, ask).build();
+        int at = Pickers.options(ask, opened, cx.columns()).indexOf(Pickers.current(opened));
+        return at > 0 ? opened.edit().cursor(at).build() : opened;
+    }
+
+    /**
+     * Keys in a picker: Enter (and Space) choose, arrows and page keys move, a letter or digit jumps to the
+     * next choice that starts with it, Esc closes. Nothing typed here reaches the plot.
+     */
     private static Step picker(ViewState s, KeyStroke key, KeyContext cx) {
         List<String> options = Pickers.options(s.ask(), s, cx.columns());
         boolean enter = key.getKeyType() == KeyType.Enter;
+        if (key.getKeyType() == KeyType.Character && key.getCharacter() != ' ') {
+            int to = Pickers.nextStartingWith(options, s.cursor(), key.getCharacter());
+            return Step.of(to < 0 ? s : s.edit().cursor(to).build());
+        }
         if (enter && s.ask() == Ask.INPUTS) {
             // Space toggles inputs one by one; Enter only closes, keeping what was chosen.
             return Step.of(s.edit().close().build());
         }
         boolean choose = enter || (key.getKeyType() == KeyType.Character && key.getCharacter() == ' ');
         if (!choose) {
-            return panel(s, key, cx, options.size());
+            return switch (key.getKeyType()) {
+                case Escape, ArrowUp, ArrowDown, PageUp, PageDown -> panel(s, key, cx, options.size());
+                case Home -> Step.of(s.edit().cursor(0).build());
+                case End -> Step.of(s.edit().cursor(Math.max(0, options.size() - 1)).build());
+                default -> Step.of(s);
+            };
         }
         if (options.isEmpty()) {
-            return Step.of(s.edit().close().message("nothing to choose").build());
+            return Step.of(s.edit().close().warning("nothing to choose").build());
         }
         String chosen = options.get(Math.min(s.cursor(), options.size() - 1));
         return Step.of(ColumnChoice.apply(s, s.ask(), chosen, cx));
@@ -228,16 +269,32 @@ public final class KeyPress {
         int lines = f == null ? 0 : f.rows().size();
         if (f != null && lines > 0 && key.getKeyType() == KeyType.Enter) {
             FlaggedRow row = f.rows().get(Math.min(s.cursor(), lines - 1));
-            double x = row.inputs().get(s.inputs().indexOf(s.displayInput()));
-            double whole = cx.dataTo() - cx.dataFrom();
-            double at = whole > 0 ? (x - cx.dataFrom()) / whole : 0.5;
-            return Step.of(s.edit().close().zoom(Double.NaN, Double.NaN).crosshair(Math.max(0, Math.min(1, at)))
-                    .markedRow(row.row()).message("line " + row.line() + " marked").build());
+            return Step.of(markRow(s, cx, row));
         }
         if (key.getKeyType() == KeyType.Character && key.getCharacter() == 'F') {
             return Step.of(s.edit().close().build());
         }
         return panel(s, key, cx, lines);
+    }
+
+    /**
+     * Marks a flagged row on the plot and puts the crosshair on it, keeping the zoom: a zoomed view that does
+     * not hold the row moves over to it with the same width.
+     */
+    private static ViewState markRow(ViewState s, KeyContext cx, FlaggedRow row) {
+        ViewState.Builder b = s.edit().close().markedRow(row.row());
+        double x = row.inputs().get(s.inputs().indexOf(s.displayInput()));
+        double from = s.wholeRange() ? cx.dataFrom() : s.zoomFrom();
+        double to = s.wholeRange() ? cx.dataTo() : s.zoomTo();
+        if (!s.wholeRange() && !(x >= from && x <= to)) {
+            double span = to - from;
+            from = x - span / 2;
+            to = x + span / 2;
+            b.zoom(from, to);
+        }
+        double at = to > from ? (x - from) / (to - from) : 0.5;
+        String mark = "line " + row.line() + " marked on the plot";
+        return b.crosshair(Math.max(0, Math.min(1, at))).message(mark).build();
     }
 
     private static Step exportMenu(ViewState s, KeyStroke key, KeyContext cx) {
@@ -260,7 +317,7 @@ public final class KeyPress {
         if (key.getKeyType() == KeyType.Character && key.getCharacter() == 'y' && s.export() != null) {
             return new Step(s.edit().close().build(), new Effect.Export(s.export(), s.typed(), true));
         }
-        return Step.of(s.edit().close().message("not written").build());
+        return Step.of(s.edit().close().warning("not written").build());
     }
 
     /** The inputs with one added or removed; never empty. */

@@ -8,10 +8,12 @@ import nearfit.table.BadCell;
 import nearfit.table.ColumnGaps;
 import nearfit.table.LoadNotes;
 import nearfit.table.LoadReport;
+import nearfit.table.VisibleText;
 
 /**
  * The load-report panel as text lines: what the loader read, its warnings about the file as a whole (say, it
- * grew while it was read), its ragged lines and each column's missing cells.
+ * grew while it was read), its ragged lines and each column's missing cells. Everything the file supplies
+ * (its name, column names, cell texts) is made visible ({@link VisibleText}) before it reaches the screen.
  */
 final class LoadPanel {
     private LoadPanel() {
@@ -26,16 +28,16 @@ final class LoadPanel {
         LoadReport r = notes.report();
         List<String> out = new ArrayList<>();
         out.add(String.format(Locale.ROOT, "%s: %s data rows read, %s kept, %s dropped; delimiter %s, %s%s",
-                r.source(), Figures.count(r.rowsRead()), Figures.count(r.rows()), Figures.count(r.droppedRows()),
-                r.delimiterName(),
+                VisibleText.of(r.source()), Figures.count(r.rowsRead()), Figures.count(r.rows()),
+                Figures.count(r.droppedRows()), r.delimiterName(),
                 r.headerPresent() ? "header row" : "no header row", r.decimalComma() ? ", decimal comma" : ""));
         for (String w : r.warnings()) {
-            out.add("warning: " + w);
+            out.add("warning: " + VisibleText.of(w));
         }
         out.add(String.format(Locale.ROOT, "ragged lines: %s dropped (%s short, %s long; none of their cells is used)",
                 Figures.count(r.raggedRows()), Figures.count(r.shortRows()), Figures.count(r.longRows())));
         for (BadCell c : r.raggedExamples()) {
-            out.add("  line " + c.line() + ": " + c.text());
+            out.add("  line " + c.line() + ": " + VisibleText.of(c.text()));
         }
         if (r.raggedRows() > r.raggedExamples().size()) {
             out.add("  (the first " + r.raggedExamples().size() + " are listed)");
@@ -47,7 +49,7 @@ final class LoadPanel {
         }
         out.add(String.format(Locale.ROOT, "%-16s %9s %9s  %s", "column", "blank", "bad", "first lines"));
         for (ColumnGaps g : notes.columns()) {
-            out.add(String.format(Locale.ROOT, "%-16s %9s %9s  %s", g.column(), Figures.count(g.blank()),
+            out.add(String.format(Locale.ROOT, "%-16s %9s %9s  %s", VisibleText.of(g.column()), Figures.count(g.blank()),
                     Figures.count(g.bad()), where(g)));
         }
         return out;
@@ -63,7 +65,7 @@ final class LoadPanel {
             sb.append(sb.length() == 0 ? "" : "; ").append("bad at");
             for (int i = 0; i < g.badExamples().size(); i++) {
                 BadCell b = g.badExamples().get(i);
-                sb.append(i == 0 ? " " : ", ").append(b.line()).append(" \"").append(b.text()).append('"');
+                sb.append(i == 0 ? " " : ", ").append(b.line()).append(" \"").append(VisibleText.of(b.text())).append('"');
             }
         }
         return sb.toString();

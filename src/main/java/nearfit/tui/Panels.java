@@ -10,13 +10,14 @@ final class Panels {
 
     static void paint(Pen pen, Layout layout, ViewState s, Results r, FrameInput in, Sketches sketches) {
         switch (s.overlay()) {
-            case HELP -> list(pen, layout, "keys (Esc closes)", helpLines(), s.cursor(), false);
-            case PICKER -> list(pen, layout, "choose the " + s.ask().title() + " (Enter, Esc)",
-                    pickerLines(s, in), s.cursor(), true);
+            case HELP -> list(pen, layout, "keys (Esc closes)", helpLines(), s.cursor(), false, 7);
+            case PICKER -> fitted(pen, layout, "choose the " + s.ask().title() + " (Enter, Esc)", pickerLines(s, in),
+                    s.cursor());
             case TUNING -> tuning(pen, layout, s, r, sketches);
-            case FLAGS -> list(pen, layout, flagTitle(r), FlagTable.lines(s, r, in), s.cursor() + 1, true);
-            case LOAD -> list(pen, layout, LoadPanel.title(in.notes()), LoadPanel.lines(in.notes()), s.cursor(), false);
-            case EXPORT -> list(pen, layout, "export (1-4 or Enter, Esc)", exportLines(), s.cursor(), true);
+            case FLAGS -> list(pen, layout, flagTitle(r), FlagTable.lines(s, r, in, layout.width() - 7), s.cursor() + 1,
+                    true, 0);
+            case LOAD -> list(pen, layout, LoadPanel.title(in.notes()), LoadPanel.lines(in.notes()), s.cursor(), false, 2);
+            case EXPORT -> fitted(pen, layout, "export (1-4 or Enter, Esc)", exportLines(), s.cursor());
             case PROMPT -> prompt(pen, layout, s);
             case CONFIRM -> prompt(pen, layout, s.typed() + " exists. Replace it? y replaces, any other key keeps it");
             case NONE -> {
@@ -36,20 +37,10 @@ final class Panels {
         List<String> out = new ArrayList<>();
         for (String name : Pickers.options(s.ask(), s, in.columns())) {
             String mark = s.ask() == Ask.INPUTS ? (s.inputs().contains(name) ? "[x] " : "[ ] ") : "";
-            out.add(mark + name + (name.equals(current(s)) ? "  (now)" : ""));
+            // Only the current choice is marked "(now)"; names come from the file, made visible.
+            out.add(mark + nearfit.table.VisibleText.of(name) + (name.equals(Pickers.current(s)) ? "  (now)" : ""));
         }
         return out;
-    }
-
-    /** The current choice of what the open picker asks for: only that line is marked "(now)". */
-    private static String current(ViewState s) {
-        return switch (s.ask()) {
-            case DISPLAY_INPUT -> s.displayInput();
-            case RESPONSE -> s.response();
-            case GROUP -> s.groupColumn() == null ? Pickers.NO_GROUP : s.groupColumn();
-            case HELD_INPUT -> s.heldInput();
-            default -> null;
-        };
     }
 
     private static List<String> exportLines() {
@@ -68,22 +59,37 @@ final class Panels {
         }
         String updating = Double.isNaN(r.flagsProgress()) ? ""
                 : " (updating " + Math.round(100 * r.flagsProgress()) + " %)";
-        return "flagged rows" + updating + ": " + Figures.count(r.flags().result().flaggedCount()) + " with |z| > "
-                + Figures.value(r.flags().result().threshold()) + ", largest first (Enter jumps, Esc)";
+        return "flagged rows" + updating + ": " + Figures.count(r.flags().shownFlagged()) + " with |z| > "
+                + Figures.value(r.flags().result().threshold()) + ", largest first (Enter marks, Esc)";
+    }
+
+    /** A picker or menu: a boxed list only as tall as its lines (up to the plot's height). */
+    private static void fitted(Pen pen, Layout layout, String title, List<String> lines, int cursor) {
+        int h = Math.min(layout.plotHeight(), Math.max(3, lines.size() + 2));
+        box(pen, layout, layout.plotTop(), h, title, lines, cursor, true, 0);
     }
 
     /**
-     * A boxed list over the plot, scrolled so the cursor line is visible. When {@code selectable} the cursor
-     * line is drawn reversed. Line 0 of a table may be its heading, in which case the cursor starts at 1.
+     * A boxed list over the plot. A selectable list scrolls so the cursor line is visible and draws it reversed
+     * (line 0 of a table may be its heading, in which case the cursor starts at 1); any other list scrolls
+     * with the cursor as its first line, and its lines too long for the box wrap, continued {@code indent}
+     * columns in. When the lines do not all fit, the bottom edge says which are shown and which way more lie.
      */
-    static void list(Pen pen, Layout layout, String title, List<String> lines, int cursor, boolean selectable) {
+    static void list(Pen pen, Layout layout, String title, List<String> lines, int cursor, boolean selectable,
+            int indent) {
+        int inner = layout.width() - 4 - 3;
+        box(pen, layout, layout.plotTop(), layout.plotHeight(), title, selectable ? lines : wrapped(lines, inner, indent),
+                cursor, selectable, indent);
+    }
+
+    private static void box(Pen pen, Layout layout, int row, int h, String title, List<String> lines, int cursor,
+            boolean selectable, int indent) {
         int col = 2;
         int w = layout.width() - 4;
-        int row = layout.plotTop();
-        int h = layout.plotHeight();
         pen.box(col, row, w, h, title);
         int visible = h - 2;
-        int first = Math.max(0, Math.min(cursor - visible / 2, lines.size() - visible));
+        int last = Math.max(0, lines.size() - visible);
+        int first = selectable ? Math.max(0, Math.min(cursor - visible / 2, last)) : Math.max(0, Math.min(cursor, last));
         for (int i = 0; i < visible && first + i < lines.size(); i++) {
             int line = first + i;
             String text = Figures.pad(" " + lines.get(line), w - 2);
@@ -92,6 +98,35 @@ final class Panels {
         if (lines.isEmpty()) {
             pen.text(col + 2, row + 1, "(nothing to show yet)", Ink.LABEL);
         }
+        if (lines.size() > visible) {
+            boolean ascii = pen.look().ascii();
+            int shownTo = Math.min(lines.size(), first + visible);
+            String more = (first > 0 ? (ascii ? "^" : "↑") : "") + (shownTo < lines.size() ? (ascii ? "v" : "↓") : "");
+            String where = " lines " + (first + 1) + "-" + shownTo + " of " + lines.size() + " " + more
+                    + (selectable ? "" : ", arrows or PgUp/PgDn") + " ";
+            if (where.length() <= w - 4) {
+                pen.text(col + w - 2 - where.length(), row + h - 1, where, Ink.TITLE);
+            }
+        }
+    }
+
+    /** Lines cut at word boundaries to {@code width}; a continuation starts {@code indent} columns in. */
+    static List<String> wrapped(List<String> lines, int width, int indent) {
+        List<String> out = new ArrayList<>();
+        for (String line : lines) {
+            if (line.length() <= width) {
+                out.add(line);
+                continue;
+            }
+            List<String> parts = ScreenPainter.wrap(line, width);
+            out.add(parts.get(0));
+            // The rest is rewrapped at the narrower width left after the indent.
+            String rest = String.join(" ", parts.subList(1, parts.size()));
+            for (String p : ScreenPainter.wrap(rest, Math.max(10, width - indent))) {
+                out.add(" ".repeat(indent) + p);
+            }
+        }
+        return out;
     }
 
     private static void tuning(Pen pen, Layout layout, ViewState s, Results r, Sketches sketches) {
@@ -100,7 +135,7 @@ final class Panels {
         int w = layout.width() - 4;
         nearfit.knn.TuningTable t = r.tuning();
         String title = t == null ? "tuning: " + ScreenPainter.tuningState(r)
-                : "tuning: RMSE against log k (Enter adopts, * lowest, 1 one-SE, Esc)";
+                : "tuning: " + rmseSource(t) + " RMSE against log k (Enter adopts, * lowest, 1 one-SE, Esc)";
         pen.box(2, row, w, h, title);
         if (t == null) {
             return;
@@ -109,6 +144,12 @@ final class Panels {
         int chartWidth = w - 2 - tableWidth - 1;
         pen.cells(sketches.chart(t, s.k(), chartWidth, h - 2, pen.look().ascii()), 3, row + 1);
         List<String> lines = new ArrayList<>();
+        // The lowest and the one-SE k stay in view above the scrolling table, whatever the window's height.
+        double[] v = TuningCriterion.values(t);
+        String[] fixed = {
+            String.format(java.util.Locale.ROOT, "* lowest %4d  %10s", t.bestK(), Figures.value(v[t.bestK() - 1])),
+            String.format(java.util.Locale.ROOT, "1 one-SE %4d  %10s", t.oneSeK(), Figures.value(v[t.oneSeK() - 1])),
+            sampled(t) ? "RMSE on " + Figures.count(t.evaluatedRows()) + " sampled rows" : "RMSE on every row"};
         lines.add("   k        RMSE        SE");
         double[] value = TuningCriterion.values(t);
         double[] se = TuningCriterion.se(t);
@@ -117,15 +158,29 @@ final class Panels {
             lines.add(String.format(java.util.Locale.ROOT, "%s%5d  %10s  %8s%s", mark, k,
                     Figures.value(value[k - 1]), Figures.value(se[k - 1]), k == s.k() ? " <" : ""));
         }
-        int visible = h - 2;
+        int col = 3 + chartWidth + 1;
+        for (int i = 0; i < fixed.length; i++) {
+            pen.text(col, row + 1 + i, Figures.pad(fixed[i], tableWidth), Ink.LABEL);
+        }
+        int top = row + 1 + fixed.length;
+        int visible = h - 2 - fixed.length;
         int cursorLine = s.cursor() + 1;
         int first = Math.max(0, Math.min(cursorLine - visible / 2, lines.size() - visible));
-        int col = 3 + chartWidth + 1;
         for (int i = 0; i < visible && first + i < lines.size(); i++) {
             int line = first + i;
-            pen.text(col, row + 1 + i, Figures.pad(lines.get(line), tableWidth),
+            pen.text(col, top + i, Figures.pad(lines.get(line), tableWidth),
                     line == cursorLine ? Ink.SELECTED : line == 0 ? Ink.LABEL : Ink.TEXT);
         }
+    }
+
+    private static boolean sampled(nearfit.knn.TuningTable t) {
+        return t.evaluatedRows() < t.referenceRows();
+    }
+
+    /** Where the panel's RMSE comes from, said beside it: a sample's differs from the status line's. */
+    private static String rmseSource(nearfit.knn.TuningTable t) {
+        return sampled(t) ? "sampled (" + Figures.count(t.evaluatedRows()) + " of " + Figures.count(t.referenceRows())
+                + " rows)" : "leave-one-out";
     }
 
     private static void prompt(Pen pen, Layout layout, ViewState s) {
@@ -134,7 +189,18 @@ final class Panels {
             case FILE -> "  (Enter writes, Esc cancels)";
             default -> "  (Enter, Esc)";
         };
-        prompt(pen, layout, s.ask().title() + ": " + s.typed() + "_" + hint);
+        String lead = s.ask().title() + ": ";
+        int caret = Prompts.caret(s);
+        int room = layout.width() - 8;
+        // Long text scrolls so the caret stays in view.
+        int shift = Math.max(0, lead.length() + caret + 1 - room);
+        String text = lead + s.typed() + " " + hint;
+        prompt(pen, layout, text.substring(Math.min(shift, text.length())));
+        int at = lead.length() + caret - shift;
+        if (at >= 0 && at < room) {
+            String under = caret < s.typed().length() ? String.valueOf(s.typed().charAt(caret)) : " ";
+            pen.text(4 + at, layout.plotTop() + layout.plotHeight() - 2, under, Ink.SELECTED);
+        }
     }
 
     private static void prompt(Pen pen, Layout layout, String text) {

@@ -12,6 +12,8 @@ final class Pen {
     private final int width;
     private final int height;
     private static final int INKS = Ink.values().length;
+    /** The highlighted group's cells when colour is off: U+2022 BULLET, a shape no other layer uses. */
+    static final char HIGHLIGHT_GLYPH = '\u2022';
     /** Characters made so far, by code point times {@link #INKS} plus ink; shared by the frames of one look. */
     private final it.unimi.dsi.fastutil.ints.Int2ObjectOpenHashMap<TextCharacter> made;
 
@@ -50,11 +52,15 @@ final class Pen {
         }
     }
 
-    /** Writes text from a cell rightwards in one ink, clipped at the right edge. */
+    /**
+     * Writes text from a cell rightwards in one ink, clipped at the right edge. Control characters are made
+     * visible here too, as a last guard: callers already do so for text that a file supplies.
+     */
     void text(int col, int row, String text, Ink ink) {
         if (row < 0 || row >= height || col >= width) {
             return;
         }
+        text = nearfit.table.VisibleText.of(text);
         String shown = text.length() > width - col ? text.substring(0, width - col) : text;
         g.setForegroundColor(Palette.foreground(ink, look));
         g.setBackgroundColor(TextColor.ANSI.DEFAULT);
@@ -91,6 +97,13 @@ final class Pen {
         TextCharacter t = made.get(key);
         if (t == null) {
             char ch = Character.isBmpCodePoint(cp) ? (char) cp : '?';
+            if (nearfit.table.VisibleText.needsEscape(String.valueOf(ch))) {
+                ch = '?';
+            }
+            if (ink == Ink.HIGHLIGHT && !look.colour() && !look.ascii()) {
+                // Without colour the highlighted group needs a shape of its own (ASCII already draws it as #).
+                ch = HIGHLIGHT_GLYPH;
+            }
             t = ink == Ink.CURVE ? new TextCharacter(ch, Palette.foreground(ink, look), bg, SGR.BOLD)
                     : new TextCharacter(ch, Palette.foreground(ink, look), bg);
             made.put(key, t);

@@ -14,7 +14,9 @@ package nearfit.tui;
  * @param nearHeldOnly whether only rows near the held values are drawn
  * @param markedRow    a row to mark (jumped to from the flagged table), -1 for none
  * @param ascii        whether to draw with plain ASCII instead of braille
+ * @param shownCondition the row condition of the rows drawn; the model's own condition may be wider (empty)
  */
 public record PlotScene(ModelSettings model, CurveRequest request, CurveResult curve, FlaggedRows flags,
-        PlotMode mode, boolean flagMarks, double crosshairX, java.util.Map<String, Double> heldQuantile, boolean nearHeldOnly, int markedRow, boolean ascii) {
+        PlotMode mode, boolean flagMarks, double crosshairX, java.util.Map<String, Double> heldQuantile, boolean nearHeldOnly, int markedRow, boolean ascii,
+        String shownCondition) {
 }

@@ -23,6 +23,8 @@ final class ScenePoints {
     private final References references;
     private Object pointsKey;
     private Points points;
+    /** Row id to its index in {@link #points}, made when first asked for; {@code null} until then. */
+    private it.unimi.dsi.fastutil.ints.Int2IntOpenHashMap pointIndex;
 
     /**
      * Row ids and their coordinates and codes on the plot, with the finite extent of y (NaN when none).
@@ -60,7 +62,12 @@ final class ScenePoints {
         boolean residuals = s.mode() != PlotMode.RESPONSE;
         String xName = s.mode() == PlotMode.RESIDUALS_OVER_TIME ? timeName() : s.request().displayInput();
         String yName = residuals ? "residual of " + s.model().response() : s.model().response();
-        Scene.Builder b = Scene.builder(p.x(), p.y()).labels("", xName, yName);
+        if (residuals && s.request().compare() && s.request().group() >= 0) {
+            yName += " (highlighted group: against the others' curve)";
+        }
+        // Column names come from the file: control characters are made visible before they reach the screen.
+        Scene.Builder b = Scene.builder(p.x(), p.y()).labels("", nearfit.table.VisibleText.of(xName),
+                nearfit.table.VisibleText.of(yName));
         if (s.mode() == PlotMode.RESIDUALS_OVER_TIME) {
             b.timeAxis();
         } else {
@@ -96,7 +103,34 @@ final class ScenePoints {
         if (s.mode() != PlotMode.RESIDUALS_OVER_TIME && !Double.isNaN(s.crosshairX())) {
             b.crosshair(s.crosshairX());
         }
+        if (s.markedRow() >= 0) {
+            mark(b, s, p);
+        }
         return b.build();
+    }
+
+    /** The marked row where its point is drawn: the same x and y as the points use. */
+    private void mark(Scene.Builder b, PlotScene s, Points p) {
+        int row = s.markedRow();
+        if (row >= table.rowCount()) {
+            return;
+        }
+        int at = indexOf(p, row);
+        if (at >= 0) {
+            b.marked(p.x()[at], p.y()[at]);
+        }
+    }
+
+    /** The index of a row among the points, -1 when it is not drawn. */
+    private int indexOf(Points p, int row) {
+        if (pointIndex == null) {
+            pointIndex = new it.unimi.dsi.fastutil.ints.Int2IntOpenHashMap(p.rows().length);
+            pointIndex.defaultReturnValue(-1);
+            for (int i = 0; i < p.rows().length; i++) {
+                pointIndex.put(p.rows()[i], i);
+            }
+        }
+        return pointIndex.get(row);
     }
 
     private void marks(Scene.Builder b, PlotScene s, boolean residuals) {
@@ -105,10 +139,17 @@ final class ScenePoints {
         double[] fx = new double[f.size()];
         double[] fy = new double[f.size()];
         Column time = s.mode() == PlotMode.RESIDUALS_OVER_TIME ? table.column(timeName()) : null;
+        boolean compared = residuals && s.request().compare() && s.request().group() >= 0;
+        Points p = points;
         for (int i = 0; i < fx.length; i++) {
             FlaggedRow r = f.get(i);
             fx[i] = time != null ? ((nearfit.table.TimeColumn) time).asDouble(r.row()) : r.inputs().get(display);
             fy[i] = residuals ? r.residual() : r.response();
+            if (compared) {
+                // A highlighted row's residual is drawn against the others' curve; its flag goes with it.
+                int at = indexOf(p, r.row());
+                fy[i] = at < 0 ? fy[i] : p.y()[at];
+            }
         }
         b.flags(fx, fy);
     }
@@ -124,18 +165,20 @@ final class ScenePoints {
 
     private Points points(PlotScene s) {
         nearfit.knn.FlagResult flags = s.mode() == PlotMode.RESPONSE ? null : references.flags(s.model());
-        Object key = Arrays.asList(s.model().condition(), s.model().response(), s.model().inputs(),
+        int compared = s.mode() != PlotMode.RESPONSE && s.request().compare() ? s.request().group() : -1;
+        Object key = Arrays.asList(s.model().condition(), s.shownCondition(), s.model().response(), s.model().inputs(),
                 s.request().displayInput(), s.mode(), s.request().groupColumn(), s.nearHeldOnly(),
-                s.nearHeldOnly() ? s.request().held() : null, flags);
+                s.nearHeldOnly() ? s.request().held() : null, flags, compared);
         if (!key.equals(pointsKey)) {
-            points = s.mode() == PlotMode.RESPONSE ? responsePoints(s) : residualPoints(s, flags);
+            points = s.mode() == PlotMode.RESPONSE ? responsePoints(s) : residualPoints(s, flags, compared);
             pointsKey = key;
+            pointIndex = null;
         }
         return points;
     }
 
     private Points responsePoints(PlotScene s) {
-        RowSet used = references.rows(s.model().condition());
+        RowSet used = references.rows(s.shownCondition());
         int[] rows = s.nearHeldOnly() ? nearHeld(s, used) : used.toArray();
         RowSet r = RowSet.of(rows);
         double[] x = table.numeric(s.request().displayInput()).copyValues(r);
@@ -157,24 +200,93 @@ final class ScenePoints {
         return new Points(rows, x, y, codes);
     }
 
-    private Points residualPoints(PlotScene s, nearfit.knn.FlagResult f) {
+    /**
+     * The leave-one-out residual of every shown reference row. With a group compared ({@code compared} its
+     * code, else -1), the highlighted group's rows get their residual against the curve fitted on the other
+     * groups instead, as the plot of the response shows it; the other rows keep theirs.
+     */
+    private Points residualPoints(PlotScene s, nearfit.knn.FlagResult f, int compared) {
         if (f == null) {
             return new Points(new int[0], new double[0], new double[0], new int[0]);
         }
-        int[] rows = f.rowIds();
-        double[] x;
-        if (s.mode() == PlotMode.RESIDUALS_OVER_TIME) {
-            // The flags' row ids are in the knn package's canonical order, not ascending, so no RowSet.
-            nearfit.table.NumericColumn time = table.numeric(timeName());
-            x = new double[rows.length];
-            for (int i = 0; i < rows.length; i++) {
-                x[i] = time.asDouble(rows[i]);
-            }
-        } else {
-            ReferenceData data = references.model(s.model(), null, -1).data();
-            x = data.input(s.model().inputs().indexOf(s.request().displayInput()));
+        int[] ids = f.rowIds();
+        ReferenceData data = references.model(s.model(), null, -1).data();
+        double[] y = f.residual();
+        if (compared >= 0 && s.request().groupColumn() != null) {
+            y = againstOthers(s, data, ids, y.clone(), compared);
         }
-        return new Points(rows, x, f.residual(), groupCodes(s, rows));
+        // The flags' row ids are in the knn package's canonical order, not ascending, so no RowSet.
+        RowSet shown = s.shownCondition().equals(s.model().condition()) ? null : references.rows(s.shownCondition());
+        int n = 0;
+        int[] keep = new int[ids.length];
+        for (int i = 0; i < ids.length; i++) {
+            if (shown == null || shown.contains(ids[i])) {
+                keep[n++] = i;
+            }
+        }
+        double[] xAll;
+        if (s.mode() == PlotMode.RESIDUALS_OVER_TIME) {
+            nearfit.table.NumericColumn time = table.numeric(timeName());
+            xAll = null;
+            double[] x = new double[n];
+            int[] rows = new int[n];
+            double[] ys = new double[n];
+            for (int i = 0; i < n; i++) {
+                rows[i] = ids[keep[i]];
+                x[i] = time.asDouble(rows[i]);
+                ys[i] = y[keep[i]];
+            }
+            return new Points(rows, x, ys, groupCodes(s, rows));
+        }
+        xAll = data.input(s.model().inputs().indexOf(s.request().displayInput()));
+        if (n == ids.length) {
+            return new Points(ids, xAll, y, groupCodes(s, ids));
+        }
+        double[] x = new double[n];
+        int[] rows = new int[n];
+        double[] ys = new double[n];
+        for (int i = 0; i < n; i++) {
+            rows[i] = ids[keep[i]];
+            x[i] = xAll[keep[i]];
+            ys[i] = y[keep[i]];
+        }
+        return new Points(rows, x, ys, groupCodes(s, rows));
+    }
+
+    /** The residuals with the group's rows replaced by their residual against the other groups' model. */
+    private double[] againstOthers(PlotScene s, ReferenceData data, int[] ids, double[] y, int group) {
+        CategoryColumn groups = (CategoryColumn) table.column(s.request().groupColumn());
+        int[] mine = new int[ids.length];
+        int n = 0;
+        for (int i = 0; i < ids.length; i++) {
+            if (groups.code(ids[i]) == group) {
+                mine[n++] = i;
+            }
+        }
+        if (n == 0) {
+            return y;
+        }
+        nearfit.knn.KnnModel others;
+        try {
+            others = references.model(s.model(), s.request().groupColumn(), group);
+        } catch (RuntimeException noOthers) {
+            // The curve job says why (no rows of the other groups); the leave-one-out residuals stay.
+            return y;
+        }
+        int d = data.dimensions();
+        double[][] query = new double[d][n];
+        for (int j = 0; j < d; j++) {
+            double[] in = data.input(j);
+            for (int i = 0; i < n; i++) {
+                query[j][i] = in[mine[i]];
+            }
+        }
+        double[] fit = others.estimateAll(query, nearfit.knn.Progress.NONE).fit();
+        double[] response = data.response();
+        for (int i = 0; i < n; i++) {
+            y[mine[i]] = response[mine[i]] - fit[i];
+        }
+        return y;
     }
 
     private int[] groupCodes(PlotScene s, int[] rows) {
@@ -201,8 +313,8 @@ final class ScenePoints {
         for (int j = 0; j < held.size(); j++) {
             String name = held.get(j);
             double q = s.heldQuantile().getOrDefault(name, 0.5);
-            lo[j] = references.quantile(name, s.model().condition(), Math.max(0, q - NEAR));
-            hi[j] = references.quantile(name, s.model().condition(), Math.min(1, q + NEAR));
+            lo[j] = references.quantile(name, s.shownCondition(), Math.max(0, q - NEAR));
+            hi[j] = references.quantile(name, s.shownCondition(), Math.min(1, q + NEAR));
             cols[j] = table.numeric(name);
         }
         for (int i = 0; i < used.size(); i++) {

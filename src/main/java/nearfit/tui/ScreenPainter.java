@@ -5,11 +5,6 @@ package nearfit.tui;
  * from the results; this class only lays text out.
  */
 final class ScreenPainter {
-    private static final String KEYS = "? help  q quit  +/- k  t tuning  F flagged  f marks  x/y/i columns  "
-            + "g group  / condition  e export  arrows crosshair";
-    /** The keys line with the load report, for windows wide enough to show it whole. */
-    private static final String KEYS_WIDE = KEYS.replace("e export", "e export  L load");
-
     private ScreenPainter() {
     }
 
@@ -33,15 +28,45 @@ final class ScreenPainter {
             PlotCells drawn = sketches.plot(scene, layout.width(), layout.plotHeight());
             pen.cells(drawn.plot(), 0, layout.plotTop());
             pen.cells(drawn.strip(), 0, layout.stripRow());
+            stripCaption(pen, layout, s, r, in, drawn);
         } else {
             pen.text(2, layout.plotTop() + layout.plotHeight() / 2, "no rows to plot: change the row condition (/)",
                     Ink.WARNING);
         }
-        pen.text(0, layout.statusRow(), Figures.fit(status(s, r, in), layout.width(), pen.look().ascii()),
-                s.message().isEmpty() && r.failure().isEmpty() ? Ink.TEXT : Ink.WARNING);
-        String keys = KEYS_WIDE.length() <= layout.width() ? KEYS_WIDE : KEYS;
-        pen.text(0, layout.keyRow(), Figures.fit(keys, layout.width(), pen.look().ascii()), Ink.LABEL);
+        boolean warn = s.message().isEmpty() ? !r.failure().isEmpty() : s.warning();
+        pen.text(0, layout.statusRow(), status(s, r, in, layout.width(), pen.look().ascii()),
+                warn ? Ink.WARNING : Ink.TEXT);
+        pen.text(0, layout.keyRow(), KeyBinding.keyBar(layout.width()), Ink.LABEL);
         Panels.paint(pen, layout, s, r, in, sketches);
+    }
+
+    /**
+     * Says what the strip under the plot shows and in which unit, on the left of the axis-name row above it
+     * (which holds only the axis name, on the right): the strip's own margin has room for the number alone.
+     */
+    private static void stripCaption(Pen pen, Layout layout, ViewState s, Results r, FrameInput in, PlotCells drawn) {
+        if (r.curve() == null || s.mode() == PlotMode.RESIDUALS_OVER_TIME || drawn.strip().width() == 0) {
+            return;
+        }
+        boolean time = kindOf(in, s.displayInput()) == ColumnKind.TIME;
+        String unit = time ? "as a duration" : "in " + nearfit.table.VisibleText.of(s.displayInput()) + " units";
+        String caption = (pen.look().ascii() ? "v" : "▼") + " window width (distance to the k-th neighbour), " + unit;
+        int row = layout.plotTop() + layout.plotHeight() - 1;
+        // Only over blank cells: the axis name sits at the right end of this row.
+        int free = 0;
+        Cells plot = drawn.plot();
+        int last = plot.height() - 1;
+        while (free < plot.width() && plot.codePoint(free, last) == ' ') {
+            free++;
+        }
+        String[] tries = {caption, (pen.look().ascii() ? "v" : "▼") + " window width, " + unit,
+            (pen.look().ascii() ? "v" : "▼") + " width, " + unit};
+        for (String t : tries) {
+            if (t.length() + 2 <= free) {
+                pen.text(0, row, t, Ink.LABEL);
+                return;
+            }
+        }
     }
 
     /** The scene handed to the plot package. */
@@ -50,7 +75,7 @@ final class ScreenPainter {
         double x = q.from() + s.crosshair() * (q.to() - q.from());
         CurveResult curve = r.curve() != null && r.curve().size() == q.steps() ? r.curve() : null;
         return new PlotScene(s.model(), q, curve, r.flags(), s.mode(), s.flagMarks(), x, s.heldQuantile(), s.nearHeldOnly(),
-                s.markedRow(), look.ascii());
+                s.markedRow(), look.ascii(), s.condition());
     }
 
     private static void tooSmall(Pen pen, Layout layout) {
@@ -129,46 +154,68 @@ final class ScreenPainter {
         return code >= 0 && code < labels.size() ? labels.get(code) : "#" + code;
     }
 
-    static String status(ViewState s, Results r, FrameInput in) {
+    /**
+     * The status line at {@code width} columns: a message or failure, or the figures at the crosshair. When the
+     * figures do not fit, whole fields give way by importance (neighbour count, window width, band, then the
+     * longer spellings), never digits.
+     */
+    static String status(ViewState s, Results r, FrameInput in, int width, boolean ascii) {
         if (!s.message().isEmpty()) {
-            return s.message();
+            return Figures.fit(nearfit.table.VisibleText.of(s.message()), width, ascii);
         }
         if (!r.failure().isEmpty()) {
-            return r.failure();
+            return Figures.fit(nearfit.table.VisibleText.of(r.failure()), width, ascii);
         }
-        StringBuilder sb = new StringBuilder();
+        HeaderLine line = new HeaderLine();
+        int n = -1;
+        int w = -1;
+        int band = -1;
+        int at = -1;
         CurveResult c = r.curve();
         CurveRequest q = in.request();
+        String name = nearfit.table.VisibleText.of(s.displayInput());
         if (c != null && q != null && c.size() > 0) {
             double x = q.from() + s.crosshair() * (q.to() - q.from());
             int i = c.nearest(x);
             boolean time = kindOf(in, s.displayInput()) == ColumnKind.TIME;
-            sb.append(s.displayInput()).append(' ').append(time ? Figures.time(c.x()[i]) : Figures.value(c.x()[i]))
-                    .append(": fit ").append(Figures.value(c.fit()[i]));
-            if (!Double.isNaN(c.bandLow()[i])) {
-                sb.append("  band ").append(Figures.value(c.bandLow()[i])).append(" to ")
-                        .append(Figures.value(c.bandHigh()[i]));
+            String xs = time ? Figures.time(c.x()[i]) : Figures.value(c.x()[i]);
+            at = line.part(name + " " + xs + ": fit " + Figures.value(c.fit()[i]), xs + ": fit " + Figures.value(c.fit()[i]));
+            double lo = c.bandLow()[i];
+            double hi = c.bandHigh()[i];
+            if (!Double.isNaN(lo)) {
+                band = line.part("  band " + Figures.value(lo) + " to " + Figures.value(hi), "");
+                // A mean can lie outside a quantile band where the neighbours' responses are skewed.
+                if (c.fit()[i] < lo || c.fit()[i] > hi) {
+                    line.part("  fit outside band");
+                }
             }
             // The window width is in display-input units: milliseconds for a time input.
-            sb.append("  width ").append(time ? Figures.duration(c.width()[i]) : Figures.value(c.width()[i]))
-                    .append("  n ").append(c.neighbours()[i]);
+            w = line.part("  width " + (time ? Figures.duration(c.width()[i]) : Figures.value(c.width()[i])), "");
+            n = line.part("  n " + c.neighbours()[i], "");
         } else {
-            sb.append("fitting ...");
+            line.part("fitting ...");
         }
-        sb.append("  |  LOO RMSE ").append(Figures.value(looRmse(s, r)));
+        String rmse = Figures.value(looRmse(s, r));
+        int loo = line.part("  |  LOO RMSE " + rmse, "  |  RMSE " + rmse);
         FlaggedRows f = r.flags();
+        int flagged = -1;
         if (f != null && f.examined() == 0) {
-            sb.append("  |  no flags for a category response");
+            flagged = line.part("  |  no flags for a category response", "  |  no flags");
         } else if (f != null) {
-            sb.append("  |  flagged ").append(Figures.count(f.result().flaggedCount())).append(" (")
-                    .append(Figures.percent(f.share())).append(')');
+            String count = "  |  flagged " + Figures.count(f.shownFlagged());
+            flagged = line.part(count + " (" + Figures.percent(f.share()) + ")", count);
             if (!Double.isNaN(r.flagsProgress())) {
-                sb.append(" updating ").append(Math.round(100 * r.flagsProgress())).append(" %");
+                line.part(" updating " + Math.round(100 * r.flagsProgress()) + " %", " upd " + Math.round(100 * r.flagsProgress()) + " %");
             }
         } else {
-            sb.append("  |  leave-one-out ").append(Double.isNaN(r.flagsProgress()) ? "waiting"
-                    : Math.round(100 * r.flagsProgress()) + " %");
+            line.part("  |  leave-one-out " + (Double.isNaN(r.flagsProgress()) ? "waiting"
+                    : Math.round(100 * r.flagsProgress()) + " %"));
         }
-        return sb.toString();
+        for (int part : new int[] {n, flagged, w, band, loo, at}) {
+            if (part >= 0) {
+                line.thenShorten(part);
+            }
+        }
+        return line.fit(width, ascii);
     }
 }

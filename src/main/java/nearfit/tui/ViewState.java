@@ -43,13 +43,18 @@ import nearfit.knn.Weighting;
  * @param export        the export chosen in the menu, or {@code null}
  * @param message       a one-line note for the status line, empty for none
  * @param quit          whether the explorer should end
+ * @param caretBack     characters of {@code typed} after the prompt's caret (0: the caret is at the end)
+ * @param warning       whether {@code message} is a warning (drawn in the warning ink) rather than a note
+ * @param conditionNarrowsReference whether the row condition also narrows the reference rows the model is
+ *                      fitted on; when false it narrows only what is shown (points, flagged rows)
  */
 public record ViewState(String condition, String response, List<String> inputs, String displayInput, int k,
         Metric metric, Weighting weighting, Scaling scaling, Band band, EstimateKind estimate, boolean flagMarks,
         PlotMode mode,
         String groupColumn, int group, boolean compare, int responseClass, double zoomFrom, double zoomTo,
         double crosshair, Map<String, Double> heldQuantile, String heldInput, boolean nearHeldOnly, int markedRow,
-        Overlay overlay, Ask ask, int cursor, String typed, ExportKind export, String message, boolean quit) {
+        Overlay overlay, Ask ask, int cursor, String typed, ExportKind export, String message, boolean quit,
+        int caretBack, boolean warning, boolean conditionNarrowsReference) {
 
     /** Copies the collections so that the record stays immutable. */
     public ViewState {
@@ -71,12 +76,20 @@ public record ViewState(String condition, String response, List<String> inputs, 
         return new ViewState("", response, inputs, inputs.get(0), k, Metric.EUCLIDEAN, Weighting.UNIFORM,
                 Scaling.Z, Band.Q10_Q90, estimate, true, PlotMode.RESPONSE, null, -1, false, 0,
                 Double.NaN, Double.NaN, 0.5, held, inputs.size() > 1 ? inputs.get(1) : null, false, -1,
-                Overlay.NONE, Ask.NOTHING, 0, "", null, "", false);
+                Overlay.NONE, Ask.NOTHING, 0, "", null, "", false, 0, false, false);
     }
 
-    /** The settings a fit depends on. */
+    /**
+     * The settings a fit depends on. Its condition is the reference's: the row condition when it narrows the
+     * reference, otherwise empty (all rows).
+     */
     public ModelSettings model() {
-        return new ModelSettings(condition, response, inputs, k, metric, weighting, scaling, band, estimate);
+        return new ModelSettings(referenceCondition(), response, inputs, k, metric, weighting, scaling, band, estimate);
+    }
+
+    /** The condition that chooses the reference rows: the row condition, or empty for all rows. */
+    public String referenceCondition() {
+        return conditionNarrowsReference ? condition : "";
     }
 
     /** Whether the view shows the whole range of the display input. */
@@ -121,6 +134,9 @@ public record ViewState(String condition, String response, List<String> inputs, 
         private ExportKind export;
         private String message;
         private boolean quit;
+        private int caretBack;
+        private boolean warning;
+        private boolean conditionNarrowsReference;
 
         private Builder(ViewState s) {
             condition = s.condition;
@@ -153,6 +169,9 @@ public record ViewState(String condition, String response, List<String> inputs, 
             export = s.export;
             message = s.message;
             quit = s.quit;
+            caretBack = s.caretBack;
+            warning = s.warning;
+            conditionNarrowsReference = s.conditionNarrowsReference;
         }
 
         public Builder condition(String v) { condition = v; return this; }
@@ -182,11 +201,23 @@ public record ViewState(String condition, String response, List<String> inputs, 
         public Builder cursor(int v) { cursor = v; return this; }
         public Builder typed(String v) { typed = v; return this; }
         public Builder export(ExportKind v) { export = v; return this; }
-        public Builder message(String v) { message = v; return this; }
+        /** A note for the status line, drawn as plain text. */
+        public Builder message(String v) { message = v; warning = false; return this; }
+        /** A warning for the status line: something the user asked for did not happen. */
+        public Builder warning(String v) { message = v; warning = true; return this; }
+        public Builder caretBack(int v) { caretBack = v; return this; }
+        public Builder conditionNarrowsReference(boolean v) { conditionNarrowsReference = v; return this; }
         public Builder quit(boolean v) { quit = v; return this; }
 
         /** Opens a panel with its cursor on the first line. */
-        public Builder open(Overlay o, Ask a) { overlay = o; ask = a; cursor = 0; typed = ""; return this; }
+        public Builder open(Overlay o, Ask a) {
+            overlay = o;
+            ask = a;
+            cursor = 0;
+            typed = "";
+            caretBack = 0;
+            return this;
+        }
 
         /** Closes any panel. */
         public Builder close() { return open(Overlay.NONE, Ask.NOTHING); }
@@ -196,7 +227,7 @@ public record ViewState(String condition, String response, List<String> inputs, 
             return new ViewState(condition, response, inputs, displayInput, k, metric, weighting, scaling, band,
                     estimate, flagMarks, mode, groupColumn, group, compare, responseClass, zoomFrom, zoomTo, crosshair,
                     heldQuantile, heldInput, nearHeldOnly, markedRow, overlay, ask, cursor, typed, export,
-                    message, quit);
+                    message, quit, caretBack, warning, conditionNarrowsReference);
         }
     }
 }

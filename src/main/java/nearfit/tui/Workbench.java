@@ -50,8 +50,11 @@ public interface Workbench {
     /** Leave-one-out tuning over the k ladder; does not depend on {@code model.k()}. */
     TuningTable tune(ModelSettings model, JobControl control);
 
-    /** Leave-one-out residuals at {@code model.k()} and the rows they flag, labelled by the group column. */
-    FlaggedRows flags(ModelSettings model, String groupColumn, JobControl control);
+    /**
+     * Leave-one-out residuals at {@code model.k()} over the model's reference rows, and the flagged ones among
+     * the rows of {@code shownCondition} (which may narrow them further), labelled by the group column.
+     */
+    FlaggedRows flags(ModelSettings model, String groupColumn, String shownCondition, JobControl control);
 
     /**
      * The plot (axes, points, curve, band, flags and crosshair) in {@code width} by {@code height} cells, and

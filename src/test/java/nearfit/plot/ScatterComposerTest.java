@@ -125,6 +125,37 @@ class ScatterComposerTest {
     }
 
     @Test
+    void highlightedPointsDrawAboveTheBandAndTheCurve() {
+        // A flat run of the highlighted group along the curve (a stuck sensor) must not hide under it; the
+        // other group's points under the curve stay under it.
+        double[] x = {0, 2, 4, 6, 8, 10, 3};
+        double[] y = {5, 5, 5, 5, 5, 5, 5};
+        Scene s = Scene.builder(x, y).highlight(new int[] {1, 1, 1, 1, 1, 1, 2}, 1).xRange(0, 10).yRange(0, 10)
+                .curve(new double[] {0, 10}, new double[] {5, 5})
+                .band(new double[] {0, 10}, new double[] {5, 5}, new double[] {5, 5}, Scene.BandStyle.LINES).build();
+        ComposedPlot p = braille(s);
+        PlotFrame f = p.frame();
+        for (double at : new double[] {0, 4, 8}) {
+            assertEquals(Role.HIGHLIGHT, p.grid().role(f.columnOf(at), f.rowOf(5)), "at " + at);
+        }
+        Scene other = Scene.builder(x, y).highlight(new int[] {2, 2, 2, 2, 2, 2, 2}, 1).xRange(0, 10).yRange(0, 10)
+                .curve(new double[] {0, 10}, new double[] {5, 5}).build();
+        ComposedPlot q = braille(other);
+        assertEquals(Role.CURVE, q.grid().role(q.frame().columnOf(4), q.frame().rowOf(5)));
+    }
+
+    @Test
+    void aMarkedRowHasItsOwnGlyphAboveEverything() {
+        Scene s = Scene.builder(new double[] {0, 10}, new double[] {0, 10}).flags(new double[] {10}, new double[] {10})
+                .marked(10, 10).build();
+        ComposedPlot b = braille(s);
+        assertEquals(BrailleCanvas.MARK_GLYPH, b.grid().codePoint(b.frame().columnOf(10), b.frame().rowOf(10)));
+        assertEquals(Role.MARKER, b.grid().role(b.frame().columnOf(10), b.frame().rowOf(10)));
+        ComposedPlot a = ScatterComposer.compose(s, 40, 12, CanvasKind.ASCII);
+        assertEquals('*', a.grid().codePoint(a.frame().columnOf(10), a.frame().rowOf(10)));
+    }
+
+    @Test
     void classesColourByTheMostFrequentCodeInTheCell() {
         Scene s = Scene.builder(new double[] {0, 0, 0, 10}, new double[] {0, 0, 0, 10}).classes(new int[] {3, 3, 1, 9}).build();
         ComposedPlot p = ScatterComposer.compose(s, 40, 12, CanvasKind.ASCII);

@@ -34,6 +34,16 @@ class TuningChartTest {
     }
 
     @Test
+    void aNarrowChartShortensItsAxisNameRatherThanCutTheOneSeK() {
+        // 43 cells: the chart's width in the tuning panel of an 80-column window (it showed "one-SE k" alone).
+        TuningScene s = new TuningScene(new double[] {1, 10, 36, 100, 200}, new double[] {90, 87, 86.4, 86.8, 87.1},
+                new double[] {1, 1, 1, 1, 1}, 36, 200, "");
+        String first = TextRenderer.plain(TuningChart.compose(s, 43, 18, CanvasKind.BRAILLE)).lines().findFirst()
+                .orElseThrow();
+        assertTrue(first.contains("best k 36") && first.contains("one-SE k 200"), first);
+    }
+
+    @Test
     void theKAxisIsLogarithmic() {
         CellGrid g = TuningChart.compose(SCENE, 70, 20, CanvasKind.ASCII);
         String axisLabels = g.rowText(g.height() - 2);

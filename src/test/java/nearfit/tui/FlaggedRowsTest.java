@@ -25,7 +25,7 @@ class FlaggedRowsTest {
         Workbench wb = CoreWorkbench.of(CsvLoader.load(csv, csv.toString(), LoadOptions.DEFAULT), "pump.csv");
         ModelSettings m = new ModelSettings("", "head_m", List.of("flow_m3h"), 1, Metric.EUCLIDEAN, Weighting.UNIFORM,
                 Scaling.Z, Band.NONE);
-        FlaggedRows f = wb.flags(m, null, JobControl.NONE);
+        FlaggedRows f = wb.flags(m, null, "", JobControl.NONE);
         // Worked by hand, k = 1 with no ties: each row's nearest other row gives fits 2, 1, 2, 5, so the
         // residuals are -1, 1, 3, 6 and the RMSE is sqrt((1 + 1 + 9 + 36) / 4).
         assertEquals(Math.sqrt(47.0 / 4), f.looRmse(), 1e-12);

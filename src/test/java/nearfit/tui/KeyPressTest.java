@@ -128,4 +128,49 @@ class KeyPressTest {
             }
         }
     }
+
+    @Test
+    void enterInTheFlaggedTableKeepsAZoomThatHoldsTheRowAndMovesOneThatDoesNot() {
+        ScriptedWorkbench wb = new ScriptedWorkbench();
+        FlaggedRows flags = wb.flags(null, null, "", JobControl.NONE);
+        KeyContext withFlags = new KeyContext(wb.columns(), Results.none(1000).withFlags(flags, Double.NaN), 0, 25, 3,
+                0, true, 5);
+        ViewState table = two.edit().zoom(10, 15).open(Overlay.FLAGS, Ask.NOTHING).build();
+        // Row 41 lies at wind 12.5, inside 10..15: the zoom stays and the crosshair goes to it.
+        ViewState in = KeyPress.next(table, new KeyStroke(KeyType.Enter), withFlags).state();
+        assertEquals(41, in.markedRow());
+        assertEquals(10, in.zoomFrom(), 1e-12);
+        assertEquals(15, in.zoomTo(), 1e-12);
+        assertEquals(0.5, in.crosshair(), 1e-12);
+        // Row 7 lies at wind 5, outside: the view keeps its width of 5 and centres on it.
+        ViewState down = KeyPress.next(table, new KeyStroke(KeyType.ArrowDown), withFlags).state();
+        ViewState out = KeyPress.next(down, new KeyStroke(KeyType.Enter), withFlags).state();
+        assertEquals(7, out.markedRow());
+        assertEquals(2.5, out.zoomFrom(), 1e-12);
+        assertEquals(7.5, out.zoomTo(), 1e-12);
+        assertEquals(0.5, out.crosshair(), 1e-12);
+    }
+
+    @Test
+    void aPickerTakesEveryLetterAndJumpsByIt() {
+        ViewState picker = press(two, 'g').state();
+        assertEquals(0, picker.cursor(), "no group column yet: the cursor is on (no group)");
+        ViewState t = press(picker, 't').state();
+        assertEquals(Overlay.PICKER, t.overlay());
+        assertEquals(1, t.cursor(), "t jumps to turbine");
+        for (char c : "qmwsbfT+-0]".toCharArray()) {
+            Step step = press(t, c);
+            assertEquals(Overlay.PICKER, step.state().overlay(), "key " + c);
+            assertEquals(t.edit().cursor(step.state().cursor()).build(), step.state(), "key " + c + " only moves");
+        }
+    }
+
+    @Test
+    void rSwitchesWhetherTheConditionNarrowsTheReference() {
+        ViewState s = two.edit().condition("wind_ms > 5").build();
+        assertEquals("", s.model().condition(), "by default the reference is every row");
+        ViewState r = press(s, 'R').state();
+        assertEquals("wind_ms > 5", r.model().condition());
+        assertEquals("", press(r, 'R').state().model().condition());
+    }
 }

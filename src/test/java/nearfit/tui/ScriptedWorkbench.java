@@ -123,7 +123,7 @@ class ScriptedWorkbench implements Workbench {
     }
 
     @Override
-    public FlaggedRows flags(ModelSettings model, String groupColumn, JobControl control) {
+    public FlaggedRows flags(ModelSettings model, String groupColumn, String shownCondition, JobControl control) {
         List<FlaggedRow> rows = new ArrayList<>();
         rows.add(new FlaggedRow(41, 43, "2026-03-02T10:10:00Z", "T02", List.of(12.5), 300, 1900, -1600, -7.5));
         rows.add(new FlaggedRow(7, 9, "2026-03-01T01:10:00Z", "T01", List.of(5.0), 900, 400, 500, 4.1));

@@ -121,7 +121,7 @@ public final class ViewBench {
         long t = System.nanoTime();
         CurveResult c = wb.curve(s.model(), q, JobControl.NONE);
         PlotScene scene = new PlotScene(s.model(), q, c, ex.results().flags(), s.mode(), s.flagMarks(),
-                q.from() + s.crosshair() * (q.to() - q.from()), s.heldQuantile(), s.nearHeldOnly(), -1, false);
+                q.from() + s.crosshair() * (q.to() - q.from()), s.heldQuantile(), s.nearHeldOnly(), -1, false, s.condition());
         wb.plot(scene, 120, 35);
         return (System.nanoTime() - t) / 1e6;
     }
