@@ -19,8 +19,11 @@ bench_pkgver() { dpkg-query -W -f='${Version}' "$1" 2>/dev/null || echo unknown;
 bench_wall() {
   local out=$1 t0 t1; shift
   t0=$(date +%s%N)
-  "$@" > "$out" 2>/dev/null
+  if ! "$@" > "$out" 2>/tmp/bench-wall.$$.err; then
+    echo "bench: failed ($*):" >&2; cat /tmp/bench-wall.$$.err >&2; rm -f /tmp/bench-wall.$$.err; return 1
+  fi
   t1=$(date +%s%N)
+  rm -f /tmp/bench-wall.$$.err
   awk -v a="$t0" -v b="$t1" 'BEGIN {printf "%.4f\n", (b - a) / 1e9}'
 }
 
