@@ -19,14 +19,14 @@ import nearfit.knn.Tuning;
 import nearfit.knn.TuningTable;
 
 /**
- * The nearfit side of scripts/bench-knn. {@code generate DIR} writes the seeded data as raw
- * little-endian doubles for both sides; {@code run DIR REPS} times each case (after warm-up) and
- * prints "case median_seconds" lines. Not a test: run by the script only.
+ * The nearfit side of scripts/bench-knn. {@code generate DIR [N Q]} writes the seeded data as raw
+ * little-endian doubles for every side; {@code run DIR REPS [N Q LOO_N]} times each case (after
+ * warm-up) and prints "case median_seconds" lines, then the check figures every side prints
+ * ({@code check_*}); {@code csv DIR ROWS FILE} writes the first ROWS rows as a CSV file for the
+ * whole-process mode (shortest round-trip decimals, so every parser that rounds correctly reads the
+ * same doubles). Not a test: run by the script only.
  */
 public final class KnnBench {
-    static final int N = 1_000_000;
-    static final int Q = 200_000;
-    static final int LOO_N = 200_000;
     static final int K = 10;
     static final int KMAX = 50;
 
@@ -35,19 +35,37 @@ public final class KnnBench {
 
     public static void main(String[] args) throws Exception {
         Path dir = Path.of(args[1]);
-        if (args[0].equals("generate")) {
-            generate(dir);
-        } else {
-            run(dir, Integer.parseInt(args[2]));
+        switch (args[0]) {
+            case "generate" -> generate(dir, intArg(args, 2, 1_000_000), intArg(args, 3, 200_000));
+            case "csv" -> csv(dir, Integer.parseInt(args[2]), Path.of(args[3]));
+            default -> run(dir, Integer.parseInt(args[2]), intArg(args, 3, 1_000_000), intArg(args, 4, 200_000),
+                    intArg(args, 5, 200_000));
         }
     }
 
+    private static int intArg(String[] args, int i, int fallback) {
+        return args.length > i ? Integer.parseInt(args[i]) : fallback;
+    }
+
+    /** The first {@code rows} rows: three inputs and the response, as CSV with a header. */
+    static void csv(Path dir, int rows, Path out) throws IOException {
+        double[] x3 = read(dir.resolve("x3.bin"));
+        double[] y = read(dir.resolve("y.bin"));
+        StringBuilder b = new StringBuilder(rows * 80);
+        b.append("wind_ms,air_density,yaw_deg,power_kw\n");
+        for (int i = 0; i < rows; i++) {
+            b.append(x3[3 * i]).append(',').append(x3[3 * i + 1]).append(',').append(x3[3 * i + 2]).append(',')
+                    .append(y[i]).append('\n');
+        }
+        java.nio.file.Files.writeString(out, b);
+    }
+
     /** A wind-site flavoured sample: wind speed, air density, yaw error; power with noise. */
-    static void generate(Path dir) throws IOException {
+    static void generate(Path dir, int rows, int queryCount) throws IOException {
         SplittableRandom r = new SplittableRandom(20261201);
-        double[] x3 = new double[N * 3];
-        double[] y = new double[N];
-        for (int i = 0; i < N; i++) {
+        double[] x3 = new double[rows * 3];
+        double[] y = new double[rows];
+        for (int i = 0; i < rows; i++) {
             double ws = 12 * Math.pow(-Math.log(1 - r.nextDouble()), 1 / 2.0); // Weibull(k=2)
             double rho = 1.225 + 0.05 * gauss(r);
             double yaw = 8 * gauss(r);
@@ -57,8 +75,8 @@ public final class KnnBench {
             double p = Math.min(3000, 0.5 * rho * 5000 * Math.pow(Math.min(ws, 13), 3) / 1000 * Math.cos(Math.toRadians(yaw)));
             y[i] = p + 40 * gauss(r);
         }
-        double[] q3 = new double[Q * 3];
-        for (int i = 0; i < Q; i++) {
+        double[] q3 = new double[queryCount * 3];
+        for (int i = 0; i < queryCount; i++) {
             q3[3 * i] = 25 * r.nextDouble();
             q3[3 * i + 1] = 1.225 + 0.05 * gauss(r);
             q3[3 * i + 2] = 8 * gauss(r);
@@ -123,13 +141,13 @@ public final class KnnBench {
         }
     }
 
-    static void run(Path dir, int reps) throws Exception {
+    static void run(Path dir, int reps, int rows, int queryCount, int looRows) throws Exception {
         double[] x3 = read(dir.resolve("x3.bin"));
         double[] y = read(dir.resolve("y.bin"));
         double[] q3 = read(dir.resolve("q3.bin"));
-        double[][] c3 = columns(x3, 3, N);
+        double[][] c3 = columns(x3, 3, rows);
         double[][] c1 = {c3[0]};
-        double[][] qc3 = columns(q3, 3, Q);
+        double[][] qc3 = columns(q3, 3, queryCount);
         double[][] qc1 = {qc3[0]};
         int threads = Runtime.getRuntime().availableProcessors();
         KnnSettings s = KnnSettings.defaults().withK(K).withScaling(Scaling.Z).withThreads(threads);
@@ -146,15 +164,29 @@ public final class KnnBench {
         time("query_3d", reps, () -> queries(m3, qc3, threads));
         double[][] l3 = new double[3][];
         for (int j = 0; j < 3; j++) {
-            l3[j] = Arrays.copyOf(c3[j], LOO_N);
+            l3[j] = Arrays.copyOf(c3[j], looRows);
         }
-        KnnModel loo = KnnModel.fit(ReferenceData.numeric(n3, l3, "power_kw", Arrays.copyOf(y, LOO_N), null), s);
+        KnnModel loo = KnnModel.fit(ReferenceData.numeric(n3, l3, "power_kw", Arrays.copyOf(y, looRows), null), s);
         time("loo_allk_3d", reps, () -> {
-            TuningTable t = Tuning.leaveOneOut(loo, KMAX, LOO_N, 1, Progress.NONE);
+            TuningTable t = Tuning.leaveOneOut(loo, KMAX, looRows, 1, Progress.NONE);
             return t.rmse()[KMAX - 1];
         });
-        TuningTable t = Tuning.leaveOneOut(loo, KMAX, LOO_N, 1, Progress.NONE);
-        System.out.printf("check_loo_rmse_k10 %.6f%n", t.rmse()[9]);
+        TuningTable t = Tuning.leaveOneOut(loo, KMAX, looRows, 1, Progress.NONE);
+        double[] rmse = t.rmse();
+        int best = 0;
+        for (int k = 1; k < KMAX; k++) {
+            if (rmse[k] < rmse[best]) {
+                best = k; // the first (smallest) k on an exact tie, as every side takes it
+            }
+        }
+        System.out.printf("check_loo_rmse_k10 %.9f%n", rmse[9]);
+        System.out.printf("check_best_k %d%n", best + 1);
+        NeighborTable q = m3.neighborsAll(qc3, Progress.NONE);
+        double kdist = 0;
+        for (int i = 0; i < queryCount; i++) {
+            kdist += q.distances()[i * K + K - 1];
+        }
+        System.out.printf("check_query_3d_kdist %.9f%n", kdist / queryCount);
     }
 
     /** The scaled coordinates of the model, packed (through the public transform). */

@@ -1,0 +1,102 @@
+"""The Python sides of scripts/bench-knn: SIDE is sklearn (KDTree, one thread), scipy (cKDTree,
+balanced_tree=False for the fast build, workers=-1 for queries) or pykdtree (KDTree, OpenMP threads
+from OMP_NUM_THREADS).
+
+  run SIDE DIR REPS N Q LOO_N KMAX   times the in-process cases on the raw little-endian files
+                                     KnnBench writes; prints "case seconds" then the check figures.
+  tune SIDE CSV KMAX                 whole process: pandas.read_csv, z scaling, leave-one-out RMSE for
+                                     every k in 1..KMAX; prints rows, best_k, rmse_k10.
+
+Scaling: z with the population SD, as nearfit (a common factor on all columns leaves neighbour order
+unchanged anyway). Leave-one-out: one query with k = KMAX + 1, drop the row itself, cumulative sums.
+"""
+import os
+import sys
+import time
+
+import numpy as np
+
+
+def make_side(side):
+    """(build(X) -> tree, query(tree, X, k) -> (dist, ind)) for one side."""
+    if side == "sklearn":
+        from sklearn.neighbors import KDTree
+        return KDTree, lambda t, q, k: t.query(q, k=k)
+    if side == "scipy":
+        from scipy.spatial import cKDTree
+        return (lambda x: cKDTree(x, balanced_tree=False),
+                lambda t, q, k: t.query(q, k=k, workers=-1))
+    if side == "pykdtree":
+        from pykdtree.kdtree import KDTree
+        return (lambda x: KDTree(x, leafsize=16),
+                lambda t, q, k: t.query(q, k=k))
+    raise SystemExit("unknown side " + side)
+
+
+def loo_rmse(build, query, x, y, kmax):
+    """Leave-one-out RMSE for k = 1..kmax (the tree build is counted)."""
+    _, ind = query(build(x), x, kmax + 1)
+    ind = np.asarray(ind, dtype=np.int64)
+    rows = np.arange(len(y))
+    if (ind[:, 0] == rows).all():
+        nb = ind[:, 1:]
+    else:  # a duplicate point came before the row itself: drop the row wherever it is, else the last
+        is_self = ind == rows[:, None]
+        order = np.argsort(is_self, axis=1, kind="stable")
+        nb = np.take_along_axis(ind, order, axis=1)[:, :kmax]
+    pred = np.cumsum(y[nb], axis=1) / np.arange(1, kmax + 1)
+    return np.sqrt(((y[:, None] - pred) ** 2).mean(axis=0))
+
+
+def zscale(x, ref):
+    return (x - ref.mean(axis=0)) / ref.std(axis=0)
+
+
+def run(side, d, reps, n, nq, nl, kmax):
+    build, query = make_side(side)
+    x3 = np.fromfile(d + "/x3.bin", dtype="<f8").reshape(n, 3)
+    y = np.fromfile(d + "/y.bin", dtype="<f8")
+    q3 = np.fromfile(d + "/q3.bin", dtype="<f8").reshape(nq, 3)
+    x3s, q3s = zscale(x3, x3), zscale(q3, x3)
+    x1s, q1s = x3s[:, :1].copy(), q3s[:, :1].copy()
+
+    def timed(name, f):
+        f()
+        t = []
+        for _ in range(reps):
+            t0 = time.perf_counter()
+            f()
+            t.append(time.perf_counter() - t0)
+        print("%s %.4f" % (name, sorted(t)[len(t) // 2]), flush=True)
+
+    timed("fit_1d", lambda: build(x1s))
+    timed("fit_3d", lambda: build(x3s))
+    timed("index_3d", lambda: build(x3s))
+    t1, t3 = build(x1s), build(x3s)
+    timed("query_1d", lambda: query(t1, q1s, 10))
+    timed("query_3d", lambda: query(t3, q3s, 10))
+    xl = zscale(x3[:nl], x3[:nl])  # scaled on the leave-one-out rows, as nearfit does
+    yl = y[:nl].copy()
+    timed("loo_allk_3d", lambda: loo_rmse(build, query, xl, yl, kmax))
+    r = loo_rmse(build, query, xl, yl, kmax)
+    print("check_loo_rmse_k10 %.9f" % r[9])
+    print("check_best_k %d" % (int(np.argmin(r)) + 1))
+    dist, _ = query(t3, q3s, 10)
+    print("check_query_3d_kdist %.9f" % np.asarray(dist)[:, 9].mean())
+
+
+def tune(side, path, kmax):
+    import pandas as pd
+    build, query = make_side(side)
+    v = pd.read_csv(path).to_numpy(dtype=np.float64)
+    x, y = np.ascontiguousarray(v[:, :-1]), np.ascontiguousarray(v[:, -1])
+    r = loo_rmse(build, query, zscale(x, x), y, kmax)
+    print("rows %d\nbest_k %d\nrmse_k10 %.9f" % (len(y), int(np.argmin(r)) + 1, r[9]))
+
+
+if __name__ == "__main__":
+    a = sys.argv
+    if a[1] == "run":
+        run(a[2], a[3], int(a[4]), int(a[5]), int(a[6]), int(a[7]), int(a[8]))
+    else:
+        tune(a[2], a[3], int(a[4]))
