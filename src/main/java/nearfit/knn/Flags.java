@@ -45,11 +45,11 @@ public final class Flags {
             }
         }, progress);
         double[] z = res.clone(); // scratch for the two medians, then the z-scores
-        double median = Quantiles.median(z, n);
+        double median = WeightedQuantiles.median(z, n);
         for (int i = 0; i < n; i++) {
             z[i] = Math.abs(res[i] - median);
         }
-        double mad = InputTransform.MAD_TO_SD * Quantiles.median(z, n);
+        double mad = InputTransform.MAD_TO_SD * WeightedQuantiles.median(z, n);
         boolean[] flagged = new boolean[n];
         int count = 0;
         for (int i = 0; i < n; i++) {

@@ -69,12 +69,12 @@ public record InputTransform(Scaling scaling, double[] center, double[] scale, d
             case ROBUST: {
                 double[] s = x.clone();
                 Arrays.sort(s);
-                double med = Quantiles.sortedQuantile(s, s.length, 0.5);
+                double med = WeightedQuantiles.sortedQuantile(s, s.length, 0.5);
                 for (int i = 0; i < n; i++) {
                     s[i] = Math.abs(x[i] - med);
                 }
                 Arrays.sort(s);
-                double mad = Quantiles.sortedQuantile(s, s.length, 0.5);
+                double mad = WeightedQuantiles.sortedQuantile(s, s.length, 0.5);
                 if (mad == 0) {
                     throw NearfitException.inColumn(name, "half or more of its values are equal, so its MAD is 0; use z or range scaling");
                 }

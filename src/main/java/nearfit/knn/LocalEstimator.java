@@ -173,10 +173,10 @@ final class LocalEstimator {
         return Math.sqrt(ss / sw);
     }
 
-    /** Weighted quantile of the responses at k (see {@link Quantiles}). */
+    /** Weighted quantile of the responses at k (see {@link WeightedQuantiles}). */
     double quantile(int k, double p) {
         int m = collect(k, Double.NaN);
-        return Quantiles.weightedSortedQuantile(tmpV, tmpW, m, p);
+        return WeightedQuantiles.weightedSortedQuantile(tmpV, tmpW, m, p);
     }
 
     /**
@@ -205,7 +205,7 @@ final class LocalEstimator {
             }
         }
         PairSort.sort(tmpV, tmpW, 0, m);
-        return Quantiles.weightedSortedQuantile(tmpV, tmpW, m, 0.5);
+        return WeightedQuantiles.weightedSortedQuantile(tmpV, tmpW, m, 0.5);
     }
 
     /**
@@ -224,7 +224,7 @@ final class LocalEstimator {
             System.arraycopy(prefix, at, prefix, at + 1, k - 1 - at);
             prefix[at] = v;
             if (w == Weighting.UNIFORM && counted(k) == k) {
-                out[k - 1] = Quantiles.sortedQuantile(prefix, k, 0.5);
+                out[k - 1] = WeightedQuantiles.sortedQuantile(prefix, k, 0.5);
             } else {
                 prepare(w, k);
                 out[k - 1] = median(k);
@@ -236,7 +236,7 @@ final class LocalEstimator {
     double mad(int k) {
         double med = quantile(k, 0.5);
         int m = collect(k, med);
-        return Quantiles.weightedSortedQuantile(tmpV, tmpW, m, 0.5);
+        return WeightedQuantiles.weightedSortedQuantile(tmpV, tmpW, m, 0.5);
     }
 
     /** Copies (value or |value - center|, share weight) with positive weight, sorted; returns count. */

@@ -79,7 +79,7 @@ public final class ReferenceReach {
             }
         }, Progress.NONE);
         Arrays.sort(widths);
-        double q = Quantiles.sortedQuantile(widths, m, WIDTH_QUANTILE);
+        double q = WeightedQuantiles.sortedQuantile(widths, m, WIDTH_QUANTILE);
         // Heavily tied data (readings rounded to a few steps) can put k equal rows beside almost every row; a
         // quantile of 0 would call every row between two steps far, so the largest width stands in for it.
         return new ReferenceReach(min, max, q > 0 ? q : widths[m - 1], m);

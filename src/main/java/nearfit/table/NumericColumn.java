@@ -4,7 +4,7 @@ package nearfit.table;
  * A column whose values can serve as a numeric input: numbers as they are, times as epoch milliseconds.
  * Missing values read as NaN through this view.
  */
-public sealed interface NumericColumn extends Column permits NumberColumn, TimeColumn {
+public sealed interface NumericColumn extends Column permits DecimalColumn, TimeColumn {
     /** The value at {@code row} as a double, NaN when missing. */
     double asDouble(int row);
 

@@ -129,7 +129,7 @@ public final class RowCondition {
 
     private static Test compile(Clause c, Column column) {
         Op op = c.op();
-        if (column instanceof NumberColumn num) {
+        if (column instanceof DecimalColumn num) {
             byte[] b = bytes(c.value().strip());
             double v = b.length == 0 ? Double.NaN : CellText.parseNumber(b, 0, b.length, false, b);
             if (Double.isNaN(v)) {

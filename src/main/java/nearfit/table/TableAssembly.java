@@ -82,7 +82,7 @@ final class TableAssembly {
                 for (int i = 1; i < parts.size(); i++) {
                     head.numbers.drainFrom(parts.get(i).columns[j].numbers);
                 }
-                return new NumberColumn(name, head.numbers, missing, bad);
+                return new DecimalColumn(name, head.numbers, missing, bad);
             }
             case TIME -> {
                 for (int i = 1; i < parts.size(); i++) {

@@ -18,7 +18,7 @@
  * LoadOptions options = LoadOptions.builder().progress(progress).build();
  * Table t = CsvLoader.load("site-log.csv.gz", options);   // "-" for standard input
  * LoadReport report = t.report();                        // rows, ragged lines, bad cells with lines, warnings
- * NumberColumn wind = (NumberColumn) t.column("wind_ms");
+ * DecimalColumn wind = (DecimalColumn) t.column("wind_ms");
  * RowSet rows = RowCondition.parse("turbine = T05 and time >= 2025-11-01", t).select(t);
  * double[] values = wind.copyValues(rows);               // NaN where missing
  * List<ColumnSummary> s = ColumnSummary.ofAll(t.columns(), threads);

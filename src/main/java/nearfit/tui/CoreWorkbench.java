@@ -49,7 +49,7 @@ public final class CoreWorkbench implements Workbench {
     private final String source;
     private final List<ColumnInfo> columns;
     private final String timeColumn;
-    private final References references;
+    private final WorkbenchCache references;
     private final ScenePoints points;
     private final LoadNotes notes;
     private PointLayer pointLayer;
@@ -73,7 +73,7 @@ public final class CoreWorkbench implements Workbench {
         }
         this.columns = List.copyOf(cols);
         this.timeColumn = time;
-        this.references = new References(table);
+        this.references = new WorkbenchCache(table);
         this.points = new ScenePoints(table, references);
         this.notes = LoadNotes.of(table);
     }
@@ -142,7 +142,7 @@ public final class CoreWorkbench implements Workbench {
     }
 
     @Override
-    public CurveResult curve(ModelSettings m, CurveRequest q, JobControl control) {
+    public CurveResult curve(FitKey m, CurveRequest q, JobControl control) {
         KnnModel model = references.model(m, q.compare() ? q.groupColumn() : null, q.group());
         int d = m.inputs().size();
         int display = m.inputs().indexOf(q.displayInput());
@@ -188,7 +188,7 @@ public final class CoreWorkbench implements Workbench {
     }
 
     @Override
-    public TuningTable tune(ModelSettings m, JobControl control) {
+    public TuningTable tune(FitKey m, JobControl control) {
         KnnModel model = references.model(m.withK(1), null, -1).withSettings(KnnChoices.longSettings(m.withK(1)));
         int kmax = Math.min(TUNING_KMAX, model.data().size() - 1);
         if (kmax < 1) {
@@ -202,7 +202,7 @@ public final class CoreWorkbench implements Workbench {
     }
 
     @Override
-    public FlaggedRows flags(ModelSettings m, String groupColumn, String shownCondition, JobControl control) {
+    public FlaggedRows flags(FitKey m, String groupColumn, String shownCondition, JobControl control) {
         KnnModel model = references.model(m, null, -1).withSettings(KnnChoices.longSettings(m));
         if (model.data().isCategory()) {
             return FlaggedRows.forCategory();

@@ -44,7 +44,7 @@ public final class Explorer implements AutoCloseable {
             new it.unimi.dsi.fastutil.ints.Int2ObjectOpenHashMap<>();
     private ViewState state;
     private Results results;
-    private Layout layout;
+    private ScreenRegions layout;
     private long generation;
     private Object curveKey;
     private Object tuningKey;
@@ -303,7 +303,7 @@ public final class Explorer implements AutoCloseable {
         if (results.rowsUsed() == 0) {
             return;
         }
-        ModelSettings model = state.model();
+        FitKey model = state.model();
         CurveRequest request = request();
         List<Object> ck = java.util.Arrays.asList(model, request);
         if (request != null && !ck.equals(curveKey)) {
@@ -335,7 +335,7 @@ public final class Explorer implements AutoCloseable {
             forgetFailureOf(Jobs.Kind.FLAGS);
             jobs.start(Jobs.Kind.FLAGS, generation, c -> workbench.flags(model, group, shown, c));
         }
-        ModelSettings anyK = model.withK(1);
+        FitKey anyK = model.withK(1);
         if (!anyK.equals(tuningKey)) {
             tuningKey = anyK;
             generation++;
@@ -443,8 +443,8 @@ public final class Explorer implements AutoCloseable {
         }
     }
 
-    private static Layout layoutOf(TerminalSize size) {
-        return new Layout(size.getColumns(), size.getRows());
+    private static ScreenRegions layoutOf(TerminalSize size) {
+        return new ScreenRegions(size.getColumns(), size.getRows());
     }
 
     @Override

@@ -201,7 +201,7 @@ final class Jobs implements AutoCloseable {
     }
 
     /** A job's flags that also post a {@link #TICK} when its progress passes a percentage point. */
-    private final class Control extends JobFlags {
+    private final class Control extends JobReport {
         volatile boolean finished;
         private final boolean yields;
         private int lastPercent = -1;

@@ -16,7 +16,7 @@ final class KnnChoices {
      * does by default: on logs where most rows sit below cut-in or at rated power the global MAD is
      * tiny, and the global scale flagged about 10 % of the demo site's rows.
      */
-    static KnnSettings settings(ModelSettings m) {
+    static KnnSettings settings(FitKey m) {
         return new KnnSettings(m.k(), m.metric(), m.weighting(), m.scaling(),
                 m.band(), m.estimate(), KnnSettings.DEFAULT_FLAG_THRESHOLD, FlagScale.LOCAL_SD, THREADS);
     }
@@ -26,7 +26,7 @@ final class KnnChoices {
      * core to the curve halved the flags' speed on two cores, and a frame no longer needs one: a k change
      * redraws over points binned once.
      */
-    static KnnSettings longSettings(ModelSettings m) {
+    static KnnSettings longSettings(FitKey m) {
         return settings(m);
     }
 

@@ -8,7 +8,7 @@ final class Panels {
     private Panels() {
     }
 
-    static void paint(Pen pen, Layout layout, ViewState s, Results r, FrameInput in, Sketches sketches) {
+    static void paint(Pen pen, ScreenRegions layout, ViewState s, Results r, FrameInput in, Sketches sketches) {
         switch (s.overlay()) {
             case HELP -> list(pen, layout, "keys (Esc closes)", helpLines(), s.cursor(), false, 7);
             case PICKER -> fitted(pen, layout, "choose the " + s.ask().title() + " (Enter, Esc)", pickerLines(s, in),
@@ -64,7 +64,7 @@ final class Panels {
     }
 
     /** A picker or menu: a boxed list only as tall as its lines (up to the plot's height). */
-    private static void fitted(Pen pen, Layout layout, String title, List<String> lines, int cursor) {
+    private static void fitted(Pen pen, ScreenRegions layout, String title, List<String> lines, int cursor) {
         int h = Math.min(layout.plotHeight(), Math.max(3, lines.size() + 2));
         box(pen, layout, layout.plotTop(), h, title, lines, cursor, true, 0);
     }
@@ -75,14 +75,14 @@ final class Panels {
      * with the cursor as its first line, and its lines too long for the box wrap, continued {@code indent}
      * columns in. When the lines do not all fit, the bottom edge says which are shown and which way more lie.
      */
-    static void list(Pen pen, Layout layout, String title, List<String> lines, int cursor, boolean selectable,
+    static void list(Pen pen, ScreenRegions layout, String title, List<String> lines, int cursor, boolean selectable,
             int indent) {
         int inner = layout.width() - 4 - 3;
         box(pen, layout, layout.plotTop(), layout.plotHeight(), title, selectable ? lines : wrapped(lines, inner, indent),
                 cursor, selectable, indent);
     }
 
-    private static void box(Pen pen, Layout layout, int row, int h, String title, List<String> lines, int cursor,
+    private static void box(Pen pen, ScreenRegions layout, int row, int h, String title, List<String> lines, int cursor,
             boolean selectable, int indent) {
         int col = 2;
         int w = layout.width() - 4;
@@ -129,7 +129,7 @@ final class Panels {
         return out;
     }
 
-    private static void tuning(Pen pen, Layout layout, ViewState s, Results r, Sketches sketches) {
+    private static void tuning(Pen pen, ScreenRegions layout, ViewState s, Results r, Sketches sketches) {
         int row = layout.plotTop();
         int h = layout.plotHeight();
         int w = layout.width() - 4;
@@ -183,7 +183,7 @@ final class Panels {
                 + " rows)" : "leave-one-out";
     }
 
-    private static void prompt(Pen pen, Layout layout, ViewState s) {
+    private static void prompt(Pen pen, ScreenRegions layout, ViewState s) {
         String hint = switch (s.ask()) {
             case CONDITION -> "  (column op value [and ...]; Enter applies, empty clears)";
             case FILE -> "  (Enter writes, Esc cancels)";
@@ -203,7 +203,7 @@ final class Panels {
         }
     }
 
-    private static void prompt(Pen pen, Layout layout, String text) {
+    private static void prompt(Pen pen, ScreenRegions layout, String text) {
         int row = layout.plotTop() + layout.plotHeight() - 3;
         pen.box(2, row, layout.width() - 4, 3, "");
         pen.text(4, row + 1, Figures.fit(text, layout.width() - 8, pen.look().ascii()), Ink.TEXT);

@@ -62,7 +62,7 @@ final class Pen {
         }
         text = nearfit.table.VisibleText.of(text);
         String shown = text.length() > width - col ? text.substring(0, width - col) : text;
-        g.setForegroundColor(Palette.foreground(ink, look));
+        g.setForegroundColor(InkColours.foreground(ink, look));
         g.setBackgroundColor(TextColor.ANSI.DEFAULT);
         g.clearModifiers();
         if (ink == Ink.SELECTED) {
@@ -104,8 +104,8 @@ final class Pen {
                 // Without colour the highlighted group needs a shape of its own (ASCII already draws it as #).
                 ch = HIGHLIGHT_GLYPH;
             }
-            t = ink == Ink.CURVE ? new TextCharacter(ch, Palette.foreground(ink, look), bg, SGR.BOLD)
-                    : new TextCharacter(ch, Palette.foreground(ink, look), bg);
+            t = ink == Ink.CURVE ? new TextCharacter(ch, InkColours.foreground(ink, look), bg, SGR.BOLD)
+                    : new TextCharacter(ch, InkColours.foreground(ink, look), bg);
             made.put(key, t);
         }
         return t;

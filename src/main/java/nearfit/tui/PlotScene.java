@@ -16,7 +16,7 @@ package nearfit.tui;
  * @param ascii        whether to draw with plain ASCII instead of braille
  * @param shownCondition the row condition of the rows drawn; the model's own condition may be wider (empty)
  */
-public record PlotScene(ModelSettings model, CurveRequest request, CurveResult curve, FlaggedRows flags,
+public record PlotScene(FitKey model, CurveRequest request, CurveResult curve, FlaggedRows flags,
         PlotMode mode, boolean flagMarks, double crosshairX, java.util.Map<String, Double> heldQuantile, boolean nearHeldOnly, int markedRow, boolean ascii,
         String shownCondition) {
 }

@@ -20,7 +20,7 @@ final class ScenePoints {
     static final double NEAR = 0.05;
 
     private final Table table;
-    private final References references;
+    private final WorkbenchCache references;
     private Object pointsKey;
     private Points points;
     /** Row id to its index in {@link #points}, made when first asked for; {@code null} until then. */
@@ -52,7 +52,7 @@ final class ScenePoints {
         return m == Double.NEGATIVE_INFINITY ? Double.NaN : m;
     }
 
-    ScenePoints(Table table, References references) {
+    ScenePoints(Table table, WorkbenchCache references) {
         this.table = table;
         this.references = references;
     }

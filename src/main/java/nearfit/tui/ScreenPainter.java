@@ -8,7 +8,7 @@ final class ScreenPainter {
     private ScreenPainter() {
     }
 
-    static void paint(Pen pen, Layout layout, ViewState s, Results r, FrameInput in, Sketches sketches) {
+    static void paint(Pen pen, ScreenRegions layout, ViewState s, Results r, FrameInput in, Sketches sketches) {
         if (!layout.fits() || in.request() == null) {
             pen.clear();
         } else {
@@ -44,7 +44,7 @@ final class ScreenPainter {
      * Says what the strip under the plot shows and in which unit, on the left of the axis-name row above it
      * (which holds only the axis name, on the right): the strip's own margin has room for the number alone.
      */
-    private static void stripCaption(Pen pen, Layout layout, ViewState s, Results r, FrameInput in, PlotCells drawn) {
+    private static void stripCaption(Pen pen, ScreenRegions layout, ViewState s, Results r, FrameInput in, PlotCells drawn) {
         if (r.curve() == null || s.mode() == PlotMode.RESIDUALS_OVER_TIME || drawn.strip().width() == 0) {
             return;
         }
@@ -78,8 +78,8 @@ final class ScreenPainter {
                 s.markedRow(), look.ascii(), s.condition());
     }
 
-    private static void tooSmall(Pen pen, Layout layout) {
-        String text = "nearfit needs a window of at least " + Layout.MIN_WIDTH + "x" + Layout.MIN_HEIGHT
+    private static void tooSmall(Pen pen, ScreenRegions layout) {
+        String text = "nearfit needs a window of at least " + ScreenRegions.MIN_WIDTH + "x" + ScreenRegions.MIN_HEIGHT
                 + "; this one is " + layout.width() + "x" + layout.height() + ". Enlarge it, or press q to quit.";
         java.util.List<String> lines = wrap(text, layout.width());
         int top = Math.max(0, (layout.height() - lines.size()) / 2);
@@ -113,7 +113,7 @@ final class ScreenPainter {
         return lines;
     }
 
-    private static void header(Pen pen, Layout layout, ViewState s, Results r, FrameInput in) {
+    private static void header(Pen pen, ScreenRegions layout, ViewState s, Results r, FrameInput in) {
         boolean ascii = pen.look().ascii();
         pen.text(0, 0, Header.first(s, r, in, layout.width(), ascii), Ink.TITLE);
         pen.text(0, 1, Header.second(s, in, layout.width(), ascii), Ink.TEXT);

@@ -18,8 +18,8 @@ final class Sketches {
     PlotCells plot(PlotScene scene, int width, int height) {
         // k, weights and band reach the plot only through the curve and flags (compared by identity), so a
         // frame drawn right after a k change, still with the old curve, reuses the composed plot.
-        ModelSettings m = scene.model();
-        ModelSettings shape = new ModelSettings(m.condition(), m.response(), m.inputs(), 1, m.metric(),
+        FitKey m = scene.model();
+        FitKey shape = new FitKey(m.condition(), m.response(), m.inputs(), 1, m.metric(),
                 nearfit.knn.Weighting.UNIFORM, m.scaling(), nearfit.knn.Band.NONE);
         Object key = java.util.Arrays.asList(shape, scene.request(), scene.curve(), scene.flags(), scene.mode(),
                 scene.flagMarks(), scene.crosshairX(), scene.heldQuantile(), scene.nearHeldOnly(), scene.markedRow(),

@@ -144,7 +144,7 @@ public final class TerminalSession {
     /** Loads on a background thread while drawing progress; q or Ctrl-C cancels (returns {@code null}). */
     private Workbench load(Path file, String shownName, WorkbenchOpener opener) throws IOException,
             InterruptedException {
-        JobFlags progress = new JobFlags();
+        JobReport progress = new JobReport();
         CompletableFuture<Workbench> task = CompletableFuture.supplyAsync(() -> opener.open(file, shownName, progress));
         while (true) {
             drawLoading(shownName, progress.fraction, progress.rows);
@@ -172,7 +172,7 @@ public final class TerminalSession {
 
     private void drawLoading(String shownName, double fraction, long rows) throws IOException {
         screen.doResizeIfNecessary();
-        Layout layout = new Layout(screen.getTerminalSize().getColumns(), screen.getTerminalSize().getRows());
+        ScreenRegions layout = new ScreenRegions(screen.getTerminalSize().getColumns(), screen.getTerminalSize().getRows());
         Pen pen = new Pen(screen.newTextGraphics(), look, layout.width(), layout.height(),
                 new it.unimi.dsi.fastutil.ints.Int2ObjectOpenHashMap<>());
         pen.clear();

@@ -83,8 +83,8 @@ public record ViewState(String condition, String response, List<String> inputs, 
      * The settings a fit depends on. Its condition is the reference's: the row condition when it narrows the
      * reference, otherwise empty (all rows).
      */
-    public ModelSettings model() {
-        return new ModelSettings(referenceCondition(), response, inputs, k, metric, weighting, scaling, band, estimate);
+    public FitKey model() {
+        return new FitKey(referenceCondition(), response, inputs, k, metric, weighting, scaling, band, estimate);
     }
 
     /** The condition that chooses the reference rows: the row condition, or empty for all rows. */

@@ -45,16 +45,16 @@ public interface Workbench {
     List<String> labels(String column);
 
     /** The curve along the display input. */
-    CurveResult curve(ModelSettings model, CurveRequest request, JobControl control);
+    CurveResult curve(FitKey model, CurveRequest request, JobControl control);
 
     /** Leave-one-out tuning over the k ladder; does not depend on {@code model.k()}. */
-    TuningTable tune(ModelSettings model, JobControl control);
+    TuningTable tune(FitKey model, JobControl control);
 
     /**
      * Leave-one-out residuals at {@code model.k()} over the model's reference rows, and the flagged ones among
      * the rows of {@code shownCondition} (which may narrow them further), labelled by the group column.
      */
-    FlaggedRows flags(ModelSettings model, String groupColumn, String shownCondition, JobControl control);
+    FlaggedRows flags(FitKey model, String groupColumn, String shownCondition, JobControl control);
 
     /**
      * The plot (axes, points, curve, band, flags and crosshair) in {@code width} by {@code height} cells, and

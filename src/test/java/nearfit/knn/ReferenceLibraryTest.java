@@ -111,7 +111,7 @@ class ReferenceLibraryTest {
             java.util.Arrays.sort(v);
             double[] q = f.vector("q" + n);
             for (int i = 0; i < p.length; i++) {
-                assertEquals(q[i], Quantiles.weightedSortedQuantile(v, w, n, p[i]), 1e-12, "n=" + n + " p=" + p[i]);
+                assertEquals(q[i], WeightedQuantiles.weightedSortedQuantile(v, w, n, p[i]), 1e-12, "n=" + n + " p=" + p[i]);
             }
         }
     }

@@ -26,7 +26,7 @@ class CsvLoaderTest {
         CategoryColumn turbine = assertInstanceOf(CategoryColumn.class, t.column("turbine"));
         assertEquals(List.of("T01", "T02"), turbine.labels());
         assertEquals(0, turbine.code(2));
-        NumberColumn wind = assertInstanceOf(NumberColumn.class, t.column("wind_ms"));
+        DecimalColumn wind = assertInstanceOf(DecimalColumn.class, t.column("wind_ms"));
         assertEquals(7.25, wind.get(1));
         assertTrue(Double.isNaN(wind.get(2)));
         assertEquals(1, wind.missingCount());
@@ -64,8 +64,8 @@ class CsvLoaderTest {
     void sniffsSemicolonTabAndBarAndReadsTheDecimalComma() {
         Table semi = CsvFiles.load(dir, "a;b\n1,5;2\n3;4,25\n");
         assertEquals(';', semi.report().delimiter());
-        assertEquals(1.5, ((NumberColumn) semi.column("a")).get(0));
-        assertEquals(4.25, ((NumberColumn) semi.column("b")).get(1));
+        assertEquals(1.5, ((DecimalColumn) semi.column("a")).get(0));
+        assertEquals(4.25, ((DecimalColumn) semi.column("b")).get(1));
         assertEquals('\t', CsvFiles.load(dir, "a\tb\n1\t2\n").report().delimiter());
         assertEquals('|', CsvFiles.load(dir, "a|b|c\n1|2|3\n").report().delimiter());
     }
@@ -86,7 +86,7 @@ class CsvLoaderTest {
         Table t = CsvLoader.load(CsvFiles.write(dir, "bom.csv", all), "bom.csv", LoadOptions.DEFAULT);
         assertEquals(List.of("größe", "wert"), t.names());
         assertEquals(List.of("Ä", "B"), ((CategoryColumn) t.column("größe")).labels());
-        assertEquals(2.0, ((NumberColumn) t.column("wert")).get(1), "CR is not part of the last field");
+        assertEquals(2.0, ((DecimalColumn) t.column("wert")).get(1), "CR is not part of the last field");
     }
 
     @Test
@@ -113,7 +113,7 @@ class CsvLoaderTest {
         assertEquals(2, t.report().badCells());
         assertEquals(List.of(new BadCell(3, "time", "2025-13-01"), new BadCell(4, "power_kw", "12x5")),
                 t.report().badExamples());
-        assertTrue(((NumberColumn) t.column("power_kw")).isMissing(2));
+        assertTrue(((DecimalColumn) t.column("power_kw")).isMissing(2));
     }
 
     @Test
@@ -126,7 +126,7 @@ class CsvLoaderTest {
         assertEquals(4, t.report().rowsRead());
         assertEquals(2, t.lineOf(0));
         assertEquals(5, t.lineOf(1), "the row after the dropped ones keeps its own line");
-        assertEquals(12.0, ((NumberColumn) t.column("c")).get(1));
+        assertEquals(12.0, ((DecimalColumn) t.column("c")).get(1));
         assertEquals(3, t.report().raggedExamples().get(0).line());
         assertEquals("2 fields, not 3; row dropped", t.report().raggedExamples().get(0).text());
         assertEquals(4, t.report().raggedExamples().get(1).line());
@@ -142,8 +142,8 @@ class CsvLoaderTest {
                 + "2025-01-01T00:10:00Z,7,6,14.1,55.5\n"
                 + "2025-01-01T00:20:00Z,7.4,14.0\n"
                 + "2025-01-01T00:30:00Z,7.3,13.9,54.5\n");
-        NumberColumn rpm = (NumberColumn) t.column("rotor_rpm");
-        NumberColumn oil = (NumberColumn) t.column("gearbox_oil_c");
+        DecimalColumn rpm = (DecimalColumn) t.column("rotor_rpm");
+        DecimalColumn oil = (DecimalColumn) t.column("gearbox_oil_c");
         assertEquals(2, t.rowCount());
         assertEquals(List.of(14.2, 13.9), List.of(rpm.get(0), rpm.get(1)));
         assertEquals(List.of(55.0, 54.5), List.of(oil.get(0), oil.get(1)));
@@ -171,7 +171,7 @@ class CsvLoaderTest {
     void keepsOnlyTheNamedColumns() {
         Table t = CsvFiles.load(dir, "a,b,c\n1,2,3\n", LoadOptions.builder().keepColumns(List.of("c", "a")).build());
         assertEquals(List.of("a", "c"), t.names());
-        assertEquals(3.0, ((NumberColumn) t.column("c")).get(0));
+        assertEquals(3.0, ((DecimalColumn) t.column("c")).get(0));
     }
 
     @Test
@@ -179,7 +179,7 @@ class CsvLoaderTest {
         LoadOptions o = LoadOptions.builder().keepColumns(List.of("c")).keepIfPresent(List.of("a", "zz", "c")).build();
         Table t = CsvFiles.load(dir, "a,b,c\n1,2,3\n", o);
         assertEquals(List.of("a", "c"), t.names());
-        assertEquals(1.0, ((NumberColumn) t.column("a")).get(0));
+        assertEquals(1.0, ((DecimalColumn) t.column("a")).get(0));
     }
 
     @Test
@@ -205,7 +205,7 @@ class CsvLoaderTest {
         assertEquals(0, kept.report().badCells());
         assertEquals(List.of("wind_ms", "power_kw"), kept.names());
         assertEquals(20, kept.rowCount());
-        assertEquals(190.0, ((NumberColumn) kept.column("power_kw")).get(19));
+        assertEquals(190.0, ((DecimalColumn) kept.column("power_kw")).get(19));
         assertEquals(all.lineOf(19), kept.lineOf(19));
     }
 
@@ -221,7 +221,7 @@ class CsvLoaderTest {
         byte[] gz = CsvFiles.gzip("a,b\n1,2\n3,4\n".getBytes(StandardCharsets.UTF_8));
         Table t = CsvLoader.load(CsvFiles.write(dir, "plain-name.csv", gz), "plain-name.csv", LoadOptions.DEFAULT);
         assertEquals(2, t.rowCount());
-        assertEquals(4.0, ((NumberColumn) t.column("b")).get(1));
+        assertEquals(4.0, ((DecimalColumn) t.column("b")).get(1));
     }
 
     @Test

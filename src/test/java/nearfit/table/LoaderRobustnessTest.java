@@ -153,7 +153,7 @@ class LoaderRobustnessTest {
             Table t = assertTimeoutPreemptively(HANG, () -> CsvLoader.load(p, "growing.csv", o));
             assertTrue(grown.get());
             assertEquals(3_000_000, t.rowCount(), "threads " + threads);
-            assertEquals((2_999_999 % 2000) + 0.5, ((NumberColumn) t.column("power_kw")).get(2_999_999), 0);
+            assertEquals((2_999_999 % 2000) + 0.5, ((DecimalColumn) t.column("power_kw")).get(2_999_999), 0);
             assertEquals(List.of("growing.csv: grew from " + size + " to " + (size + more.length) + " bytes while it "
                     + "was read; only the first " + size + " bytes were read"), t.report().warnings());
         }
@@ -227,7 +227,7 @@ class LoaderRobustnessTest {
         Path fifo = pipeFeeding("wind_ms,power_kw\n3,20\n5,90\n7,300\n".getBytes(StandardCharsets.UTF_8));
         Table t = assertTimeoutPreemptively(HANG, () -> CsvLoader.load(fifo, "pipe", LoadOptions.DEFAULT));
         assertEquals(3, t.rowCount());
-        assertEquals(300.0, ((NumberColumn) t.column("power_kw")).get(2), 0);
+        assertEquals(300.0, ((DecimalColumn) t.column("power_kw")).get(2), 0);
     }
 
     @Test

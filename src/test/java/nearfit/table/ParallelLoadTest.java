@@ -56,7 +56,7 @@ class ParallelLoadTest {
             Table t = load(threads);
             assertEquals(oracle.size(), t.rowCount(), "threads " + threads);
             CategoryColumn turbine = (CategoryColumn) t.column("turbine");
-            NumberColumn wind = (NumberColumn) t.column("wind_ms");
+            DecimalColumn wind = (DecimalColumn) t.column("wind_ms");
             for (int row = 0; row < oracle.size(); row++) {
                 CSVRecord r = oracle.get(row);
                 assertEquals(r.get("turbine"), turbine.label(row), "threads " + threads + " row " + row);

@@ -35,8 +35,8 @@ class PipelineLoadTest {
         Table c = CsvLoader.load(new ByteArrayInputStream(plain), "-", LoadOptions.DEFAULT);
         for (Table t : new Table[] {b, c}) {
             assertEquals(a.rowCount(), t.rowCount());
-            NumberColumn wa = (NumberColumn) a.column("wind_ms");
-            NumberColumn wt = (NumberColumn) t.column("wind_ms");
+            DecimalColumn wa = (DecimalColumn) a.column("wind_ms");
+            DecimalColumn wt = (DecimalColumn) t.column("wind_ms");
             CategoryColumn ta = (CategoryColumn) a.column("turbine");
             CategoryColumn tt = (CategoryColumn) t.column("turbine");
             for (int row = 0; row < a.rowCount(); row++) {
@@ -45,7 +45,7 @@ class PipelineLoadTest {
                 assertEquals(a.lineOf(row), t.lineOf(row));
             }
         }
-        assertEquals(119_999 % 250 + 0.5, ((NumberColumn) a.column("wind_ms")).get(119_999), "decimal comma");
+        assertEquals(119_999 % 250 + 0.5, ((DecimalColumn) a.column("wind_ms")).get(119_999), "decimal comma");
     }
 
     @Test

@@ -12,14 +12,14 @@ import org.junit.jupiter.api.Test;
 
 /** Oracle: the same ranks read from the column sorted by {@link Arrays#sort(double[])} (Double.compare order). */
 class RankSelectionTest {
-    private static NumberColumn column(double[] values) {
+    private static DecimalColumn column(double[] values) {
         DoubleChunks chunks = new DoubleChunks();
         long missing = 0;
         for (double v : values) {
             chunks.add(v);
             missing += Double.isNaN(v) ? 1 : 0;
         }
-        return new NumberColumn("x", chunks, missing, 0);
+        return new DecimalColumn("x", chunks, missing, 0);
     }
 
     private static void assertSameAsSorting(double[] values) {

@@ -23,7 +23,7 @@ class FlaggedRowsTest {
         Path csv = dir.resolve("pump.csv");
         Files.writeString(csv, "flow_m3h,head_m\n0,1\n1,2\n3,5\n7,11\n", StandardCharsets.UTF_8);
         Workbench wb = CoreWorkbench.of(CsvLoader.load(csv, csv.toString(), LoadOptions.DEFAULT), "pump.csv");
-        ModelSettings m = new ModelSettings("", "head_m", List.of("flow_m3h"), 1, Metric.EUCLIDEAN, Weighting.UNIFORM,
+        FitKey m = new FitKey("", "head_m", List.of("flow_m3h"), 1, Metric.EUCLIDEAN, Weighting.UNIFORM,
                 Scaling.Z, Band.NONE);
         FlaggedRows f = wb.flags(m, null, "", JobControl.NONE);
         // Worked by hand, k = 1 with no ties: each row's nearest other row gives fits 2, 1, 2, 5, so the

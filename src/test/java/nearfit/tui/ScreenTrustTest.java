@@ -129,7 +129,7 @@ class ScreenTrustTest {
     void theTuningPanelAt80ColumnsShowsTheOneSeKAndSaysWhenItsRmseIsFromASample() throws Exception {
         ScriptedWorkbench sampled = new ScriptedWorkbench() {
             @Override
-            public TuningTable tune(ModelSettings model, JobControl control) {
+            public TuningTable tune(FitKey model, JobControl control) {
                 TuningTable t = super.tune(model, control);
                 return new TuningTable("sampled leave-one-out", 500, 1000, t.rmse(), t.rmseSe(), t.mae(), t.maeSe(),
                         t.press(), t.predictedR2(), t.errorRate(), t.errorRateSe(), t.bestK(), t.oneSeK());
@@ -264,7 +264,7 @@ class ScreenTrustTest {
             v.type("o");
             assertTrue(v.row(28).startsWith("highlight a group first"), v.row(28));
             TextColor warning = v.terminal.getBufferCharacter(0, 28).getForegroundColor();
-            assertEquals(Palette.foreground(Ink.WARNING, COLOUR), warning);
+            assertEquals(InkColours.foreground(Ink.WARNING, COLOUR), warning);
             assertNotEquals(warning, note);
         }
     }

@@ -77,7 +77,7 @@ class ScriptedWorkbench implements Workbench {
     }
 
     @Override
-    public CurveResult curve(ModelSettings model, CurveRequest request, JobControl control) {
+    public CurveResult curve(FitKey model, CurveRequest request, JobControl control) {
         curveCalls.incrementAndGet();
         if (model.k() == holdCurveForK) {
             try {
@@ -105,7 +105,7 @@ class ScriptedWorkbench implements Workbench {
     }
 
     @Override
-    public TuningTable tune(ModelSettings model, JobControl control) {
+    public TuningTable tune(FitKey model, JobControl control) {
         tuneCalls.incrementAndGet();
         control.progress(0.5);
         // k = 1 to 50: RMSE falls from 9 to 4 at k = 15, rises to 4.4 at k = 30, then jumps above 4.5, so with
@@ -123,7 +123,7 @@ class ScriptedWorkbench implements Workbench {
     }
 
     @Override
-    public FlaggedRows flags(ModelSettings model, String groupColumn, String shownCondition, JobControl control) {
+    public FlaggedRows flags(FitKey model, String groupColumn, String shownCondition, JobControl control) {
         List<FlaggedRow> rows = new ArrayList<>();
         rows.add(new FlaggedRow(41, 43, "2026-03-02T10:10:00Z", "T02", List.of(12.5), 300, 1900, -1600, -7.5));
         rows.add(new FlaggedRow(7, 9, "2026-03-01T01:10:00Z", "T01", List.of(5.0), 900, 400, 500, 4.1));

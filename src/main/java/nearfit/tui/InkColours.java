@@ -6,7 +6,7 @@ import com.googlecode.lanterna.TextColor;
  * The explorer's colours: one 256-colour index per {@link Ink}. Point densities run from slate to pale cyan
  * so that the amber curve, the gold band and the red flags stand out over them.
  */
-final class Palette {
+final class InkColours {
     private static final int[] INDEX = new int[Ink.values().length];
     private static final TextColor[] COLOUR = new TextColor[Ink.values().length];
 
@@ -39,7 +39,7 @@ final class Palette {
         }
     }
 
-    private Palette() {
+    private InkColours() {
     }
 
     private static void set(Ink ink, int index) {

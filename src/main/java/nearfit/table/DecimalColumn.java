@@ -1,10 +1,10 @@
 package nearfit.table;
 
 /** A column of decimal numbers stored as doubles in chunks; NaN marks a missing value. */
-public final class NumberColumn extends NamedColumn implements NumericColumn {
+public final class DecimalColumn extends NamedColumn implements NumericColumn {
     private final DoubleChunks values;
 
-    NumberColumn(String name, DoubleChunks values, long missing, long bad) {
+    DecimalColumn(String name, DoubleChunks values, long missing, long bad) {
         super(name, missing, bad);
         this.values = values;
     }

@@ -4,7 +4,7 @@ package nearfit.tui;
  * A {@link JobControl} that keeps what a job reports in volatile fields, read by the explorer's thread:
  * whether it was cancelled, its progress and the rows read so far.
  */
-class JobFlags implements JobControl {
+class JobReport implements JobControl {
     volatile boolean cancelled;
     volatile double fraction;
     volatile long rows;

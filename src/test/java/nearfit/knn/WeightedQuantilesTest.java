@@ -22,13 +22,13 @@ class QuantilesTest {
         }
         double[] sorted = a.clone();
         Arrays.sort(sorted);
-        assertEquals(Quantiles.sortedQuantile(sorted, n, 0.5), Quantiles.median(a.clone(), n));
+        assertEquals(WeightedQuantiles.sortedQuantile(sorted, n, 0.5), WeightedQuantiles.median(a.clone(), n));
     }
 
     @Test
     void evenCountTakesTheMidpointOfTheTwoMiddleValues() {
         // numpy.median([4, 1, 3, 2]) = 2.5 (from memory of numpy's definition: mean of the middle two)
-        assertEquals(2.5, Quantiles.median(new double[] {4, 1, 3, 2}, 4));
-        assertEquals(7.0, Quantiles.median(new double[] {7}, 1));
+        assertEquals(2.5, WeightedQuantiles.median(new double[] {4, 1, 3, 2}, 4));
+        assertEquals(7.0, WeightedQuantiles.median(new double[] {7}, 1));
     }
 }

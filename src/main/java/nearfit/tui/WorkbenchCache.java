@@ -21,7 +21,7 @@ import nearfit.table.Table;
  * fitted models (one fit shared by the curve, tuning and flag jobs that ask for it at once, and reused with
  * another k, weighting or band) and the latest leave-one-out flags. Safe for concurrent use.
  */
-final class References {
+final class WorkbenchCache {
     /** Entries kept per cache; a few settings back is enough to step back and forth. */
     private static final int KEEP = 4;
 
@@ -29,9 +29,9 @@ final class References {
     private final Map<String, RowSet> rows = lru();
     private final Map<List<Object>, double[]> sorted = lru();
     private final Map<List<Object>, CompletableFuture<KnnModel>> models = lru();
-    private final Map<ModelSettings, nearfit.knn.FlagResult> flags = lru();
+    private final Map<FitKey, nearfit.knn.FlagResult> flags = lru();
 
-    References(Table table) {
+    WorkbenchCache(Table table) {
         this.table = table;
     }
 
@@ -89,7 +89,7 @@ final class References {
      * The model for these settings, fitted once per rows, response, inputs, metric and scaling. With a
      * group column, the rows of group {@code group} are left out (the curve of the other groups).
      */
-    KnnModel model(ModelSettings m, String groupColumn, int group) {
+    KnnModel model(FitKey m, String groupColumn, int group) {
         List<Object> key = Arrays.asList(m.condition(), m.response(), m.inputs(), m.metric(), m.scaling(),
                 groupColumn, groupColumn == null ? -1 : group);
         CompletableFuture<KnnModel> f;
@@ -122,7 +122,7 @@ final class References {
         }
     }
 
-    private ReferenceData data(ModelSettings m, String groupColumn, int group) {
+    private ReferenceData data(FitKey m, String groupColumn, int group) {
         RowSet used = rows(m.condition());
         if (groupColumn != null && group >= 0) {
             used = without(used, (CategoryColumn) table.column(groupColumn), group);
@@ -163,14 +163,14 @@ final class References {
         return RowSet.of(Arrays.copyOf(kept, n));
     }
 
-    void keepFlags(ModelSettings m, nearfit.knn.FlagResult f) {
+    void keepFlags(FitKey m, nearfit.knn.FlagResult f) {
         synchronized (flags) {
             flags.put(m, f);
         }
     }
 
     /** The leave-one-out flags computed for these settings, or {@code null}. */
-    nearfit.knn.FlagResult flags(ModelSettings m) {
+    nearfit.knn.FlagResult flags(FitKey m) {
         synchronized (flags) {
             return flags.get(m);
         }

@@ -8,8 +8,8 @@ package nearfit.knn;
  * definition 7, and the rule is symmetric under reversing the order. This weighted rule is the
  * project's own generalisation (no published source claimed).
  */
-final class Quantiles {
-    private Quantiles() {
+final class WeightedQuantiles {
+    private WeightedQuantiles() {
     }
 
     /** Definition 7 on the first n values of an ascending array; p in [0, 1]. */

@@ -22,10 +22,10 @@ import nearfit.knn.Weighting;
  * @param band      the band around the curve
  * @param estimate  the curve: the neighbours' weighted mean or median
  */
-public record ModelSettings(String condition, String response, List<String> inputs, int k, Metric metric,
+public record FitKey(String condition, String response, List<String> inputs, int k, Metric metric,
         Weighting weighting, Scaling scaling, Band band, EstimateKind estimate) {
     /** Copies the inputs so that the record stays immutable. */
-    public ModelSettings {
+    public FitKey {
         inputs = List.copyOf(inputs);
         if (inputs.isEmpty()) {
             throw new IllegalArgumentException("a model needs at least one input");
@@ -36,13 +36,13 @@ public record ModelSettings(String condition, String response, List<String> inpu
     }
 
     /** The settings with the mean as the estimate. */
-    public ModelSettings(String condition, String response, List<String> inputs, int k, Metric metric,
+    public FitKey(String condition, String response, List<String> inputs, int k, Metric metric,
             Weighting weighting, Scaling scaling, Band band) {
         this(condition, response, inputs, k, metric, weighting, scaling, band, EstimateKind.MEAN);
     }
 
     /** The same settings with another k; the tuning key ignores k. */
-    public ModelSettings withK(int newK) {
-        return new ModelSettings(condition, response, inputs, newK, metric, weighting, scaling, band, estimate);
+    public FitKey withK(int newK) {
+        return new FitKey(condition, response, inputs, newK, metric, weighting, scaling, band, estimate);
     }
 }

@@ -7,7 +7,7 @@ package nearfit.tui;
  * @param width  terminal columns
  * @param height terminal rows
  */
-public record Layout(int width, int height) {
+public record ScreenRegions(int width, int height) {
     /** Fewest columns for the full screen; narrower shows a message. */
     public static final int MIN_WIDTH = 60;
     /** Fewest rows for the full screen. */
