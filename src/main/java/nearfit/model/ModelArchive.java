@@ -212,7 +212,7 @@ public final class ModelArchive {
         ZipFile zip = null;
         try {
             long fileSize = Files.size(path);
-            zip = new ZipFile(path.toFile(), StandardCharsets.UTF_8);
+            zip = openZip(path);
             Opened opened = new Opened(name, zip, fileSize);
             opened.readManifest();
             return opened;
@@ -221,6 +221,31 @@ public final class ModelArchive {
         } catch (IOException | RuntimeException e) {
             closeQuietly(zip);
             throw failure(name, e);
+        }
+    }
+
+    /**
+     * The ZIP reader takes a {@link java.io.File}, whose name is a string in the locale's encoding: under
+     * {@code LC_ALL=C} (cron) a name with other bytes cannot be spelled, though the {@link Path} (made from the
+     * argument's bytes) opens. Such a file is opened through a symbolic link with a plain name in the temporary
+     * folder, removed as soon as the file is open (the reader keeps its descriptor).
+     */
+    private static ZipFile openZip(Path path) throws IOException {
+        java.io.File file = path.toFile();
+        try {
+            if (file.toPath().equals(path)) {
+                return new ZipFile(file, StandardCharsets.UTF_8);
+            }
+        } catch (java.nio.file.InvalidPathException e) {
+            // the name's bytes are not in the locale's encoding: through a link below
+        }
+        Path link = Files.createTempFile("nearfit-model-", ".nfm");
+        try {
+            Files.delete(link);
+            Files.createSymbolicLink(link, path.toAbsolutePath());
+            return new ZipFile(link.toFile(), StandardCharsets.UTF_8);
+        } finally {
+            Files.deleteIfExists(link);
         }
     }
 

@@ -128,7 +128,9 @@ class InputPathsTest {
                 + java + " describe --quiet " + name + " && "
                 + java + " fit --quiet -x wind_ms -y power_kw --k 10 -o c-locale.nfm " + name + " && "
                 + java + " predict --quiet c-locale.nfm " + name + " -o " + predicted + " && "
-                + java + " check --quiet c-locale.nfm " + name).directory(dir.toFile()).start();
+                + java + " check --quiet c-locale.nfm " + name + " && cp c-locale.nfm $'mod\\xc3\\xa8le.nfm' && "
+                + java + " predict --quiet $'mod\\xc3\\xa8le.nfm' " + name + " -o from-renamed.csv")
+                .directory(dir.toFile()).start();
         String out = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
         CliRun.Result r = OutputSafetyTest.finish(p);
         assertEquals(0, r.status(), () -> r + out);
@@ -137,6 +139,8 @@ class InputPathsTest {
         assertTrue(out.contains("fitted k = 10 on 400 reference rows"), out);
         assertTrue(out.contains("rows 400, scored 400,"), out);
         assertEquals(401, Files.readAllLines(dir.resolve("pr\u00e9dit.csv")).size(), "the output has the name given");
+        // A model file whose name the locale cannot spell opens too (through a link with a plain name).
+        assertEquals(Files.readAllLines(dir.resolve("pr\u00e9dit.csv")), Files.readAllLines(dir.resolve("from-renamed.csv")));
     }
 
     /** Before: the gzip path (one thread inflating, one parsing) said "out of memory after loading". */
