@@ -16,6 +16,7 @@ import nearfit.model.ReferenceModel;
 import nearfit.model.SafeOutput;
 import nearfit.model.SourceInfo;
 import nearfit.table.CategoryColumn;
+import nearfit.table.NearfitException;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -58,6 +59,10 @@ final class FitCommand implements Callable<Integer> {
         double z = OptionValues.positiveNumber("--threshold", threshold);
         tuning.validate();
         List<Path> inputs = "-".equals(file) ? List.of() : List.of(ArgumentPath.of(file));
+        if (CommandOutput.isStandardOutput(output)) {
+            throw new NearfitException("-o -: a model file is read back by name (predict, check) and is no stream; "
+                    + "name a file to write");
+        }
         SafeOutput.checkTarget(output, model.force, inputs);
         PrintWriter err = spec.commandLine().getErr();
         ReferenceInput input = ReferenceInput.load(file, columns, model, err);
