@@ -20,10 +20,8 @@ import nearfit.table.NearfitException;
 import nearfit.table.VisibleText;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
 
 /**
  * {@code nearfit check}: scores new readings against a reference; exit 0 when the flagged share is
@@ -81,9 +79,6 @@ final class CheckCommand implements Callable<Integer> {
     @Mixin
     ModelOptions model;
 
-    @Spec
-    CommandSpec spec;
-
     @Override
     public Integer call() {
         double limitFraction = OptionValues.percent("--limit", limit);
@@ -106,7 +101,7 @@ final class CheckCommand implements Callable<Integer> {
         String modelSha = SourceTable.sha256Of(modelFile, modelFile.toString());
         RestoredModel restored = RestoredModel.of(stored, model.over(stored.settings()), model.threads());
         double cut = z == null ? stored.settings().flagThreshold() : z;
-        ScoredRows scored = ScoredRows.open(restored, file, model, cut, spec.commandLine().getErr());
+        ScoredRows scored = ScoredRows.open(restored, file, model, cut, model.err());
         if (!scored.hasResponse()) {
             throw NearfitException.inFile(file, "has no column \"" + columns.response()
                     + "\", the model's response, so nothing can be checked");
@@ -116,7 +111,7 @@ final class CheckCommand implements Callable<Integer> {
         ReferenceReach reach = ReferenceReach.of(restored.engine());
         CheckReport.Tally tally = new CheckReport.Tally(about, g == null ? List.of() : g.labels(), cut, reach,
                 WORST_ROWS);
-        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter out = model.out();
         if (flaggedOutput == null) {
             scored.forEachBlock(tally::add);
             requireRows(tally, scored, leastRows);
@@ -136,7 +131,7 @@ final class CheckCommand implements Callable<Integer> {
         CheckReport report = tally.report(limitFraction, maxOutsideFraction);
         if (CommandOutput.isStandardOutput(flaggedOutput)) {
             // Standard output holds the flagged rows' CSV; the report must not land in the middle of it.
-            out = spec.commandLine().getErr();
+            out = model.err();
         }
         if (json) {
             out.println(report.toJson());

@@ -26,10 +26,8 @@ import nearfit.table.TimeColumn;
 import nearfit.table.VisibleText;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
 
 /**
  * {@code nearfit plot}: the response against the display input with the fitted curve, the band and
@@ -72,9 +70,6 @@ final class PlotCommand implements Callable<Integer> {
     @Mixin
     ModelOptions model;
 
-    @Spec
-    CommandSpec spec;
-
     @Override
     public Integer call() {
         int chosenK = k.value();
@@ -83,17 +78,17 @@ final class PlotCommand implements Callable<Integer> {
         tuning.validate();
         List<Path> inputs = "-".equals(file) ? List.of() : List.of(ArgumentPath.of(file));
         CommandOutput.check(png, model.force, inputs);
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter err = model.err();
         ReferenceInput input = ReferenceInput.load(file, columns, model, err);
         Scene scene = scene(input, tuning.fit(input.data(), model.settings(1, ModelSettings.DEFAULT_FLAG_THRESHOLD),
                 chosenK, model.threads(), err, model.quiet).engine());
         if (png != null) {
             byte[] picture = pngBytes(scene, dims);
-            CommandOutput.bytes(png, model.force, inputs, spec.commandLine().getOut(), out -> out.write(picture));
+            CommandOutput.bytes(png, model.force, inputs, model.out(), out -> out.write(picture));
             return 0;
         }
         ComposedPlot plot = ScatterComposer.compose(scene, dims[0], dims[1], ascii ? CanvasKind.ASCII : CanvasKind.BRAILLE);
-        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter out = model.out();
         // Escape codes only for a terminal; a pipe or a file gets plain text.
         out.print(System.console() != null ? TextRenderer.ansi(plot.grid(), Palette.night())
                 : TextRenderer.plain(plot.grid()));
@@ -140,7 +135,7 @@ final class PlotCommand implements Callable<Integer> {
             b.band(curve.x(), curve.estimates().bandLow(), curve.estimates().bandHigh(), Scene.BandStyle.SHADED);
         }
         if (data.size() > engine.settings().k() + 1) {
-            FlagResult flags = Flags.leaveOneOut(engine, TerminalProgress.of(spec.commandLine().getErr(),
+            FlagResult flags = Flags.leaveOneOut(engine, TerminalProgress.of(model.err(),
                     "flags", model.quiet));
             b.flags(flaggedOf(x, flags), flaggedOf(data.response(), flags));
         }

@@ -11,10 +11,8 @@ import nearfit.model.ReferenceModel;
 import nearfit.model.RestoredModel;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
 
 /** {@code nearfit predict}: the model's fit and band at every row of a file, as CSV. */
 @Command(name = "predict", mixinStandardHelpOptions = true, sortOptions = false,
@@ -39,9 +37,6 @@ final class PredictCommand implements Callable<Integer> {
     @Mixin
     ModelOptions model;
 
-    @Spec
-    CommandSpec spec;
-
     @Override
     public Integer call() {
         model.validate();
@@ -52,12 +47,12 @@ final class PredictCommand implements Callable<Integer> {
         CommandOutput.check(output, model.force, inputs);
         ReferenceModel stored = ModelFile.read(modelFile);
         RestoredModel restored = RestoredModel.of(stored, model.over(stored.settings()), model.threads());
-        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter out = model.out();
         if (loo) {
             LeaveOneOutCsv.write(restored, file, output, model.force, inputs, out);
         } else {
             ScoredRows scored = ScoredRows.open(restored, file, model, restored.settings().flagThreshold(),
-                    spec.commandLine().getErr());
+                    model.err());
             PredictionCsv.write(scored, restored.stored().columns().response(),
                     restored.stored().columns().responseLabels(), output, model.force, inputs, out, (b, i) -> true);
         }
