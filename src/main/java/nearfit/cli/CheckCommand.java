@@ -14,17 +14,14 @@ import nearfit.model.ModelFile;
 import nearfit.model.ModelSettings;
 import nearfit.model.ReferenceModel;
 import nearfit.model.RestoredModel;
-import nearfit.model.SafeOutput;
 import nearfit.model.TuningSummary;
 import nearfit.table.CategoryColumn;
 import nearfit.table.NearfitException;
 import nearfit.table.VisibleText;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
 
 /**
  * {@code nearfit check}: scores new readings against a reference; exit 0 when the flagged share is
@@ -73,16 +70,14 @@ final class CheckCommand implements Callable<Integer> {
     String format;
 
     @Option(names = "-o", paramLabel = "FLAGGED",
-            description = "Also write the flagged rows here as CSV (line, time, group, inputs, response, fit, band, "
-                    + "resid, z). An existing file is kept unless --force is given: add --force when a cron job "
-                    + "writes the same file every run.")
+            description = "Also write the flagged rows here as CSV (line, time, group, inputs, response, fit, band_lo, "
+                    + "band_hi, resid, z); - writes them to standard output and the report to standard error. An "
+                    + "existing file is kept unless --force is given: add --force when a cron job writes the same "
+                    + "file every run.")
     Path flaggedOutput;
 
     @Mixin
     ModelOptions model;
-
-    @Spec
-    CommandSpec spec;
 
     @Override
     public Integer call() {
@@ -96,9 +91,7 @@ final class CheckCommand implements Callable<Integer> {
         if (!"-".equals(file)) {
             inputs.add(ArgumentPath.of(file));
         }
-        if (flaggedOutput != null) {
-            SafeOutput.checkTarget(flaggedOutput, model.force, inputs);
-        }
+        CommandOutput.check(flaggedOutput, model.force, inputs);
         ReferenceModel stored = ModelFile.read(modelFile);
         ModelColumns columns = stored.columns();
         if (columns.categoryResponse()) {
@@ -107,35 +100,39 @@ final class CheckCommand implements Callable<Integer> {
         }
         String modelSha = SourceTable.sha256Of(modelFile, modelFile.toString());
         RestoredModel restored = RestoredModel.of(stored, model.over(stored.settings()), model.threads());
-        ScoredRows scored = ScoredRows.open(restored, file, model, spec.commandLine().getErr());
+        double cut = z == null ? stored.settings().flagThreshold() : z;
+        ScoredRows scored = ScoredRows.open(restored, file, model, cut, model.err());
         if (!scored.hasResponse()) {
             throw NearfitException.inFile(file, "has no column \"" + columns.response()
                     + "\", the model's response, so nothing can be checked");
         }
-        double cut = z == null ? stored.settings().flagThreshold() : z;
         CategoryColumn g = scored.group();
         CheckReport.About about = about(stored, restored, modelSha, scored, cut);
         ReferenceReach reach = ReferenceReach.of(restored.engine());
         CheckReport.Tally tally = new CheckReport.Tally(about, g == null ? List.of() : g.labels(), cut, reach,
                 WORST_ROWS);
+        PrintWriter out = model.out();
         if (flaggedOutput == null) {
             scored.forEachBlock(tally::add);
             requireRows(tally, scored, leastRows);
         } else {
             // Flagged rows are written as they are found, so none is kept in memory; too few rows scored
             // fails inside the write, so no file is left behind.
-            PredictionCsv.write(flaggedOutput, model.force, inputs, null, w -> {
+            CommandOutput.text(flaggedOutput, model.force, inputs, out, w -> {
                 PredictionCsv csv = new PredictionCsv(w, scored, columns.response(), List.of());
                 scored.forEachBlock(b -> {
                     tally.add(b);
-                    csv.rows(b, (block, i) -> Math.abs(block.z()[i]) > cut);
+                    csv.rows(b, (block, i) -> block.scores().flagged()[i]);
                 });
                 requireRows(tally, scored, leastRows);
                 csv.flush();
             });
         }
         CheckReport report = tally.report(limitFraction, maxOutsideFraction);
-        PrintWriter out = spec.commandLine().getOut();
+        if (CommandOutput.isStandardOutput(flaggedOutput)) {
+            // Standard output holds the flagged rows' CSV; the report must not land in the middle of it.
+            out = model.err();
+        }
         if (json) {
             out.println(report.toJson());
             out.flush();

@@ -184,7 +184,7 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
                     continue;
                 }
                 scored++;
-                boolean flag = Math.abs(z[i]) > threshold;
+                boolean flag = b.scores().flagged()[i];
                 boolean out = beyond(x, width[i], i);
                 if (group >= 0) {
                     gScored[group]++;

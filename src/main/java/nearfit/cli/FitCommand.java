@@ -16,12 +16,11 @@ import nearfit.model.ReferenceModel;
 import nearfit.model.SafeOutput;
 import nearfit.model.SourceInfo;
 import nearfit.table.CategoryColumn;
+import nearfit.table.NearfitException;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
 
 /** {@code nearfit fit}: fits a reference on a file's rows and saves it as a model file. */
 @Command(name = "fit", mixinStandardHelpOptions = true, sortOptions = false,
@@ -49,17 +48,18 @@ final class FitCommand implements Callable<Integer> {
     @Mixin
     ModelOptions model;
 
-    @Spec
-    CommandSpec spec;
-
     @Override
     public Integer call() {
         int chosenK = k.value();
         double z = OptionValues.positiveNumber("--threshold", threshold);
         tuning.validate();
         List<Path> inputs = "-".equals(file) ? List.of() : List.of(ArgumentPath.of(file));
+        if (CommandOutput.isStandardOutput(output)) {
+            throw new NearfitException("-o -: a model file is read back by name (predict, check) and is no stream; "
+                    + "name a file to write");
+        }
         SafeOutput.checkTarget(output, model.force, inputs);
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter err = model.err();
         ReferenceInput input = ReferenceInput.load(file, columns, model, err);
         Source source = new Source(input, model.where);
         input = null; // the table goes: at 10M rows it holds more than the fit still needs
@@ -81,9 +81,9 @@ final class FitCommand implements Callable<Integer> {
             saved = saved.withTuning(saved.tuning().withScheme(tuned.scheme()));
         }
         ModelFile.write(saved, output, model.force, inputs);
-        spec.commandLine().getOut().printf("fitted k = %d on %s; wrote %s%n", saved.settings().k(),
+        model.out().printf("fitted k = %d on %s; wrote %s%n", saved.settings().k(),
                 nearfit.table.VisibleText.of(source.described), nearfit.table.VisibleText.of(output.toString()));
-        spec.commandLine().getOut().flush();
+        model.out().flush();
         return 0;
     }
 

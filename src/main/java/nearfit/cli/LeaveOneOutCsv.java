@@ -1,25 +1,18 @@
 package nearfit.cli;
 
-import java.io.BufferedWriter;
 import java.io.IOException;
-import java.io.OutputStreamWriter;
 import java.io.Writer;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.Collection;
-import java.util.List;
 
 import it.unimi.dsi.fastutil.ints.IntArrays;
 import nearfit.knn.FlagResult;
 import nearfit.knn.Flags;
-import nearfit.model.CsvCells;
 import nearfit.model.ModelColumns;
 import nearfit.model.ReferenceRows;
+import nearfit.model.ResultCsv;
 import nearfit.model.RestoredModel;
-import nearfit.model.SafeOutput;
 import nearfit.table.NearfitException;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVPrinter;
 
 /**
  * {@code predict --loo}: the leave-one-out fit, residual and z of every reference row, from the rows
@@ -31,26 +24,14 @@ final class LeaveOneOutCsv {
     }
 
     static void write(RestoredModel model, String file, Path target, boolean force, Collection<Path> inputs,
-                      Writer stdout) {
+                      java.io.PrintWriter stdout) {
         requireReferenceFile(model, file);
         if (model.stored().columns().categoryResponse()) {
             throw new NearfitException("--loo: needs a number response; " + model.stored().columns().response()
                     + " is a category");
         }
         FlagResult flags = Flags.leaveOneOut(model.engine(), nearfit.knn.Progress.NONE);
-        if (target == null) {
-            try {
-                print(model, flags, stdout);
-            } catch (IOException e) {
-                throw new NearfitException("cannot write to standard output: " + e.getMessage());
-            }
-            return;
-        }
-        SafeOutput.write(target, force, inputs, out -> {
-            Writer w = new BufferedWriter(new OutputStreamWriter(out, StandardCharsets.UTF_8), 1 << 16);
-            print(model, flags, w);
-            w.flush();
-        });
+        CommandOutput.text(target, force, inputs, stdout, w -> print(model, flags, w));
     }
 
     private static void requireReferenceFile(RestoredModel model, String file) {
@@ -75,35 +56,22 @@ final class LeaveOneOutCsv {
             order[i] = i;
         }
         IntArrays.quickSort(order, (a, b) -> Long.compare(lines[positions[a]], lines[positions[b]]));
-        CSVPrinter csv = new CSVPrinter(w, CSVFormat.RFC4180.builder().setRecordSeparator('\n').get());
-        csv.print("line");
-        if (columns.group() != null) {
-            csv.print(CsvCells.text(columns.group()));
-        }
-        for (String input : columns.inputs()) {
-            csv.print(CsvCells.text(input));
-        }
-        for (String name : List.of(CsvCells.text(columns.response()), "fit", "band_lo", "band_hi", "resid", "z")) {
-            csv.print(name);
-        }
-        csv.println();
+        ResultCsv csv = new ResultCsv(w);
+        csv.header(ResultCsv.rowColumns(null, columns.group(), columns.inputs(), columns.response(), false));
         for (int i : order) {
             int p = positions[i];
-            csv.print(Long.toString(lines[p]));
+            csv.whole(lines[p]);
             if (columns.group() != null) {
                 int g = rows.groupCodes()[p];
-                csv.print(g < 0 ? "" : CsvCells.text(columns.groupLabels().get(g)));
+                csv.text(g < 0 ? "" : columns.groupLabels().get(g));
             }
             for (double[] input : rows.inputs()) {
-                csv.print(CsvCells.number(input[p]));
+                csv.number(input[p]);
             }
-            csv.print(CsvCells.number(rows.response()[p]));
-            csv.print(CsvCells.number(flags.looFit()[i]));
-            csv.print("");
-            csv.print("");
-            csv.print(CsvCells.number(flags.residual()[i]));
-            csv.print(CsvCells.number(flags.z()[i]));
-            csv.println();
+            // Leave-one-out gives no band: its cells stay empty, so the columns are predict's.
+            csv.number(rows.response()[p]).number(flags.looFit()[i]).empty().empty()
+                    .number(flags.residual()[i]).number(flags.z()[i]);
+            csv.endRow();
         }
         csv.flush();
     }

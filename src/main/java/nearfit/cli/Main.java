@@ -60,7 +60,7 @@ public final class Main implements Runnable {
      */
     static int runOnStandardStreams(String[] args) {
         StandardOutput stdout = new StandardOutput(new java.io.FileOutputStream(java.io.FileDescriptor.out));
-        PrintWriter out = new PrintWriter(new OutputStreamWriter(stdout, StandardCharsets.UTF_8), true);
+        PrintWriter out = new StandardOutputWriter(stdout);
         PrintWriter err = new PrintWriter(new OutputStreamWriter(System.err, StandardCharsets.UTF_8), true);
         int status = run(args, out, err);
         out.flush();

@@ -1,7 +1,11 @@
 package nearfit.cli;
 
+import java.io.PrintWriter;
+
 import nearfit.model.ModelSettings;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
 
 /**
  * The options shared by the commands that fit or score a reference (a picocli mixin). Values are kept
@@ -53,6 +57,20 @@ final class ModelOptions {
 
     @Option(names = "--force", description = "Replace output files that exist already.")
     boolean force;
+
+    /** The command this mixin belongs to, for its streams. */
+    @Spec(Spec.Target.MIXEE)
+    CommandSpec command;
+
+    /** Standard output: the results (CSV, reports, text plots, PNG bytes with {@code -}). */
+    PrintWriter out() {
+        return command.commandLine().getOut();
+    }
+
+    /** Standard error: progress, notes and warnings, whatever goes to standard output. */
+    PrintWriter err() {
+        return command.commandLine().getErr();
+    }
 
     String metric() {
         return word("--metric", metric, "euclidean", ModelSettings.METRICS);

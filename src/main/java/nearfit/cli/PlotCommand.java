@@ -2,7 +2,6 @@ package nearfit.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.Arrays;
 import java.util.List;
 import java.util.concurrent.Callable;
 
@@ -14,7 +13,6 @@ import nearfit.knn.Flags;
 import nearfit.knn.KnnModel;
 import nearfit.knn.ReferenceData;
 import nearfit.model.ModelSettings;
-import nearfit.model.SafeOutput;
 import nearfit.plot.CanvasKind;
 import nearfit.plot.ComposedPlot;
 import nearfit.plot.Palette;
@@ -23,15 +21,13 @@ import nearfit.plot.ScatterComposer;
 import nearfit.plot.Scene;
 import nearfit.plot.TextRenderer;
 import nearfit.table.NearfitException;
-import nearfit.table.Quantiles;
+import nearfit.table.SortedValues;
 import nearfit.table.TimeColumn;
 import nearfit.table.VisibleText;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
 
 /**
  * {@code nearfit plot}: the response against the display input with the fitted curve, the band and
@@ -64,7 +60,8 @@ final class PlotCommand implements Callable<Integer> {
     @Option(names = "--ascii", description = "ASCII characters instead of braille.")
     boolean ascii;
 
-    @Option(names = "--png", paramLabel = "OUT.png", description = "Write a PNG picture instead of text.")
+    @Option(names = "--png", paramLabel = "OUT.png", description = "Write a PNG picture instead of text "
+            + "(- writes it to standard output).")
     Path png;
 
     @Mixin
@@ -73,9 +70,6 @@ final class PlotCommand implements Callable<Integer> {
     @Mixin
     ModelOptions model;
 
-    @Spec
-    CommandSpec spec;
-
     @Override
     public Integer call() {
         int chosenK = k.value();
@@ -83,20 +77,18 @@ final class PlotCommand implements Callable<Integer> {
                 : png == null ? OptionValues.size("--size", size, 20, 1000) : OptionValues.size("--size", size, 120, 8000);
         tuning.validate();
         List<Path> inputs = "-".equals(file) ? List.of() : List.of(ArgumentPath.of(file));
-        if (png != null) {
-            SafeOutput.checkTarget(png, model.force, inputs);
-        }
-        PrintWriter err = spec.commandLine().getErr();
+        CommandOutput.check(png, model.force, inputs);
+        PrintWriter err = model.err();
         ReferenceInput input = ReferenceInput.load(file, columns, model, err);
         Scene scene = scene(input, tuning.fit(input.data(), model.settings(1, ModelSettings.DEFAULT_FLAG_THRESHOLD),
                 chosenK, model.threads(), err, model.quiet).engine());
         if (png != null) {
             byte[] picture = pngBytes(scene, dims);
-            SafeOutput.write(png, model.force, inputs, out -> out.write(picture));
+            CommandOutput.bytes(png, model.force, inputs, model.out(), out -> out.write(picture));
             return 0;
         }
         ComposedPlot plot = ScatterComposer.compose(scene, dims[0], dims[1], ascii ? CanvasKind.ASCII : CanvasKind.BRAILLE);
-        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter out = model.out();
         // Escape codes only for a terminal; a pipe or a file gets plain text.
         out.print(System.console() != null ? TextRenderer.ansi(plot.grid(), Palette.night())
                 : TextRenderer.plain(plot.grid()));
@@ -143,7 +135,7 @@ final class PlotCommand implements Callable<Integer> {
             b.band(curve.x(), curve.estimates().bandLow(), curve.estimates().bandHigh(), Scene.BandStyle.SHADED);
         }
         if (data.size() > engine.settings().k() + 1) {
-            FlagResult flags = Flags.leaveOneOut(engine, TerminalProgress.of(spec.commandLine().getErr(),
+            FlagResult flags = Flags.leaveOneOut(engine, TerminalProgress.of(model.err(),
                     "flags", model.quiet));
             b.flags(flaggedOf(x, flags), flaggedOf(data.response(), flags));
         }
@@ -154,9 +146,7 @@ final class PlotCommand implements Callable<Integer> {
     private static double[] heldAtMedians(ReferenceData data) {
         double[] held = new double[data.dimensions()];
         for (int j = 1; j < held.length; j++) {
-            double[] sorted = data.input(j).clone();
-            Arrays.sort(sorted);
-            held[j] = Quantiles.type7(sorted, sorted.length, 0.5);
+            held[j] = SortedValues.of(data.input(j)).median();
         }
         return held;
     }

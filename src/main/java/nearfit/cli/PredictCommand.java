@@ -9,13 +9,10 @@ import java.util.concurrent.Callable;
 import nearfit.model.ModelFile;
 import nearfit.model.ReferenceModel;
 import nearfit.model.RestoredModel;
-import nearfit.model.SafeOutput;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
 
 /** {@code nearfit predict}: the model's fit and band at every row of a file, as CSV. */
 @Command(name = "predict", mixinStandardHelpOptions = true, sortOptions = false,
@@ -29,7 +26,8 @@ final class PredictCommand implements Callable<Integer> {
     @Parameters(index = "1", paramLabel = "FILE", description = "CSV file, plain or gzip; - for standard input.")
     String file;
 
-    @Option(names = "-o", paramLabel = "OUT", description = "Write the CSV here instead of standard output.")
+    @Option(names = "-o", paramLabel = "OUT", description = "Write the CSV here instead of standard output "
+            + "(- is standard output).")
     Path output;
 
     @Option(names = "--loo", description = "FILE is the model's own reference file: write leave-one-out "
@@ -39,9 +37,6 @@ final class PredictCommand implements Callable<Integer> {
     @Mixin
     ModelOptions model;
 
-    @Spec
-    CommandSpec spec;
-
     @Override
     public Integer call() {
         model.validate();
@@ -49,16 +44,15 @@ final class PredictCommand implements Callable<Integer> {
         if (!"-".equals(file)) {
             inputs.add(ArgumentPath.of(file));
         }
-        if (output != null) {
-            SafeOutput.checkTarget(output, model.force, inputs);
-        }
+        CommandOutput.check(output, model.force, inputs);
         ReferenceModel stored = ModelFile.read(modelFile);
         RestoredModel restored = RestoredModel.of(stored, model.over(stored.settings()), model.threads());
-        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter out = model.out();
         if (loo) {
             LeaveOneOutCsv.write(restored, file, output, model.force, inputs, out);
         } else {
-            ScoredRows scored = ScoredRows.open(restored, file, model, spec.commandLine().getErr());
+            ScoredRows scored = ScoredRows.open(restored, file, model, restored.settings().flagThreshold(),
+                    model.err());
             PredictionCsv.write(scored, restored.stored().columns().response(),
                     restored.stored().columns().responseLabels(), output, model.force, inputs, out, (b, i) -> true);
         }

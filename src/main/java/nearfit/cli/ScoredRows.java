@@ -7,6 +7,9 @@ import nearfit.knn.ClassVotes;
 import nearfit.knn.Estimates;
 import nearfit.knn.KnnModel;
 import nearfit.knn.Progress;
+import nearfit.knn.ScoredBlock;
+import nearfit.knn.Scoring;
+import nearfit.knn.ZBasis;
 import nearfit.model.ModelColumns;
 import nearfit.model.ReferenceModel;
 import nearfit.model.RestoredModel;
@@ -19,21 +22,17 @@ import nearfit.table.TimeColumn;
 
 /**
  * New rows scored against a model block by block: the rows of a file that meet the row condition,
- * the engine's estimates at them, and where the file has the response, residuals and z.
+ * and the core's scores at them ({@link Scoring}: fit, band, and where the file has the response,
+ * residual, z and flag; class votes for a category response).
  *
  * <p>Scoring runs on blocks of at most {@code blockRows} rows, so what is held per row is only the
  * loaded table (the model's columns and line numbers); a block's inputs, estimates and z are
  * dropped once its consumer returns. At 10M rows the estimates of every row at once were 440 MB.
  * Each estimate depends only on its point, so the block size never changes a result.
  *
- * <p>z of a new row depends on the model's z scale. {@code local} (the default):
- * {@code resid / s} with s the weighted SD of the k neighbours' responses at the row, so a row is
- * judged by the spread of the reference where it lies (power residuals are near zero below cut-in
- * and at rated power, and large in between). {@code reference}: {@code (resid - median) / scale}
- * with the median and 1.4826·MAD of the reference's leave-one-out residuals stored in the model (the
- * modified z-score of Iglewicz and Hoaglin 1993, on the reference's scale). A zero scale gives z = 0
- * for a zero (centred) residual and an infinite z otherwise, as the engine's flags do. Rows with a
- * missing input or response get NaN.
+ * <p>z follows the model's z scale ({@code local}: the neighbours' spread at the row;
+ * {@code reference}: the reference's residual median and scale stored in the model), computed by the
+ * core; this class only copies the rows out of the table and hands them over.
  */
 final class ScoredRows {
     /**
@@ -60,22 +59,31 @@ final class ScoredRows {
      * @param x           the inputs' values, one array per input, NaN when missing (times in epoch ms)
      * @param response    the response values, or {@code null} (no response column, or a category response)
      * @param actualClass the file's class mapped to the model's codes (-1 missing or unknown), or {@code null}
-     * @param estimates   fit and band (number response), or {@code null}
+     * @param scores      fit, band, residual, z and flag (number response), or {@code null}
      * @param votes       class votes (category response), or {@code null}
-     * @param z           z at each row, or {@code null} without a number response in the file
      */
     record Block(int from, long[] lines, double[] times, int[] groups, double[][] x, double[] response,
-                 int[] actualClass, Estimates estimates, ClassVotes votes, double[] z) {
+                 int[] actualClass, ScoredBlock scores, ClassVotes votes) {
         /** Rows in the block. */
         int size() {
             return lines.length;
+        }
+
+        /** Fit and band (number response), or {@code null}. */
+        Estimates estimates() {
+            return scores == null ? null : scores.estimates();
+        }
+
+        /** z at each row, or {@code null} without a number response in the file. */
+        double[] z() {
+            return scores == null || response == null ? null : scores.z();
         }
     }
 
     private final KnnModel engine;
     private final boolean category;
-    private final boolean localZ;
-    private final ReferenceModel.ResidualScale residualScale;
+    private final ZBasis zBasis;
+    private final double threshold;
     private final Table table;
     /** The rows meeting the row condition, or {@code null} for every row (saving 4 bytes a row). */
     private final RowSet rows;
@@ -93,12 +101,15 @@ final class ScoredRows {
     private final boolean quiet;
     private final int blockRows;
 
-    private ScoredRows(RestoredModel model, SourceTable source, ModelOptions options, PrintWriter err) {
+    private ScoredRows(RestoredModel model, SourceTable source, ModelOptions options, double threshold,
+                       PrintWriter err) {
         ModelColumns columns = model.stored().columns();
         this.engine = model.engine();
         this.category = columns.categoryResponse();
-        this.localZ = "local".equals(model.settings().zScale());
-        this.residualScale = model.stored().residualScale();
+        ReferenceModel.ResidualScale scale = model.stored().residualScale();
+        this.zBasis = "local".equals(model.settings().zScale()) ? new ZBasis.LocalSpread()
+                : new ZBasis.ReferenceResiduals(scale.median(), scale.scale());
+        this.threshold = threshold;
         this.table = source.table();
         boolean everyRow = options.where == null || options.where.isBlank();
         this.rows = everyRow ? null : source.rows(options.where);
@@ -125,14 +136,16 @@ final class ScoredRows {
 
     /**
      * Loads {@code file}, keeping only the model's columns and those of --where (a file of new readings
-     * may lack the response or the group); scoring starts with {@link #forEachBlock}.
+     * may lack the response or the group); scoring starts with {@link #forEachBlock}. Rows are flagged
+     * when |z| is above {@code threshold}.
      */
-    static ScoredRows open(RestoredModel model, String file, ModelOptions options, PrintWriter err) {
+    static ScoredRows open(RestoredModel model, String file, ModelOptions options, double threshold,
+                           PrintWriter err) {
         ModelColumns columns = model.stored().columns();
         ColumnRequest request = ColumnRequest.NONE.require("model input", columns.inputs())
                 .allow(columns.response(), columns.group()).where(options.where);
         SourceTable source = SourceTable.load(file, request, true, options.threads(), options.quiet, err);
-        return new ScoredRows(model, source, options, err);
+        return new ScoredRows(model, source, options, threshold, err);
     }
 
     /** Rows to score (those meeting the row condition). */
@@ -202,13 +215,11 @@ final class ScoredRows {
         Progress offset = blockProgress(progress, from);
         if (category) {
             return new Block(from, lines, times, groups, x, null, actualClasses(from, size), null,
-                    engine.voteAll(x, offset), null);
+                    engine.voteAll(x, offset));
         }
         double[] y = response == null ? null : values(response, from, size);
-        Estimates est = engine.estimateAll(x, offset);
-        double[] z = y == null ? null : localZ ? localZ(y, est.fit(), est.localSd())
-                : zScores(y, est.fit(), residualScale);
-        return new Block(from, lines, times, groups, x, y, null, est, null, z);
+        return new Block(from, lines, times, groups, x, y, null,
+                Scoring.score(engine, x, y, zBasis, threshold, offset), null);
     }
 
     /** The whole run's progress seen from a block starting at {@code from}. */
@@ -260,36 +271,6 @@ final class ScoredRows {
             map[c] = modelLabels.indexOf(labels.get(c));
         }
         return map;
-    }
-
-    /** z of each residual on the stored scale; NaN where the response or the fit is missing. */
-    static double[] zScores(double[] y, double[] fit, ReferenceModel.ResidualScale scale) {
-        double[] z = new double[y.length];
-        double median = scale.median();
-        double s = scale.scale();
-        for (int i = 0; i < y.length; i++) {
-            z[i] = scaled(y[i] - fit[i] - median, s);
-        }
-        return z;
-    }
-
-    /** z of each residual on the neighbours' SD at its row; NaN where the response or the fit is missing. */
-    static double[] localZ(double[] y, double[] fit, double[] localSd) {
-        double[] z = new double[y.length];
-        for (int i = 0; i < y.length; i++) {
-            z[i] = scaled(y[i] - fit[i], localSd[i]);
-        }
-        return z;
-    }
-
-    private static double scaled(double e, double s) {
-        if (Double.isNaN(e)) {
-            return Double.NaN;
-        }
-        if (s > 0) {
-            return e / s;
-        }
-        return e == 0 ? 0 : Math.copySign(Double.POSITIVE_INFINITY, e);
     }
 
     /** The first time column of the table (file order), or {@code null}. */

@@ -9,10 +9,8 @@ import nearfit.model.ReferenceCapture;
 import nearfit.model.TuningSummary;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
 
 /** {@code nearfit tune}: RMSE and MAE with standard errors for every k, the lowest-RMSE k and the one-SE k. */
 @Command(name = "tune", mixinStandardHelpOptions = true, sortOptions = false,
@@ -35,21 +33,18 @@ final class TuneCommand implements Callable<Integer> {
     @Mixin
     ModelOptions model;
 
-    @Spec
-    CommandSpec spec;
-
     @Override
     public Integer call() {
         TuneReport.Format f = TuneReport.Format.valueOf(OptionValues.oneOf("--format", format,
                 java.util.List.of("table", "csv", "json")).toUpperCase(java.util.Locale.ROOT));
         tuning.validate();
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter err = model.err();
         ReferenceInput input = ReferenceInput.load(file, columns, model, err);
         KnnModel engine = KnnModel.fit(input.data(), EngineSettings.of(model.settings(1,
                 nearfit.model.ModelSettings.DEFAULT_FLAG_THRESHOLD), model.threads()));
         TuningOptions.Result r = tuning.run(engine, TerminalProgress.of(err, "tuning", model.quiet));
         TuningSummary summary = ReferenceCapture.summary(r.table(), r.sampled());
-        TuneReport.write(summary, f, spec.commandLine().getOut());
+        TuneReport.write(summary, f, model.out());
         return 0;
     }
 }

@@ -4,11 +4,9 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.util.Locale;
 
-import nearfit.model.CsvCells;
 import nearfit.model.Json;
+import nearfit.model.ResultCsv;
 import nearfit.model.TuningSummary;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVPrinter;
 
 /** Writes a tuning table as an aligned text table, CSV or JSON. */
 final class TuneReport {
@@ -39,16 +37,14 @@ final class TuneReport {
 
     private static void writeCsv(TuningSummary t, PrintWriter out) {
         try {
-            CSVPrinter csv = new CSVPrinter(out, CSVFormat.RFC4180);
-            csv.printRecord((Object[]) header(t));
-            String[] cells = new String[header(t).length];
+            ResultCsv csv = new ResultCsv(out);
+            csv.header(java.util.List.of(header(t)));
             for (int i = 0; i < t.k().length; i++) {
-                cells[0] = Integer.toString(t.k()[i]);
-                double[] v = row(t, i);
-                for (int j = 0; j < v.length; j++) {
-                    cells[j + 1] = CsvCells.number(v[j]);
+                csv.whole(t.k()[i]);
+                for (double v : row(t, i)) {
+                    csv.number(v);
                 }
-                csv.printRecord((Object[]) cells);
+                csv.endRow();
             }
             csv.flush();
         } catch (IOException e) {

@@ -8,6 +8,9 @@ import nearfit.table.NearfitException;
  * {@code (e - median(e)) / (1.4826 MAD(e))} (their 0.6745 is 1/1.4826); the local scales divide e
  * by the neighbours' weighted SD or 1.4826 times their weighted MAD. A zero scale gives z = 0 for a
  * zero residual and an infinite z otherwise (flagged), never NaN.
+ *
+ * <p>{@link #zScore} and {@link #isFlagged} are the one rule for z and flags: leave-one-out here and
+ * new rows in {@link Scoring} both call them.
  */
 public final class Flags {
     private Flags() {
@@ -53,17 +56,30 @@ public final class Flags {
         boolean[] flagged = new boolean[n];
         int count = 0;
         for (int i = 0; i < n; i++) {
-            z[i] = scale == FlagScale.GLOBAL_MAD ? ratio(res[i] - median, mad) : ratio(res[i], local[i]);
-            flagged[i] = Math.abs(z[i]) > s.flagThreshold();
+            z[i] = scale == FlagScale.GLOBAL_MAD ? zScore(res[i] - median, mad) : zScore(res[i], local[i]);
+            flagged[i] = isFlagged(z[i], s.flagThreshold());
             count += flagged[i] ? 1 : 0;
         }
         return new FlagResult(data.rowIds(), fit, res, z, flagged, count, median, mad, scale, s.flagThreshold());
     }
 
-    private static double ratio(double e, double scale) {
+    /**
+     * z of a (centred) residual {@code e} on {@code scale}: {@code e / scale} for a positive scale; for a
+     * zero (or missing) scale, 0 when e is 0 and an infinity of e's sign otherwise, never NaN. A missing
+     * residual (NaN: no response or no fit) gives NaN, which {@link #isFlagged} never flags.
+     */
+    public static double zScore(double e, double scale) {
+        if (Double.isNaN(e)) {
+            return Double.NaN;
+        }
         if (scale > 0) {
             return e / scale;
         }
         return e == 0 ? 0 : Math.copySign(Double.POSITIVE_INFINITY, e);
+    }
+
+    /** Whether a row with this z is flagged: |z| above the threshold (NaN never is). */
+    public static boolean isFlagged(double z, double threshold) {
+        return Math.abs(z) > threshold;
     }
 }

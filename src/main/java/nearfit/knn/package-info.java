@@ -8,7 +8,8 @@
  * double[] per input + response + row ids ─▶ {@link nearfit.knn.ReferenceData} (NaN rows left out, counted; canonical order)
  *   ─▶ {@link nearfit.knn.InputTransform} (z / robust / range / none; whitening for Mahalanobis)
  *   ─▶ packed coordinates ─▶ {@link nearfit.knn.NeighborIndex} (sorted for 1 input, k-d tree for 2..16, else brute force)
- *   ─▶ {@link nearfit.knn.KnnModel}: estimates, curves, votes ─▶ {@link nearfit.knn.Tuning}, {@link nearfit.knn.Flags}
+ *   ─▶ {@link nearfit.knn.KnnModel}: estimates, curves, votes ─▶ {@link nearfit.knn.Tuning}, {@link nearfit.knn.Flags},
+ *      {@link nearfit.knn.Scoring} (new rows)
  * </pre>
  *
  * <h2>Usage</h2>
@@ -28,6 +29,8 @@
  * KnnModel tuned = model.withSettings(settings.withK(t.oneSeK()));  // keeps the index
  *
  * FlagResult flags = Flags.leaveOneOut(tuned, progress);      // per row: fit, residual, z, flagged
+ * ScoredBlock s = Scoring.score(tuned, newColumns, newResponse,   // new rows, by the same z and flag rule
+ *         new ZBasis.LocalSpread(), 3.5, progress);            // or new ZBasis.ReferenceResiduals(median, scale)
  *
  * // saving: settings(), transform() (center, scale, whitening), data() (inputs, response, row ids);
  * // loading: KnnModel.restore(ReferenceData.numeric(...stored rows...), settings, transform)

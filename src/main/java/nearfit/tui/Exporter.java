@@ -11,13 +11,14 @@ import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
-import nearfit.model.CsvCells;
+import nearfit.model.ResultCsv;
 import nearfit.model.SafeOutput;
 import nearfit.table.NearfitException;
 
 /**
  * Writes the export menu's files through {@link SafeOutput}: atomically, never over the input, and over an
- * existing file only once the user confirmed. CSV cells go through {@link CsvCells}.
+ * existing file only once the user confirmed. CSV files go through {@link ResultCsv}, the tool's one CSV writer, so
+ * they have the columns of {@code predict}.
  */
 final class Exporter {
     /** PNG size when the file name does not say, in pixels. */
@@ -66,7 +67,7 @@ final class Exporter {
         PlotScene scene = ScreenPainter.scene(s, r, in, new Look(false, false));
         return switch (kind) {
             case CURVE_CSV -> out -> curveCsv(s, require(r.curve(), "the curve"), out);
-            case FLAGS_CSV -> out -> flagsCsv(s, require(r.flags(), "the flagged rows"), out);
+            case FLAGS_CSV -> out -> flagsCsv(s, timeInputs(s), require(r.flags(), "the flagged rows"), out);
             case PNG -> out -> workbench.writePng(scene, w, h, out);
             case TEXT -> out -> text(workbench.plot(scene, TEXT_WIDTH, TEXT_HEIGHT).plot(), out);
         };
@@ -80,34 +81,62 @@ final class Exporter {
     }
 
     static void curveCsv(ViewState s, CurveResult c, OutputStream out) throws IOException {
-        Writer w = new OutputStreamWriter(out, StandardCharsets.UTF_8);
-        w.write(cell(s.displayInput()) + ",fit,band_low,band_high,window_width,neighbours\r\n");
+        ResultCsv csv = ResultCsv.on(out);
+        csv.header(ResultCsv.curveColumns(s.displayInput()));
         for (int i = 0; i < c.size(); i++) {
-            w.write(CsvCells.number(c.x()[i]) + "," + CsvCells.number(c.fit()[i]) + ","
-                    + CsvCells.number(c.bandLow()[i]) + "," + CsvCells.number(c.bandHigh()[i]) + ","
-                    + CsvCells.number(c.width()[i]) + "," + c.neighbours()[i] + "\r\n");
+            csv.number(c.x()[i]).number(c.fit()[i]).number(c.bandLow()[i]).number(c.bandHigh()[i])
+                    .number(c.width()[i]).whole(c.neighbours()[i]);
+            csv.endRow();
         }
-        w.flush();
+        csv.flush();
     }
 
-    static void flagsCsv(ViewState s, FlaggedRows f, OutputStream out) throws IOException {
-        Writer w = new OutputStreamWriter(out, StandardCharsets.UTF_8);
-        StringBuilder head = new StringBuilder("line,time,group");
-        for (String in : s.inputs()) {
-            head.append(',').append(cell(in));
-        }
-        w.write(head.append(',').append(cell(s.response())).append(",fit,residual,z\r\n").toString());
+    /**
+     * The flagged rows with predict's columns: the time column only when there is one and it is not an input,
+     * the group column only when one is chosen, band cells empty (leave-one-out gives no band), times as ISO 8601.
+     */
+    static void flagsCsv(ViewState s, TimeInputs times, FlaggedRows f, OutputStream out) throws IOException {
+        ResultCsv csv = ResultCsv.on(out);
+        String time = times.column() == null || s.inputs().contains(times.column()) ? null : times.column();
+        csv.header(ResultCsv.rowColumns(time, s.groupColumn(), s.inputs(), s.response(), false));
         for (FlaggedRow row : f.rows()) {
-            StringBuilder sb = new StringBuilder().append(row.line()).append(',').append(cell(row.time()))
-                    .append(',').append(cell(row.group()));
-            for (double v : row.inputs()) {
-                sb.append(',').append(CsvCells.number(v));
+            csv.whole(row.line());
+            if (time != null) {
+                csv.text(row.time());
             }
-            sb.append(',').append(CsvCells.number(row.response())).append(',').append(CsvCells.number(row.fit()))
-                    .append(',').append(CsvCells.number(row.residual())).append(',').append(CsvCells.number(row.z()));
-            w.write(sb.append("\r\n").toString());
+            if (s.groupColumn() != null) {
+                csv.text(row.group());
+            }
+            for (int j = 0; j < row.inputs().size(); j++) {
+                double v = row.inputs().get(j);
+                if (times.isTime(j)) {
+                    csv.time(v);
+                } else {
+                    csv.number(v);
+                }
+            }
+            csv.number(row.response()).number(row.fit()).empty().empty().number(row.residual()).number(row.z());
+            csv.endRow();
         }
-        w.flush();
+        csv.flush();
+    }
+
+    /** The file's time column (or {@code null}) and which model inputs are times, written as ISO 8601. */
+    record TimeInputs(String column, boolean[] inputIsTime) {
+        boolean isTime(int j) {
+            return j < inputIsTime.length && inputIsTime[j];
+        }
+    }
+
+    private TimeInputs timeInputs(ViewState s) {
+        boolean[] time = new boolean[s.inputs().size()];
+        for (ColumnInfo c : workbench.columns()) {
+            int j = s.inputs().indexOf(c.name());
+            if (j >= 0) {
+                time[j] = c.kind() == ColumnKind.TIME;
+            }
+        }
+        return new TimeInputs(workbench.timeColumn(), time);
     }
 
     static void text(Cells cells, OutputStream out) throws IOException {
@@ -121,14 +150,5 @@ final class Exporter {
             w.write('\n');
         }
         w.flush();
-    }
-
-    /** A text cell: neutralised against formulas (OWASP), quoted as RFC 4180 asks when it holds , " or a line break. */
-    static String cell(String text) {
-        String t = CsvCells.text(text);
-        if (t.indexOf(',') >= 0 || t.indexOf('"') >= 0 || t.indexOf('\n') >= 0 || t.indexOf('\r') >= 0) {
-            return '"' + t.replace("\"", "\"\"") + '"';
-        }
-        return t;
     }
 }

@@ -11,9 +11,8 @@ import nearfit.knn.KnnModel;
 import nearfit.knn.ReferenceData;
 import nearfit.table.CategoryColumn;
 import nearfit.table.Column;
-import nearfit.table.NumericColumn;
-import nearfit.table.Quantiles;
 import nearfit.table.RowSet;
+import nearfit.table.SortedValues;
 import nearfit.table.Table;
 
 /**
@@ -27,7 +26,7 @@ final class WorkbenchCache {
 
     private final Table table;
     private final Map<String, RowSet> rows = lru();
-    private final Map<List<Object>, double[]> sorted = lru();
+    private final Map<List<Object>, SortedValues> sorted = lru();
     private final Map<List<Object>, CompletableFuture<KnnModel>> models = lru();
     private final Map<FitKey, nearfit.knn.FlagResult> flags = lru();
 
@@ -58,31 +57,18 @@ final class WorkbenchCache {
 
     /** A quantile of the present values, Hyndman and Fan's definition 7 as the table package computes it. */
     double quantile(String column, String condition, double q) {
-        double[] values;
+        SortedValues values;
         List<Object> key = List.of(column, condition);
         synchronized (sorted) {
             values = sorted.get(key);
         }
         if (values == null) {
-            values = presentSorted(table.numeric(column), rows(condition));
+            values = SortedValues.of(table.numeric(column), rows(condition));
             synchronized (sorted) {
                 sorted.put(key, values);
             }
         }
-        return Quantiles.type7(values, values.length, q);
-    }
-
-    private static double[] presentSorted(NumericColumn column, RowSet rows) {
-        double[] all = column.copyValues(rows);
-        int n = 0;
-        for (double v : all) {
-            if (!Double.isNaN(v)) {
-                all[n++] = v;
-            }
-        }
-        double[] out = Arrays.copyOf(all, n);
-        Arrays.sort(out);
-        return out;
+        return values.quantile(q);
     }
 
     /**

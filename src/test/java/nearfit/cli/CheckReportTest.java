@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Map;
 
 import nearfit.knn.Estimates;
+import nearfit.knn.ScoredBlock;
 import nearfit.model.Json;
 import org.junit.jupiter.api.Test;
 
@@ -31,7 +32,14 @@ class CheckReportTest {
         double[] times = {0, 600_000, 1_200_000, 1_800_000, NaN, 3_000_000};
         double[] none = new double[6];
         Estimates est = new Estimates(fit, none, none, none, none, new int[6]);
-        ScoredRows.Block b = new ScoredRows.Block(0, lines, times, groups, new double[][] {wind}, y, null, est, null, z);
+        double[] resid = new double[6];
+        boolean[] flagged = new boolean[6];
+        for (int i = 0; i < 6; i++) {
+            resid[i] = y[i] - fit[i];
+            flagged[i] = Math.abs(z[i]) > 3.5;
+        }
+        ScoredRows.Block b = new ScoredRows.Block(0, lines, times, groups, new double[][] {wind}, y, null,
+                new ScoredBlock(est, resid, z, flagged), null);
         CheckReport.Tally t = new CheckReport.Tally(ABOUT, List.of("T01", "T02"), 3.5, null, 2);
         t.add(b);
         return t.report(limit, NaN);

@@ -84,7 +84,7 @@ class CoreExplorerTest {
             v.type(out.toString()).key(KeyType.Enter).type("y");
         }
         List<String> lines = Files.readAllLines(out);
-        assertEquals("wind_ms,fit,band_low,band_high,window_width,neighbours", lines.get(0));
+        assertEquals("wind_ms,fit,band_lo,band_hi,window_width,neighbours", lines.get(0));
         assertEquals(121, lines.size(), "one line per curve point, one per terminal column");
     }
 

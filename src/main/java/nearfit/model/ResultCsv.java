@@ -1,0 +1,144 @@
+package nearfit.model;
+
+import java.io.BufferedWriter;
+import java.io.Flushable;
+import java.io.IOException;
+import java.io.OutputStream;
+import java.io.OutputStreamWriter;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.List;
+
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVPrinter;
+
+/**
+ * The one writer of every CSV the tool writes ({@code predict}, {@code predict --loo}, {@code check -o}, the
+ * explorer's curve and flagged-row exports): Commons CSV's printer with RFC 4180 quoting, {@code \n} line
+ * ends, UTF-8, text cells (the file's own names and labels) neutralised by {@link CsvCells}, numbers in
+ * {@link CsvCells#number} form, times in ISO 8601 UTC. The column names are this class's constants, so two
+ * files of the same thing have the same header.
+ *
+ * <p>Rows: {@code line}, the file's time column (when it has one that is not an input), the group column,
+ * the inputs, the response, then {@code fit, band_lo, band_hi, resid, z} (a number response; the band
+ * cells are empty where there is no band, e.g. leave-one-out) or {@code class, share} (a category
+ * response). A curve: the display input, then {@code fit, band_lo, band_hi, window_width, neighbours}.
+ */
+public final class ResultCsv implements Flushable {
+    public static final String LINE = "line";
+    public static final String FIT = "fit";
+    public static final String BAND_LO = "band_lo";
+    public static final String BAND_HI = "band_hi";
+    public static final String RESID = "resid";
+    public static final String Z = "z";
+    public static final String CLASS = "class";
+    public static final String SHARE = "share";
+    public static final String WINDOW_WIDTH = "window_width";
+    public static final String NEIGHBOURS = "neighbours";
+
+    /** RFC 4180 quoting with {@code \n} line ends (see DEVELOPERS, Decisions). */
+    private static final CSVFormat FORMAT = CSVFormat.RFC4180.builder().setRecordSeparator('\n').get();
+
+    private final CSVPrinter printer;
+
+    /** A CSV on {@code w}; the caller writes the header first ({@link #header}). */
+    public ResultCsv(Writer w) throws IOException {
+        this.printer = new CSVPrinter(w, FORMAT);
+    }
+
+    /** A CSV on a byte stream, as UTF-8 through a 64 KiB buffer; {@link #flush} pushes it through. */
+    public static ResultCsv on(OutputStream out) throws IOException {
+        return new ResultCsv(new BufferedWriter(new OutputStreamWriter(out, StandardCharsets.UTF_8), 1 << 16));
+    }
+
+    /**
+     * The columns of scored rows.
+     *
+     * @param time      the file's time column, or {@code null} (none, or it is one of the inputs)
+     * @param group     the group column, or {@code null}
+     * @param inputs    the model's inputs
+     * @param response  the response, or {@code null} when the rows have none
+     * @param category  whether the response is a category ({@code class, share} instead of fit and band)
+     */
+    public static List<String> rowColumns(String time, String group, List<String> inputs, String response,
+                                          boolean category) {
+        List<String> names = new ArrayList<>();
+        names.add(LINE);
+        if (time != null) {
+            names.add(time);
+        }
+        if (group != null) {
+            names.add(group);
+        }
+        names.addAll(inputs);
+        if (response != null) {
+            names.add(response);
+        }
+        if (category) {
+            names.add(CLASS);
+            names.add(SHARE);
+        } else {
+            names.addAll(List.of(FIT, BAND_LO, BAND_HI));
+            if (response != null) {
+                names.add(RESID);
+                names.add(Z);
+            }
+        }
+        return names;
+    }
+
+    /** The columns of a curve along {@code displayInput}. */
+    public static List<String> curveColumns(String displayInput) {
+        return List.of(displayInput, FIT, BAND_LO, BAND_HI, WINDOW_WIDTH, NEIGHBOURS);
+    }
+
+    /** Writes the header line; names from a file are neutralised like any text cell. */
+    public void header(List<String> names) throws IOException {
+        for (String name : names) {
+            text(name);
+        }
+        endRow();
+    }
+
+    /** A text cell (a label or a name from the file), neutralised; empty for {@code null}. */
+    public ResultCsv text(String s) throws IOException {
+        printer.print(CsvCells.text(s));
+        return this;
+    }
+
+    /** A number cell; empty for NaN. */
+    public ResultCsv number(double v) throws IOException {
+        printer.print(CsvCells.number(v));
+        return this;
+    }
+
+    /** A whole number (a line number, a count). */
+    public ResultCsv whole(long v) throws IOException {
+        printer.print(Long.toString(v));
+        return this;
+    }
+
+    /** A time given in epoch milliseconds (exact in a double) as ISO 8601 UTC; empty for NaN. */
+    public ResultCsv time(double epochMillis) throws IOException {
+        printer.print(Double.isNaN(epochMillis) ? "" : Instant.ofEpochMilli((long) epochMillis).toString());
+        return this;
+    }
+
+    /** An empty cell (a value that does not apply to the row, such as a band under leave-one-out). */
+    public ResultCsv empty() throws IOException {
+        printer.print("");
+        return this;
+    }
+
+    /** Ends the current row. */
+    public void endRow() throws IOException {
+        printer.println();
+    }
+
+    @Override
+    public void flush() throws IOException {
+        printer.flush();
+    }
+}
