@@ -5,7 +5,7 @@ import java.io.PrintWriter;
 import java.util.Locale;
 
 import nearfit.model.CsvCells;
-import nearfit.model.Json;
+import nearfit.model.JsonText;
 import nearfit.model.TuningSummary;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
@@ -20,7 +20,7 @@ final class TuneReport {
 
     static void write(TuningSummary t, Format format, PrintWriter out) {
         switch (format) {
-            case JSON -> out.println(Json.write(t.toJson()));
+            case JSON -> out.println(JsonText.write(t.toJson()));
             case CSV -> writeCsv(t, out);
             default -> writeTable(t, out);
         }

@@ -79,27 +79,32 @@ public record TuningSummary(long rows, int[] k, double[] rmse, double[] rmseSe, 
         return m;
     }
 
-    /** Reads the object {@link #toJson()} writes; throws {@link IllegalArgumentException} naming a bad field. */
-    static TuningSummary fromJson(ManifestFields m) {
-        int[] k = m.ints("k", 1, Integer.MAX_VALUE);
-        boolean categories = m.map().containsKey("error_rate");
-        long sampled = m.present("sampled") ? m.whole("sampled", 0, Long.MAX_VALUE >> 11) : -1;
+    /**
+     * Reads the object {@link #toJson()} writes, as a manifest binds it at {@code path}; throws
+     * {@link IllegalArgumentException} naming a bad field.
+     */
+    static TuningSummary fromManifest(ManifestDocument.TuningFields t, String path) {
+        int[] k = ManifestValues.ints(path + ".k", t.k(), 1, Integer.MAX_VALUE);
+        boolean categories = t.errorRate() != null;
+        long sampled = t.sampled() != null ? ManifestValues.whole(path + ".sampled", t.sampled(), 0, Long.MAX_VALUE >> 11)
+                : -1;
         try {
-            return new TuningSummary(m.whole("rows", 0, Integer.MAX_VALUE), k,
-                    categories ? null : m.doubles("rmse"),
-                    categories ? null : m.doubles("rmse_se"),
-                    categories ? null : m.doubles("mae"),
-                    categories ? null : m.doubles("press"),
-                    categories ? null : m.doubles("r2_pred"),
-                    categories ? m.doubles("error_rate") : null,
-                    categories ? m.doubles("error_rate_se") : null,
-                    m.integer("best_k", 1, Integer.MAX_VALUE), m.integer("one_se_k", 1, Integer.MAX_VALUE),
-                    sampled, m.present("scheme") ? m.text("scheme") : null);
+            return new TuningSummary(ManifestValues.whole(path + ".rows", t.rows(), 0, Integer.MAX_VALUE), k,
+                    categories ? null : ManifestValues.doubles(path + ".rmse", t.rmse()),
+                    categories ? null : ManifestValues.doubles(path + ".rmse_se", t.rmseSe()),
+                    categories ? null : ManifestValues.doubles(path + ".mae", t.mae()),
+                    categories ? null : ManifestValues.doubles(path + ".press", t.press()),
+                    categories ? null : ManifestValues.doubles(path + ".r2_pred", t.r2Pred()),
+                    categories ? ManifestValues.doubles(path + ".error_rate", t.errorRate()) : null,
+                    categories ? ManifestValues.doubles(path + ".error_rate_se", t.errorRateSe()) : null,
+                    ManifestValues.integer(path + ".best_k", t.bestK(), 1, Integer.MAX_VALUE),
+                    ManifestValues.integer(path + ".one_se_k", t.oneSeK(), 1, Integer.MAX_VALUE),
+                    sampled, t.scheme());
         } catch (IllegalArgumentException e) {
             if (e.getMessage().startsWith("manifest field")) {
                 throw e;
             }
-            throw new IllegalArgumentException("manifest field \"" + m.path() + "\": " + e.getMessage(), e);
+            throw new IllegalArgumentException("manifest field \"" + path + "\": " + e.getMessage(), e);
         }
     }
 }

@@ -11,7 +11,7 @@ import java.util.List;
 import java.util.Map;
 
 import nearfit.knn.Estimates;
-import nearfit.model.Json;
+import nearfit.model.JsonTrees;
 import org.junit.jupiter.api.Test;
 
 class CheckReportTest {
@@ -68,7 +68,7 @@ class CheckReportTest {
 
     @Test
     void jsonCarriesTheDocumentedFieldsAndTheCaution() {
-        Map<?, ?> m = (Map<?, ?>) Json.parse(sample(0.01).toJson());
+        Map<?, ?> m = (Map<?, ?>) JsonTrees.parse(sample(0.01).toJson());
         assertEquals(List.of("checked", "rows", "scored", "flagged", "flagged_fraction", "limit", "passed", "threshold",
                 "beyond_reference", "by_group", "worst", "caution"), List.copyOf(m.keySet()));
         assertEquals(Boolean.FALSE, m.get("passed"));

@@ -65,7 +65,7 @@ class ModelFileTest {
         assertArrayEquals(m.rows().response(), back.rows().response());
         assertArrayEquals(m.rows().groupCodes(), back.rows().groupCodes());
         assertArrayEquals(m.rows().sourceLines(), back.rows().sourceLines());
-        assertEquals(Json.write(m.tuning().toJson()), Json.write(back.tuning().toJson()));
+        assertEquals(JsonTrees.write(m.tuning().toJson()), JsonTrees.write(back.tuning().toJson()));
     }
 
     @Test
@@ -76,7 +76,7 @@ class ModelFileTest {
         Path p = dir.resolve("scheme.nfm");
         ModelFile.write(withScheme, p, false, List.of());
         assertEquals("5-fold cross-validation", ModelFile.read(p).tuning().scheme());
-        assertFalse(Json.write(m.tuning().toJson()).contains("scheme"), "no key when not recorded, as before");
+        assertFalse(JsonTrees.write(m.tuning().toJson()).contains("scheme"), "no key when not recorded, as before");
     }
 
     @Test
