@@ -69,8 +69,9 @@ final class CheckCommand implements Callable<Integer> {
     String threshold;
 
     @Option(names = "--format", paramLabel = "text|json", defaultValue = "text",
-            description = "Report format (default: ${DEFAULT-VALUE}).")
-    String format;
+            converter = OptionChoices.CheckFormatWords.class, completionCandidates = OptionChoices.CheckFormatWords.class,
+            description = "Report format (default: text).")
+    OptionChoices.CheckFormat format;
 
     @Option(names = "-o", paramLabel = "FLAGGED",
             description = "Also write the flagged rows here as CSV (line, time, group, inputs, response, fit, band, "
@@ -90,7 +91,7 @@ final class CheckCommand implements Callable<Integer> {
         double maxOutsideFraction = maxOutside == null ? Double.NaN : OptionValues.percent("--max-outside", maxOutside);
         int leastRows = OptionValues.positive("--min-rows", minRows, "a whole number of at least 1");
         Double z = threshold == null ? null : OptionValues.positiveNumber("--threshold", threshold);
-        boolean json = "json".equals(OptionValues.oneOf("--format", format, List.of("text", "json")));
+        boolean json = format == OptionChoices.CheckFormat.JSON;
         model.validate();
         List<Path> inputs = new ArrayList<>(List.of(modelFile));
         if (!"-".equals(file)) {

@@ -26,15 +26,14 @@ import picocli.CommandLine.Spec;
         description = "Summarise each column of a CSV file (plain, gzip or - for standard input) and report "
                 + "ragged rows and bad cells.")
 final class DescribeCommand implements Callable<Integer> {
-    /** Output formats. */
-    enum Format { TABLE, JSON }
-
     @Parameters(index = "0", paramLabel = "FILE", description = "The CSV file, plain or gzip; - for standard input.")
     String file;
 
     @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "table",
+            converter = OptionChoices.DescribeFormatWords.class,
+            completionCandidates = OptionChoices.DescribeFormatWords.class,
             description = "table (default) or json.")
-    Format format;
+    OptionChoices.DescribeFormat format;
 
     @Option(names = "--quiet", description = "No progress on standard error.")
     boolean quiet;
@@ -55,7 +54,7 @@ final class DescribeCommand implements Callable<Integer> {
         // Warnings are about the data, not progress: on standard error even with --quiet, and in the report.
         SourceTable.printWarnings(table.report(), err);
         List<ColumnSummary> summaries = ColumnSummary.ofAll(table.columns(), Runtime.getRuntime().availableProcessors());
-        out.print(format == Format.JSON ? json(table.report(), summaries) + "\n" : text(table.report(), summaries));
+        out.print(format == OptionChoices.DescribeFormat.JSON ? json(table.report(), summaries) + "\n" : text(table.report(), summaries));
         out.flush();
         return 0;
     }
@@ -70,7 +69,7 @@ final class DescribeCommand implements Callable<Integer> {
         };
     }
 
-    /** The one JSON object of {@code --format json}, fields in this order; absent values null. */
+    /** The one JSON object of {@code --format json}, fields in this order. */
     record DescribeJson(long rows, long droppedRows, long raggedRows, List<ColumnJson> columns, List<String> warnings) {
     }
 

@@ -7,8 +7,9 @@ import java.util.Locale;
 import nearfit.table.NearfitException;
 
 /**
- * Parses and checks option values early, with messages that name the option, for example
- * {@code --k: "abc" is not a whole number or auto}.
+ * Parses and checks the number, percentage, size and column-list option values early, with messages
+ * that name the option, for example {@code --k: "abc" is not a whole number or auto}. Choice options
+ * are typed options instead ({@link OptionChoices}).
  */
 final class OptionValues {
     /** k chosen by tuning (the one-SE k). */
@@ -66,15 +67,6 @@ final class OptionValues {
             // Reported below with the option's name.
         }
         throw new NearfitException(option + ": \"" + text + "\" is not a percentage from 0 to 100");
-    }
-
-    /** One of the allowed words, case-insensitive, returned in the allowed spelling. */
-    static String oneOf(String option, String text, List<String> allowed) {
-        String t = text.trim().toLowerCase(Locale.ROOT);
-        if (allowed.contains(t)) {
-            return t;
-        }
-        throw new NearfitException(option + ": \"" + text + "\" is not one of " + String.join(", ", allowed));
     }
 
     /** A comma-separated list of column names, none empty, none repeated. */

@@ -29,8 +29,9 @@ final class TuneCommand implements Callable<Integer> {
     TuningOptions tuning;
 
     @Option(names = "--format", paramLabel = "table|csv|json", defaultValue = "table",
-            description = "Output format (default: ${DEFAULT-VALUE}).")
-    String format;
+            converter = OptionChoices.TuneFormatWords.class, completionCandidates = OptionChoices.TuneFormatWords.class,
+            description = "Output format (default: table).")
+    OptionChoices.TuneFormat format;
 
     @Mixin
     ModelOptions model;
@@ -40,8 +41,6 @@ final class TuneCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        TuneReport.Format f = TuneReport.Format.valueOf(OptionValues.oneOf("--format", format,
-                java.util.List.of("table", "csv", "json")).toUpperCase(java.util.Locale.ROOT));
         tuning.validate();
         PrintWriter err = spec.commandLine().getErr();
         ReferenceInput input = ReferenceInput.load(file, columns, model, err);
@@ -49,7 +48,7 @@ final class TuneCommand implements Callable<Integer> {
                 nearfit.model.ModelSettings.DEFAULT_FLAG_THRESHOLD), model.threads()));
         TuningOptions.Result r = tuning.run(engine, TerminalProgress.of(err, "tuning", model.quiet));
         TuningSummary summary = ReferenceCapture.summary(r.table(), r.sampled());
-        TuneReport.write(summary, f, spec.commandLine().getOut());
+        TuneReport.write(summary, format, spec.commandLine().getOut());
         return 0;
     }
 }

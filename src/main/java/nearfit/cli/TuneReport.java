@@ -12,13 +12,10 @@ import org.apache.commons.csv.CSVPrinter;
 
 /** Writes a tuning table as an aligned text table, CSV or JSON. */
 final class TuneReport {
-    /** The output formats of {@code tune --format}. */
-    enum Format { TABLE, CSV, JSON }
-
     private TuneReport() {
     }
 
-    static void write(TuningSummary t, Format format, PrintWriter out) {
+    static void write(TuningSummary t, OptionChoices.TuneFormat format, PrintWriter out) {
         switch (format) {
             case JSON -> out.println(JsonText.write(t.toJson()));
             case CSV -> writeCsv(t, out);

@@ -15,8 +15,9 @@ final class TuningOptions {
     String kmax;
 
     @Option(names = "--cv", paramLabel = "loo|FOLDS", defaultValue = "loo",
-            description = "Cross-validation: loo (leave-one-out) or a number of folds (default: ${DEFAULT-VALUE}).")
-    String cv;
+            converter = OptionChoices.FoldsWords.class, completionCandidates = OptionChoices.FoldsWords.class,
+            description = "Cross-validation: loo (leave-one-out) or a number of folds (default: loo).")
+    int cv;
 
     @Option(names = "--sample", paramLabel = "M",
             description = "Leave-one-out on M rows chosen at random (seeded); by default "
@@ -25,14 +26,7 @@ final class TuningOptions {
 
     /** The folds of k-fold cross-validation, or 0 for leave-one-out. */
     int folds() {
-        if (cv.trim().equalsIgnoreCase("loo")) {
-            return 0;
-        }
-        int folds = OptionValues.positive("--cv", cv, "loo or a number of folds of at least 2");
-        if (folds < 2) {
-            throw new NearfitException("--cv: \"" + cv + "\" is not loo or a number of folds of at least 2");
-        }
-        return folds;
+        return cv;
     }
 
     /** Checks the values before any file is read. */

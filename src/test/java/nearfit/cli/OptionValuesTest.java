@@ -28,14 +28,6 @@ class OptionValuesTest {
     }
 
     @Test
-    void wordsAreMatchedWithoutCaseAndListTheChoicesWhenWrong() {
-        assertEquals("manhattan", OptionValues.oneOf("--metric", "Manhattan", List.of("euclidean", "manhattan")));
-        assertEquals("--metric: \"taxi\" is not one of euclidean, manhattan",
-                assertThrows(NearfitException.class,
-                        () -> OptionValues.oneOf("--metric", "taxi", List.of("euclidean", "manhattan"))).getMessage());
-    }
-
-    @Test
     void aColumnListRefusesEmptyAndRepeatedNames() {
         assertEquals(List.of("wind_ms", "air_temp_c"), OptionValues.columnList("-x", "wind_ms, air_temp_c"));
         assertThrows(NearfitException.class, () -> OptionValues.columnList("-x", "wind_ms,,air_temp_c"));
