@@ -1,6 +1,9 @@
 package nearfit.model;
 
 import java.io.IOException;
+import java.lang.reflect.RecordComponent;
+import java.util.LinkedHashMap;
+import java.util.Map;
 
 import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.core.JsonLocation;
@@ -77,6 +80,30 @@ public final class JsonText {
         } catch (JsonProcessingException e) {
             throw new IllegalArgumentException(syntaxError(e), e);
         }
+    }
+
+    /**
+     * The top-level fields of a map or a record, in order, as the writer names them ({@code toolVersion}
+     * is {@code tool_version}); values stay as they are, for the writer to write.
+     */
+    static Map<String, Object> fieldsOf(Object value) {
+        Map<String, Object> fields = new LinkedHashMap<>();
+        if (value instanceof Map<?, ?> map) {
+            map.forEach((k, v) -> fields.put(String.valueOf(k), v));
+        } else if (value instanceof Record) {
+            for (RecordComponent c : value.getClass().getRecordComponents()) {
+                try {
+                    c.getAccessor().setAccessible(true);
+                    fields.put(PropertyNamingStrategies.SnakeCaseStrategy.INSTANCE.translate(c.getName()),
+                            c.getAccessor().invoke(value));
+                } catch (ReflectiveOperationException e) {
+                    throw new IllegalStateException("cannot read " + c, e);
+                }
+            }
+        } else {
+            throw new IllegalArgumentException("not an object: " + value);
+        }
+        return fields;
     }
 
     /** The one-line message of a syntax error: the character offset and the library's reason. */

@@ -1,5 +1,7 @@
 package nearfit.model;
 
+import static com.fasterxml.jackson.annotation.JsonInclude.Include.NON_NULL;
+
 import java.lang.annotation.ElementType;
 import java.lang.annotation.Retention;
 import java.lang.annotation.RetentionPolicy;
@@ -8,7 +10,10 @@ import java.lang.reflect.ParameterizedType;
 import java.lang.reflect.RecordComponent;
 import java.lang.reflect.Type;
 import java.math.BigDecimal;
+import java.util.ArrayList;
 import java.util.List;
+
+import com.fasterxml.jackson.annotation.JsonInclude;
 
 import com.fasterxml.jackson.databind.JsonMappingException;
 import com.fasterxml.jackson.databind.JsonNode;
@@ -16,8 +21,8 @@ import com.fasterxml.jackson.databind.PropertyNamingStrategies;
 import com.fasterxml.jackson.databind.exc.MismatchedInputException;
 
 /**
- * A model manifest's fields as the JSON library binds them, before any value is checked
- * ({@link ModelFile} checks each and names the field of the first that is wrong). The JSON names are
+ * A model manifest's fields as the JSON library writes and binds them; on reading, before any value
+ * is checked ({@link ModelFile} checks each and names the field of the first that is wrong). The JSON names are
  * the components' names in snake_case ({@code toolVersion} is {@code "tool_version"}).
  *
  * <p>Types are what JSON can hold, not yet what the model needs: numbers whose range is checked
@@ -54,11 +59,27 @@ record ManifestDocument(String toolVersion, String created, SourceFields source,
     }
 
     /** {@code "tuning"}: the tune table; one family of figures (rmse... or error_rate...) is present. */
-    record TuningFields(BigDecimal rows, List<BigDecimal> k, @MayBeAbsent List<Double> rmse,
-                  @MayBeAbsent List<Double> rmseSe, @MayBeAbsent List<Double> mae, @MayBeAbsent List<Double> press,
-                  @MayBeAbsent List<Double> r2Pred, @MayBeAbsent List<Double> errorRate,
-                  @MayBeAbsent List<Double> errorRateSe, BigDecimal bestK, BigDecimal oneSeK,
-                  @MayBeAbsent BigDecimal sampled, @MayBeAbsent String scheme) {
+    record TuningFields(BigDecimal rows, List<BigDecimal> k, @MayBeAbsent @JsonInclude(NON_NULL) List<Double> rmse,
+                        @MayBeAbsent @JsonInclude(NON_NULL) List<Double> rmseSe,
+                        @MayBeAbsent @JsonInclude(NON_NULL) List<Double> mae,
+                        @MayBeAbsent @JsonInclude(NON_NULL) List<Double> press,
+                        @MayBeAbsent @JsonInclude(NON_NULL) List<Double> r2Pred,
+                        @MayBeAbsent @JsonInclude(NON_NULL) List<Double> errorRate,
+                        @MayBeAbsent @JsonInclude(NON_NULL) List<Double> errorRateSe, BigDecimal bestK,
+                        BigDecimal oneSeK, @MayBeAbsent BigDecimal sampled,
+                        @MayBeAbsent @JsonInclude(NON_NULL) String scheme) {
+    }
+
+    /** The doubles as the writer writes them (NaN as null); null for no array. */
+    static List<Double> listOf(double[] values) {
+        if (values == null) {
+            return null;
+        }
+        List<Double> out = new ArrayList<>(values.length);
+        for (double v : values) {
+            out.add(v);
+        }
+        return out;
     }
 
     /**

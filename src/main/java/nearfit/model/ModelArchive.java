@@ -138,16 +138,16 @@ public final class ModelArchive {
     /**
      * Writes a model file atomically (see {@link SafeOutput}).
      *
-     * @param manifest the manifest's fields; {@code format}, {@code format_version} and {@code entries}
-     *                 are added here
+     * @param manifest the manifest's fields, a map or a record (its components in order, named in
+     *                 snake_case); {@code format}, {@code format_version} and {@code entries} are added here
      * @param arrays   named arrays, each a double[], int[] or long[]
      */
     public static void write(Path target, boolean force, Collection<Path> inputs,
-                             Map<String, Object> manifest, Map<String, Object> arrays) {
+                             Object manifest, Map<String, Object> arrays) {
         Map<String, Object> full = new LinkedHashMap<>();
         full.put("format", FORMAT_NAME);
         full.put("format_version", FORMAT_MAJOR + "." + FORMAT_MINOR);
-        full.putAll(manifest);
+        full.putAll(JsonText.fieldsOf(manifest));
         List<Object> entries = new ArrayList<>();
         ArrayBytes pieces = new ArrayBytes();
         Map<String, Long> crcs = new LinkedHashMap<>();

@@ -1,5 +1,6 @@
 package nearfit.model;
 
+import java.math.BigDecimal;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.time.format.DateTimeParseException;
@@ -69,44 +70,22 @@ public final class ModelFile {
      * mean), flags {threshold, residual_median, residual_scale,
      * z_scale}, tuning (the tune JSON object, or null).
      */
-    static Map<String, Object> manifestOf(ReferenceModel model) {
-        Map<String, Object> m = new LinkedHashMap<>();
-        m.put("tool_version", model.toolVersion());
-        m.put("created", model.created().truncatedTo(ChronoUnit.SECONDS).toString());
-        Map<String, Object> source = new LinkedHashMap<>();
-        source.put("name", model.source().name());
-        source.put("size", model.source().sizeBytes() < 0 ? null : (Object) model.source().sizeBytes());
-        source.put("sha256", model.source().sha256());
-        m.put("source", source);
-        m.put("row_condition", model.source().rowCondition());
-        m.put("rows", (long) model.rows().size());
+    static ManifestDocument manifestOf(ReferenceModel model) {
         ModelColumns c = model.columns();
-        Map<String, Object> columns = new LinkedHashMap<>();
-        columns.put("inputs", c.inputs());
-        columns.put("response", c.response());
-        columns.put("response_labels", c.responseLabels());
-        columns.put("group", c.group());
-        columns.put("group_labels", c.groupLabels());
-        m.put("columns", columns);
-        Map<String, Object> scaling = new LinkedHashMap<>();
-        scaling.put("method", model.settings().scaling());
-        scaling.put("center", model.scaleCenter());
-        scaling.put("spread", model.scaleSpread());
-        scaling.put("whitening", model.whitening());
-        m.put("scaling", scaling);
-        m.put("metric", model.settings().metric());
-        m.put("weights", model.settings().weights());
-        m.put("k", (long) model.settings().k());
-        m.put("band", model.settings().band());
-        m.put("estimate", model.settings().estimate());
-        Map<String, Object> flags = new LinkedHashMap<>();
-        flags.put("threshold", model.settings().flagThreshold());
-        flags.put("residual_median", model.residualScale().median());
-        flags.put("residual_scale", model.residualScale().scale());
-        flags.put("z_scale", model.settings().zScale());
-        m.put("flags", flags);
-        m.put("tuning", model.tuning() == null ? null : model.tuning().toJson());
-        return m;
+        ModelSettings s = model.settings();
+        return new ManifestDocument(model.toolVersion(),
+                model.created().truncatedTo(ChronoUnit.SECONDS).toString(),
+                new ManifestDocument.SourceFields(model.source().name(),
+                        model.source().sizeBytes() < 0 ? null : BigDecimal.valueOf(model.source().sizeBytes()),
+                        model.source().sha256()),
+                model.source().rowCondition(), BigDecimal.valueOf(model.rows().size()),
+                new ManifestDocument.ColumnFields(c.inputs(), c.response(), c.responseLabels(), c.group(), c.groupLabels()),
+                new ManifestDocument.ScalingFields(s.scaling(), ManifestDocument.listOf(model.scaleCenter()),
+                        ManifestDocument.listOf(model.scaleSpread()), ManifestDocument.listOf(model.whitening())),
+                s.metric(), s.weights(), BigDecimal.valueOf(s.k()), s.band(), s.estimate(),
+                new ManifestDocument.FlagFields(s.flagThreshold(), model.residualScale().median(),
+                        model.residualScale().scale(), s.zScale()),
+                model.tuning() == null ? null : (ManifestDocument.TuningFields) model.tuning().toJson());
     }
 
     /**

@@ -1,7 +1,8 @@
 package nearfit.model;
 
-import java.util.LinkedHashMap;
-import java.util.Map;
+import java.math.BigDecimal;
+import java.util.ArrayList;
+import java.util.List;
 
 /**
  * A tuning table as the {@code tune} command prints it and a model file keeps it: one figure per
@@ -53,30 +54,21 @@ public record TuningSummary(long rows, int[] k, double[] rmse, double[] rmseSe, 
     }
 
     /**
-     * The JSON object of the {@code tune --format json} output, keys in this order: rows, k, then
-     * rmse, rmse_se, mae, press, r2_pred (or error_rate, error_rate_se), best_k, one_se_k, sampled.
+     * The JSON object of the {@code tune --format json} output and of a manifest's {@code tuning}, a
+     * record the JSON library writes, keys in this order: rows, k, then rmse, rmse_se, mae, press,
+     * r2_pred (or error_rate, error_rate_se), best_k, one_se_k, sampled (null when every row was
+     * used), and scheme when recorded.
      */
-    public Map<String, Object> toJson() {
-        Map<String, Object> m = new LinkedHashMap<>();
-        m.put("rows", rows);
-        m.put("k", k);
-        if (forCategories()) {
-            m.put("error_rate", errorRate);
-            m.put("error_rate_se", errorRateSe);
-        } else {
-            m.put("rmse", rmse);
-            m.put("rmse_se", rmseSe);
-            m.put("mae", mae);
-            m.put("press", press);
-            m.put("r2_pred", r2Pred);
+    public Object toJson() {
+        List<BigDecimal> ks = new ArrayList<>(k.length);
+        for (int v : k) {
+            ks.add(BigDecimal.valueOf(v));
         }
-        m.put("best_k", (long) bestK);
-        m.put("one_se_k", (long) oneSeK);
-        m.put("sampled", sampled < 0 ? null : (Object) sampled);
-        if (scheme != null) {
-            m.put("scheme", scheme);
-        }
-        return m;
+        return new ManifestDocument.TuningFields(BigDecimal.valueOf(rows), ks, ManifestDocument.listOf(rmse),
+                ManifestDocument.listOf(rmseSe), ManifestDocument.listOf(mae), ManifestDocument.listOf(press),
+                ManifestDocument.listOf(r2Pred), ManifestDocument.listOf(errorRate),
+                ManifestDocument.listOf(errorRateSe), BigDecimal.valueOf(bestK), BigDecimal.valueOf(oneSeK),
+                sampled < 0 ? null : BigDecimal.valueOf(sampled), scheme);
     }
 
     /**

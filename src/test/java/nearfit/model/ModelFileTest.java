@@ -109,7 +109,7 @@ class ModelFileTest {
     @Test
     void aManifestMissingAFieldIsADamagedModelNamingTheField() throws IOException {
         Path p = dir.resolve("nok.nfm");
-        Map<String, Object> manifest = ModelFile.manifestOf(sample(false));
+        Map<String, Object> manifest = JsonText.fieldsOf(ModelFile.manifestOf(sample(false)));
         manifest.remove("metric");
         Map<String, Object> arrays = new LinkedHashMap<>();
         arrays.put("source_line", new long[0]);
@@ -122,7 +122,7 @@ class ModelFileTest {
     void aRowCountThatDisagreesWithTheArraysIsRefused() {
         Path p = dir.resolve("rows.nfm");
         ReferenceModel m = sample(false);
-        Map<String, Object> manifest = ModelFile.manifestOf(m);
+        Map<String, Object> manifest = JsonText.fieldsOf(ModelFile.manifestOf(m));
         manifest.put("rows", 5L);
         ModelArchive.write(p, false, List.of(), manifest, arraysOf(m));
         NearfitException e = assertThrows(NearfitException.class, () -> ModelFile.read(p));
