@@ -10,22 +10,22 @@ import picocli.CommandLine.Option;
  */
 final class ModelOptions {
     @Option(names = "--metric", converter = OptionChoices.MetricWords.class,
-            completionCandidates = OptionChoices.MetricWords.class, paramLabel = "NAME",
+            completionCandidates = OptionChoices.MetricWords.class, paramLabel = "METRIC",
             description = "Distance between rows: euclidean, manhattan, chebyshev, mahalanobis (default: euclidean; predict and check: the model's).")
     OptionChoices.MetricChoice metric;
 
     @Option(names = "--weights", converter = OptionChoices.WeightsWords.class,
-            completionCandidates = OptionChoices.WeightsWords.class, paramLabel = "NAME",
+            completionCandidates = OptionChoices.WeightsWords.class, paramLabel = "WEIGHTS",
             description = "Neighbour weights: uniform, inverse, tricube (default: uniform; predict and check: the model's).")
     OptionChoices.WeightsChoice weights;
 
     @Option(names = "--scale", converter = OptionChoices.ScaleWords.class,
-            completionCandidates = OptionChoices.ScaleWords.class, paramLabel = "NAME",
+            completionCandidates = OptionChoices.ScaleWords.class, paramLabel = "SCALING",
             description = "Input scaling: z, robust, range, none (default: z; predict and check: the model's).")
     OptionChoices.ScaleChoice scale;
 
     @Option(names = "--band", converter = OptionChoices.BandWords.class,
-            completionCandidates = OptionChoices.BandWords.class, paramLabel = "NAME",
+            completionCandidates = OptionChoices.BandWords.class, paramLabel = "BAND",
             description = "Band around the fit: q10-q90, q05-q95, sd2, none (default: q05-q95; predict and check: the model's).")
     OptionChoices.BandChoice band;
 

@@ -82,4 +82,21 @@ class ChoiceOptionsTest {
         assertTrue(words(cli.getSubcommands().get("tune").getCommandSpec().findOption("--cv").completionCandidates())
                 .contains("loo"));
     }
+
+    @Test
+    void eachChoiceOptionHasItsOwnWordsInTheCompletionScript() {
+        CliRun.Result r = CliRun.inProcess("completion", "bash");
+        assertEquals(0, r.status(), r.toString());
+        // The script keeps an option's words in a variable named after its parameter label: one label
+        // for two options in a command would complete the second's words for both.
+        for (String function : r.out().split("\\nfunction ")) {
+            List<String> names = new ArrayList<>();
+            java.util.regex.Matcher m = java.util.regex.Pattern.compile("local (\\w+_option_args)=").matcher(function);
+            while (m.find()) {
+                assertTrue(!names.contains(m.group(1)), m.group(1) + " twice in " + function.lines().findFirst().orElse(""));
+                names.add(m.group(1));
+            }
+        }
+        assertTrue(r.out().contains("(\"uniform\" \"inverse\" \"tricube\") # --weights values"), r.out());
+    }
 }
