@@ -49,8 +49,8 @@ final class ModelOptions {
     @Option(names = "--group", paramLabel = "COL", description = "Group column, e.g. a turbine id.")
     String group;
 
-    @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
-    String threads;
+    @Option(names = "--threads", paramLabel = "N", converter = OptionNumbers.Count.class, description = "Worker threads (default: all cores).")
+    Integer threads;
 
     @Option(names = "--quiet", description = "No progress messages on standard error.")
     boolean quiet;
@@ -95,8 +95,7 @@ final class ModelOptions {
 
     /** The thread count: the option's value, or every available core. */
     int threads() {
-        return threads == null ? Runtime.getRuntime().availableProcessors()
-                : OptionValues.positive("--threads", threads, "a whole number of at least 1");
+        return threads == null ? Runtime.getRuntime().availableProcessors() : threads;
     }
 
     /**

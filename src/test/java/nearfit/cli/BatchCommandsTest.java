@@ -162,7 +162,7 @@ class BatchCommandsTest {
         CliRun.Result r = CliRun.inProcess("fit", healthy.toString(), "-x", "wind_ms", "-y", "power_kw",
                 "--k", "abc", "-o", dir.resolve("x.nfm").toString());
         assertEquals(2, r.status());
-        assertEquals("nearfit: --k: \"abc\" is not a whole number or auto", r.err().strip());
+        assertEquals("nearfit: Invalid value for option '--k': \"abc\" is not a whole number of at least 1 or auto", r.err().strip());
     }
 
     @Test
