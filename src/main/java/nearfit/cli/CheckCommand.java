@@ -47,27 +47,28 @@ final class CheckCommand implements Callable<Integer> {
     @Parameters(index = "1", paramLabel = "FILE", description = "CSV file, plain or gzip; - for standard input.")
     String file;
 
-    @Option(names = "--limit", paramLabel = "PCT", defaultValue = "1",
+    @Option(names = "--limit", converter = OptionNumbers.Percent.class, paramLabel = "PCT", defaultValue = "1",
             description = "Largest flagged share that passes, in percent (default: ${DEFAULT-VALUE}).")
-    String limit;
+    double limit;
 
-    @Option(names = "--max-outside", paramLabel = "PCT",
+    @Option(names = "--max-outside", converter = OptionNumbers.Percent.class, paramLabel = "PCT",
             description = "Largest share of scored rows beyond the reference that passes, in percent "
                     + "(default: no limit; the share is always reported).")
-    String maxOutside;
+    Double maxOutside;
 
-    @Option(names = "--min-rows", paramLabel = "N", defaultValue = "1",
+    @Option(names = "--min-rows", converter = OptionNumbers.Count.class, paramLabel = "N", defaultValue = "1",
             description = "Fewest rows scored for a check to be judged; fewer is an error, exit status 2 "
                     + "(default: ${DEFAULT-VALUE}).")
-    String minRows;
+    int minRows;
 
-    @Option(names = "--threshold", paramLabel = "Z",
+    @Option(names = "--threshold", converter = OptionNumbers.Positive.class, paramLabel = "Z",
             description = "|z| above which a row is flagged (default: the model's, normally 3.5).")
-    String threshold;
+    Double threshold;
 
     @Option(names = "--format", paramLabel = "text|json", defaultValue = "text",
-            description = "Report format (default: ${DEFAULT-VALUE}).")
-    String format;
+            converter = OptionChoices.CheckFormatWords.class, completionCandidates = OptionChoices.CheckFormatWords.class,
+            description = "Report format (default: text).")
+    OptionChoices.CheckFormat format;
 
     @Option(names = "-o", paramLabel = "FLAGGED",
             description = "Also write the flagged rows here as CSV (line, time, group, inputs, response, fit, band_lo, "
@@ -81,11 +82,11 @@ final class CheckCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        double limitFraction = OptionValues.percent("--limit", limit);
-        double maxOutsideFraction = maxOutside == null ? Double.NaN : OptionValues.percent("--max-outside", maxOutside);
-        int leastRows = OptionValues.positive("--min-rows", minRows, "a whole number of at least 1");
-        Double z = threshold == null ? null : OptionValues.positiveNumber("--threshold", threshold);
-        boolean json = "json".equals(OptionValues.oneOf("--format", format, List.of("text", "json")));
+        double limitFraction = limit;
+        double maxOutsideFraction = maxOutside == null ? Double.NaN : maxOutside;
+        int leastRows = minRows;
+        Double z = threshold;
+        boolean json = format == OptionChoices.CheckFormat.JSON;
         model.validate();
         List<Path> inputs = new ArrayList<>(List.of(modelFile));
         if (!"-".equals(file)) {

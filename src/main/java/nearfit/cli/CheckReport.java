@@ -9,7 +9,7 @@ import java.util.Locale;
 import java.util.Map;
 
 import nearfit.knn.ReferenceReach;
-import nearfit.model.Json;
+import nearfit.model.JsonText;
 import nearfit.table.VisibleText;
 
 /**
@@ -336,7 +336,7 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
         }
         m.put("worst", worstRows);
         m.put("caution", Cautions.TEXT);
-        return Json.write(m);
+        return JsonText.write(m);
     }
 
     private Map<String, Object> aboutJson() {

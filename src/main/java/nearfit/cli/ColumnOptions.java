@@ -1,6 +1,9 @@
 package nearfit.cli;
 
+import java.util.ArrayList;
 import java.util.List;
+
+import nearfit.table.NearfitException;
 
 import picocli.CommandLine.Option;
 
@@ -15,9 +18,19 @@ final class ColumnOptions {
 
     /** The input names, checked: none empty, none repeated, not the response. */
     List<String> inputs() {
-        List<String> names = OptionValues.columnList("-x", inputs);
+        List<String> names = new ArrayList<>();
+        for (String part : inputs.split(",", -1)) {
+            String name = part.trim();
+            if (name.isEmpty()) {
+                throw new NearfitException("-x: \"" + inputs + "\" has an empty column name");
+            }
+            if (names.contains(name)) {
+                throw new NearfitException("-x: column \"" + name + "\" is named twice");
+            }
+            names.add(name);
+        }
         if (names.contains(response())) {
-            throw new nearfit.table.NearfitException("-x: column \"" + response() + "\" is the response (-y)");
+            throw new NearfitException("-x: column \"" + response() + "\" is the response (-y)");
         }
         return names;
     }

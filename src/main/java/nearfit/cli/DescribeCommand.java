@@ -7,7 +7,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 
-import nearfit.model.Json;
+import nearfit.model.JsonText;
 import nearfit.table.BadCell;
 import nearfit.table.ColumnSummary;
 import nearfit.table.ColumnType;
@@ -26,15 +26,14 @@ import picocli.CommandLine.Spec;
         description = "Summarise each column of a CSV file (plain, gzip or - for standard input) and report "
                 + "ragged rows and bad cells.")
 final class DescribeCommand implements Callable<Integer> {
-    /** Output formats. */
-    enum Format { TABLE, JSON }
-
     @Parameters(index = "0", paramLabel = "FILE", description = "The CSV file, plain or gzip; - for standard input.")
     String file;
 
     @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "table",
+            converter = OptionChoices.DescribeFormatWords.class,
+            completionCandidates = OptionChoices.DescribeFormatWords.class,
             description = "table (default) or json.")
-    Format format;
+    OptionChoices.DescribeFormat format;
 
     @Option(names = "--quiet", description = "No progress on standard error.")
     boolean quiet;
@@ -55,7 +54,7 @@ final class DescribeCommand implements Callable<Integer> {
         // Warnings are about the data, not progress: on standard error even with --quiet, and in the report.
         SourceTable.printWarnings(table.report(), err);
         List<ColumnSummary> summaries = ColumnSummary.ofAll(table.columns(), Runtime.getRuntime().availableProcessors());
-        out.print(format == Format.JSON ? json(table.report(), summaries) + "\n" : text(table.report(), summaries));
+        out.print(format == OptionChoices.DescribeFormat.JSON ? json(table.report(), summaries) + "\n" : text(table.report(), summaries));
         out.flush();
         return 0;
     }
@@ -70,21 +69,24 @@ final class DescribeCommand implements Callable<Integer> {
         };
     }
 
+    /** The one JSON object of {@code --format json}, fields in this order. */
+    record DescribeJson(long rows, long droppedRows, long raggedRows, List<ColumnJson> columns, List<String> warnings) {
+    }
+
+    /** One column of {@link DescribeJson}. */
+    record ColumnJson(String name, String type, long count, long missing, long bad, double min, double max,
+                      double mean, double sd, double median) {
+    }
+
     /** The one JSON object of {@code --format json}; times in epoch milliseconds, absent values null. */
     static String json(LoadReport report, List<ColumnSummary> summaries) {
-        Json.Writer w = new Json.Writer().beginObject();
-        w.key("rows").value(report.rows()).key("dropped_rows").value(report.droppedRows()).key("ragged_rows").value(report.raggedRows()).key("columns").beginArray();
+        List<ColumnJson> columns = new ArrayList<>();
         for (ColumnSummary s : summaries) {
-            w.beginObject().key("name").value(s.name()).key("type").value(s.type().label())
-                    .key("count").value(s.count()).key("missing").value(s.missing()).key("bad").value(s.bad())
-                    .key("min").value(s.min()).key("max").value(s.max()).key("mean").value(s.mean())
-                    .key("sd").value(s.sd()).key("median").value(s.median()).endObject();
+            columns.add(new ColumnJson(s.name(), s.type().label(), s.count(), s.missing(), s.bad(), s.min(), s.max(),
+                    s.mean(), s.sd(), s.median()));
         }
-        w.endArray().key("warnings").beginArray();
-        for (String warning : report.warnings()) {
-            w.value(warning);
-        }
-        return w.endArray().endObject().toString();
+        return JsonText.write(new DescribeJson(report.rows(), report.droppedRows(), report.raggedRows(), columns,
+                report.warnings()));
     }
 
     private static final String[] HEAD = {"column", "type", "count", "missing", "bad", "min", "p01", "p25",

@@ -35,9 +35,9 @@ final class FitCommand implements Callable<Integer> {
     @Mixin
     KOption k;
 
-    @Option(names = "--threshold", paramLabel = "Z", defaultValue = "3.5",
+    @Option(names = "--threshold", paramLabel = "Z", defaultValue = "3.5", converter = OptionNumbers.Positive.class,
             description = "|z| above which check flags a row (default: ${DEFAULT-VALUE}).")
-    String threshold;
+    double threshold;
 
     @Option(names = "-o", required = true, paramLabel = "MODEL", description = "The model file to write.")
     Path output;
@@ -51,7 +51,7 @@ final class FitCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         int chosenK = k.value();
-        double z = OptionValues.positiveNumber("--threshold", threshold);
+        double z = threshold;
         tuning.validate();
         List<Path> inputs = "-".equals(file) ? List.of() : List.of(ArgumentPath.of(file));
         if (CommandOutput.isStandardOutput(output)) {

@@ -8,36 +8,43 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
 /**
- * The options shared by the commands that fit or score a reference (a picocli mixin). Values are kept
- * as given and checked by the accessors, so that a bad value is reported naming its option.
+ * The options shared by the commands that fit or score a reference (a picocli mixin). The choices are
+ * typed options ({@link OptionChoices}), null when not given (predict and check then keep the model's);
+ * the accessors give their words as {@link ModelSettings} spells them.
  */
 final class ModelOptions {
-    @Option(names = "--metric", paramLabel = "NAME",
+    @Option(names = "--metric", converter = OptionChoices.MetricWords.class,
+            completionCandidates = OptionChoices.MetricWords.class, paramLabel = "METRIC",
             description = "Distance between rows: euclidean, manhattan, chebyshev, mahalanobis (default: euclidean; predict and check: the model's).")
-    String metric;
+    OptionChoices.MetricChoice metric;
 
-    @Option(names = "--weights", paramLabel = "NAME",
+    @Option(names = "--weights", converter = OptionChoices.WeightsWords.class,
+            completionCandidates = OptionChoices.WeightsWords.class, paramLabel = "WEIGHTS",
             description = "Neighbour weights: uniform, inverse, tricube (default: uniform; predict and check: the model's).")
-    String weights;
+    OptionChoices.WeightsChoice weights;
 
-    @Option(names = "--scale", paramLabel = "NAME",
+    @Option(names = "--scale", converter = OptionChoices.ScaleWords.class,
+            completionCandidates = OptionChoices.ScaleWords.class, paramLabel = "SCALING",
             description = "Input scaling: z, robust, range, none (default: z; predict and check: the model's).")
-    String scale;
+    OptionChoices.ScaleChoice scale;
 
-    @Option(names = "--band", paramLabel = "NAME",
+    @Option(names = "--band", converter = OptionChoices.BandWords.class,
+            completionCandidates = OptionChoices.BandWords.class, paramLabel = "BAND",
             description = "Band around the fit: q10-q90, q05-q95, sd2, none (default: q05-q95; predict and check: the model's).")
-    String band;
+    OptionChoices.BandChoice band;
 
-    @Option(names = "--estimate", paramLabel = "mean|median",
+    @Option(names = "--estimate", converter = OptionChoices.EstimateWords.class,
+            completionCandidates = OptionChoices.EstimateWords.class, paramLabel = "mean|median",
             description = "The fit: the neighbours' weighted mean, or their weighted median (the band's quantile rule "
                     + "at 0.5), which rows far off the rest (curtailment, icing) move less; tune and the flags use it "
                     + "too (default: mean; predict and check: the model's).")
-    String estimate;
+    OptionChoices.EstimateChoice estimate;
 
-    @Option(names = "--z-scale", paramLabel = "local|reference",
+    @Option(names = "--z-scale", converter = OptionChoices.ZScaleWords.class,
+            completionCandidates = OptionChoices.ZScaleWords.class, paramLabel = "local|reference",
             description = "What divides a residual to make z: local (the k neighbours' SD at the row) or reference "
                     + "(1.4826 MAD of the reference's leave-one-out residuals) (default: local; predict and check: the model's).")
-    String zScale;
+    OptionChoices.ZScaleChoice zScale;
 
     @Option(names = "--where", paramLabel = "CONDITION",
             description = "Row condition: COLUMN OP VALUE joined by 'and', e.g. \"turbine != T03 and wind_ms > 3\".")
@@ -46,8 +53,8 @@ final class ModelOptions {
     @Option(names = "--group", paramLabel = "COL", description = "Group column, e.g. a turbine id.")
     String group;
 
-    @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
-    String threads;
+    @Option(names = "--threads", paramLabel = "N", converter = OptionNumbers.Count.class, description = "Worker threads (default: all cores).")
+    Integer threads;
 
     @Option(names = "--quiet", description = "No progress messages on standard error.")
     boolean quiet;
@@ -73,31 +80,27 @@ final class ModelOptions {
     }
 
     String metric() {
-        return word("--metric", metric, "euclidean", ModelSettings.METRICS);
+        return metric == null ? "euclidean" : OptionChoices.word(metric);
     }
 
     String weights() {
-        return word("--weights", weights, "uniform", ModelSettings.WEIGHTS);
+        return weights == null ? "uniform" : OptionChoices.word(weights);
     }
 
     String scale() {
-        return word("--scale", scale, "z", ModelSettings.SCALINGS);
+        return scale == null ? "z" : OptionChoices.word(scale);
     }
 
     String zScale() {
-        return word("--z-scale", zScale, "local", ModelSettings.Z_SCALES);
+        return zScale == null ? "local" : OptionChoices.word(zScale);
     }
 
     String estimate() {
-        return word("--estimate", estimate, "mean", ModelSettings.ESTIMATES);
+        return estimate == null ? "mean" : OptionChoices.word(estimate);
     }
 
     String band() {
-        return word("--band", band, "q05-q95", ModelSettings.BANDS);
-    }
-
-    private static String word(String option, String given, String fallback, java.util.List<String> allowed) {
-        return given == null ? fallback : OptionValues.oneOf(option, given, allowed);
+        return band == null ? "q05-q95" : OptionChoices.word(band);
     }
 
     /** A model's settings with the options given on this command line in place of its own. */
@@ -110,18 +113,14 @@ final class ModelOptions {
 
     /** The thread count: the option's value, or every available core. */
     int threads() {
-        return threads == null ? Runtime.getRuntime().availableProcessors()
-                : OptionValues.positive("--threads", threads, "a whole number of at least 1");
+        return threads == null ? Runtime.getRuntime().availableProcessors() : threads;
     }
 
-    /** Checks every value at once so that a bad one fails before any file is read. */
+    /**
+     * Checks the values picocli has not: the choices are typed options, refused while parsing, so
+     * only the thread count is left to check before any file is read.
+     */
     void validate() {
-        metric();
-        weights();
-        scale();
-        band();
-        zScale();
-        estimate();
         threads();
     }
 

@@ -53,9 +53,9 @@ final class PlotCommand implements Callable<Integer> {
     @Mixin
     KOption k;
 
-    @Option(names = "--size", paramLabel = "WxH",
+    @Option(names = "--size", paramLabel = "WxH", converter = OptionNumbers.Size.class,
             description = "Text: cells (default 100x30); PNG: pixels (default 1200x800).")
-    String size;
+    OptionNumbers.PlotSize size;
 
     @Option(names = "--ascii", description = "ASCII characters instead of braille.")
     boolean ascii;
@@ -74,7 +74,7 @@ final class PlotCommand implements Callable<Integer> {
     public Integer call() {
         int chosenK = k.value();
         int[] dims = size == null ? (png == null ? TEXT_SIZE : PNG_SIZE)
-                : png == null ? OptionValues.size("--size", size, 20, 1000) : OptionValues.size("--size", size, 120, 8000);
+                : png == null ? sizeWithin(20, 1000) : sizeWithin(120, 8000);
         tuning.validate();
         List<Path> inputs = "-".equals(file) ? List.of() : List.of(ArgumentPath.of(file));
         CommandOutput.check(png, model.force, inputs);
@@ -186,5 +186,14 @@ final class PlotCommand implements Callable<Integer> {
             y[i] = data.classes()[i];
         }
         return y;
+    }
+
+    /** The --size given, each side from {@code least} to {@code most} (text: cells; PNG: pixels). */
+    private int[] sizeWithin(int least, int most) {
+        if (size.width() < least || size.height() < least || size.width() > most || size.height() > most) {
+            throw new NearfitException("--size: \"" + size.width() + "x" + size.height()
+                    + "\" is not WIDTHxHEIGHT with each from " + least + " to " + most);
+        }
+        return new int[] {size.width(), size.height()};
     }
 }

@@ -27,16 +27,15 @@ final class TuneCommand implements Callable<Integer> {
     TuningOptions tuning;
 
     @Option(names = "--format", paramLabel = "table|csv|json", defaultValue = "table",
-            description = "Output format (default: ${DEFAULT-VALUE}).")
-    String format;
+            converter = OptionChoices.TuneFormatWords.class, completionCandidates = OptionChoices.TuneFormatWords.class,
+            description = "Output format (default: table).")
+    OptionChoices.TuneFormat format;
 
     @Mixin
     ModelOptions model;
 
     @Override
     public Integer call() {
-        TuneReport.Format f = TuneReport.Format.valueOf(OptionValues.oneOf("--format", format,
-                java.util.List.of("table", "csv", "json")).toUpperCase(java.util.Locale.ROOT));
         tuning.validate();
         PrintWriter err = model.err();
         ReferenceInput input = ReferenceInput.load(file, columns, model, err);
@@ -44,7 +43,7 @@ final class TuneCommand implements Callable<Integer> {
                 nearfit.model.ModelSettings.DEFAULT_FLAG_THRESHOLD), model.threads()));
         TuningOptions.Result r = tuning.run(engine, TerminalProgress.of(err, "tuning", model.quiet));
         TuningSummary summary = ReferenceCapture.summary(r.table(), r.sampled());
-        TuneReport.write(summary, f, model.out());
+        TuneReport.write(summary, format, model.out());
         return 0;
     }
 }

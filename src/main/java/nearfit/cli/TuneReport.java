@@ -4,21 +4,18 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.util.Locale;
 
-import nearfit.model.Json;
+import nearfit.model.JsonText;
 import nearfit.model.ResultCsv;
 import nearfit.model.TuningSummary;
 
 /** Writes a tuning table as an aligned text table, CSV or JSON. */
 final class TuneReport {
-    /** The output formats of {@code tune --format}. */
-    enum Format { TABLE, CSV, JSON }
-
     private TuneReport() {
     }
 
-    static void write(TuningSummary t, Format format, PrintWriter out) {
+    static void write(TuningSummary t, OptionChoices.TuneFormat format, PrintWriter out) {
         switch (format) {
-            case JSON -> out.println(Json.write(t.toJson()));
+            case JSON -> out.println(JsonText.write(t.toJson()));
             case CSV -> writeCsv(t, out);
             default -> writeTable(t, out);
         }

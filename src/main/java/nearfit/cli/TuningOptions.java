@@ -11,38 +11,28 @@ final class TuningOptions {
     /** The largest k tried by default (fewer when the reference has fewer rows). */
     static final int DEFAULT_KMAX = 50;
 
-    @Option(names = "--kmax", paramLabel = "N", description = "Largest k tried (default: 50, at most rows - 1).")
-    String kmax;
+    @Option(names = "--kmax", paramLabel = "N", converter = OptionNumbers.Count.class, description = "Largest k tried (default: 50, at most rows - 1).")
+    Integer kmax;
 
     @Option(names = "--cv", paramLabel = "loo|FOLDS", defaultValue = "loo",
-            description = "Cross-validation: loo (leave-one-out) or a number of folds (default: ${DEFAULT-VALUE}).")
-    String cv;
+            converter = OptionChoices.FoldsWords.class, completionCandidates = OptionChoices.FoldsWords.class,
+            description = "Cross-validation: loo (leave-one-out) or a number of folds (default: loo).")
+    int cv;
 
-    @Option(names = "--sample", paramLabel = "M",
+    @Option(names = "--sample", paramLabel = "M", converter = OptionNumbers.Count.class,
             description = "Leave-one-out on M rows chosen at random (seeded); by default "
                     + Tuning.DEFAULT_SAMPLE + " rows above " + Tuning.SAMPLE_ABOVE + ".")
-    String sample;
+    Integer sample;
 
     /** The folds of k-fold cross-validation, or 0 for leave-one-out. */
     int folds() {
-        if (cv.trim().equalsIgnoreCase("loo")) {
-            return 0;
-        }
-        int folds = OptionValues.positive("--cv", cv, "loo or a number of folds of at least 2");
-        if (folds < 2) {
-            throw new NearfitException("--cv: \"" + cv + "\" is not loo or a number of folds of at least 2");
-        }
-        return folds;
+        return cv;
     }
 
     /** Checks the values before any file is read. */
     void validate() {
         folds();
-        if (kmax != null) {
-            OptionValues.positive("--kmax", kmax, "a whole number of at least 1");
-        }
         if (sample != null) {
-            OptionValues.positive("--sample", sample, "a whole number of at least 1");
             if (folds() > 0) {
                 throw new NearfitException("--sample: applies to leave-one-out, not to --cv " + cv);
             }
@@ -55,13 +45,13 @@ final class TuningOptions {
         if (n < 2) {
             throw new NearfitException("tuning needs at least 2 reference rows, not " + n);
         }
-        int max = Math.min(kmax == null ? DEFAULT_KMAX : OptionValues.positive("--kmax", kmax, ""), n - 1);
+        int max = Math.min(kmax == null ? DEFAULT_KMAX : kmax, n - 1);
         int folds = folds();
         TuningTable t;
         if (folds > 0) {
             t = Tuning.kFold(model, max, folds, Tuning.DEFAULT_SEED, progress);
         } else if (sample != null) {
-            int m = OptionValues.positive("--sample", sample, "");
+            int m = sample;
             t = Tuning.leaveOneOut(model, max, m, Tuning.DEFAULT_SEED, progress);
         } else {
             t = Tuning.leaveOneOut(model, max, progress);
@@ -74,12 +64,12 @@ final class TuningOptions {
     }
 
     /**
-     * Fits the engine with the given k, or with {@code k = auto} ({@link OptionValues#K_AUTO}) tunes
+     * Fits the engine with the given k, or with {@code k = auto} ({@link OptionNumbers#K_AUTO}) tunes
      * and refits with the one-SE k; {@code words} carries every other setting.
      */
     Fitted fit(nearfit.knn.ReferenceData data, nearfit.model.ModelSettings words, int chosenK, int threads,
                java.io.PrintWriter err, boolean quiet) {
-        boolean auto = chosenK == OptionValues.K_AUTO;
+        boolean auto = chosenK == OptionNumbers.K_AUTO;
         nearfit.knn.KnnSettings settings = nearfit.model.EngineSettings.of(words.withK(auto ? 1 : chosenK), threads);
         KnnModel engine = KnnModel.fit(data, settings);
         if (!auto) {

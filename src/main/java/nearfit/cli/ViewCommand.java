@@ -5,12 +5,10 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
 
 import nearfit.knn.EstimateKind;
-import nearfit.model.ModelSettings;
 import nearfit.table.NearfitException;
 import nearfit.tui.CoreWorkbench;
 import nearfit.tui.Look;
@@ -42,10 +40,11 @@ final class ViewCommand implements Callable<Integer> {
     @Option(names = "--k", paramLabel = "K", description = "Neighbours per estimate (default 20).")
     int k;
 
-    @Option(names = "--estimate", paramLabel = "mean|median",
+    @Option(names = "--estimate", paramLabel = "mean|median", converter = OptionChoices.EstimateWords.class,
+            completionCandidates = OptionChoices.EstimateWords.class,
             description = "The curve: the neighbours' weighted mean or weighted median "
                     + "(default: mean; the c key switches).")
-    String estimate;
+    OptionChoices.EstimateChoice estimate;
 
     @Option(names = "--ascii", description = "Draw with plain ASCII instead of braille and box lines.")
     boolean ascii;
@@ -58,8 +57,7 @@ final class ViewCommand implements Callable<Integer> {
         if (k < 0) {
             throw new NearfitException("option --k: k must be at least 1, not " + k);
         }
-        String word = estimate == null ? "mean" : OptionValues.oneOf("--estimate", estimate, ModelSettings.ESTIMATES);
-        EstimateKind curve = EstimateKind.valueOf(word.toUpperCase(Locale.ROOT));
+        EstimateKind curve = estimate == null ? EstimateKind.MEAN : EstimateKind.valueOf(estimate.name());
         Path target = file;
         List<String> x = inputs;
         String y = response;

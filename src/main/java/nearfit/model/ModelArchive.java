@@ -20,6 +20,8 @@ import java.util.zip.ZipException;
 import java.util.zip.ZipFile;
 import java.util.zip.ZipOutputStream;
 
+import com.fasterxml.jackson.databind.JsonNode;
+
 import nearfit.table.NearfitException;
 
 /**
@@ -105,7 +107,7 @@ public final class ModelArchive {
     }
 
     /** What a model file holds: the manifest and the arrays by name (double[], int[] or long[]). */
-    public record Contents(Map<String, Object> manifest, Map<String, Object> arrays) {
+    public record Contents(JsonNode manifest, Map<String, Object> arrays) {
         /** The double array stored under {@code name}. */
         public double[] doubles(String name) {
             return (double[]) require(name, double[].class);
@@ -136,16 +138,16 @@ public final class ModelArchive {
     /**
      * Writes a model file atomically (see {@link SafeOutput}).
      *
-     * @param manifest the manifest's fields; {@code format}, {@code format_version} and {@code entries}
-     *                 are added here
+     * @param manifest the manifest's fields, a map or a record (its components in order, named in
+     *                 snake_case); {@code format}, {@code format_version} and {@code entries} are added here
      * @param arrays   named arrays, each a double[], int[] or long[]
      */
     public static void write(Path target, boolean force, Collection<Path> inputs,
-                             Map<String, Object> manifest, Map<String, Object> arrays) {
+                             Object manifest, Map<String, Object> arrays) {
         Map<String, Object> full = new LinkedHashMap<>();
         full.put("format", FORMAT_NAME);
         full.put("format_version", FORMAT_MAJOR + "." + FORMAT_MINOR);
-        full.putAll(manifest);
+        full.putAll(JsonText.fieldsOf(manifest));
         List<Object> entries = new ArrayList<>();
         ArrayBytes pieces = new ArrayBytes();
         Map<String, Long> crcs = new LinkedHashMap<>();
@@ -162,7 +164,7 @@ public final class ModelArchive {
             crcs.put(e.getKey(), sums.crc32());
         }
         full.put("entries", entries);
-        byte[] manifestBytes = (Json.write(full) + "\n").getBytes(StandardCharsets.UTF_8);
+        byte[] manifestBytes = (JsonText.write(full) + "\n").getBytes(StandardCharsets.UTF_8);
         byte[] digestBytes = (sha256(manifestBytes) + "\n").getBytes(StandardCharsets.US_ASCII);
         SafeOutput.write(target, force, inputs, out -> {
             ZipOutputStream zip = new ZipOutputStream(out, StandardCharsets.UTF_8);
@@ -254,7 +256,7 @@ public final class ModelArchive {
         private final String name;
         private final ZipFile zip;
         private final long fileSize;
-        private Map<String, Object> manifest;
+        private JsonNode manifest;
         private final Map<String, Listed> listed = new LinkedHashMap<>();
 
         private Opened(String name, ZipFile zip, long fileSize) {
@@ -269,7 +271,7 @@ public final class ModelArchive {
         }
 
         /** The parsed manifest (format, format_version and entries included). */
-        public Map<String, Object> manifest() {
+        public JsonNode manifest() {
             return manifest;
         }
 
@@ -328,24 +330,22 @@ public final class ModelArchive {
                             + MANIFEST_DIGEST);
                 }
             }
-            Object parsed;
+            JsonNode m;
             try {
-                parsed = Json.parse(new String(b, StandardCharsets.UTF_8));
+                m = JsonText.parse(new String(b, StandardCharsets.UTF_8));
             } catch (IllegalArgumentException e) {
                 throw NearfitException.inFile(name, "damaged manifest: " + e.getMessage());
             }
-            if (!(parsed instanceof Map<?, ?>) || !FORMAT_NAME.equals(((Map<?, ?>) parsed).get("format"))) {
+            if (!m.isObject() || !FORMAT_NAME.equals(m.path("format").textValue())) {
                 throw NearfitException.inFile(name, "is not a nearfit model (its manifest names another format)");
             }
-            @SuppressWarnings("unchecked")
-            Map<String, Object> m = (Map<String, Object>) parsed;
             int minor = checkVersion(m.get("format_version"), name);
             boolean digests = minor >= 1;
             if (digests && digestEntry == null) {
                 throw NearfitException.inFile(name, "is damaged: " + MANIFEST_DIGEST + " is missing (a model file of "
                         + "format " + FORMAT_MAJOR + ".1 or later has one)");
             }
-            for (Object o : listOf(m.get("entries"), name)) {
+            for (JsonNode o : listOf(m.get("entries"), name)) {
                 Listed l = listedOf(o, digests);
                 if (listed.put(l.name(), l) != null) {
                     throw NearfitException.inFile(name, "damaged manifest: entry " + l.name() + " is listed twice");
@@ -354,31 +354,35 @@ public final class ModelArchive {
             manifest = m;
         }
 
-        private Listed listedOf(Object o, boolean digests) {
-            if (!(o instanceof Map<?, ?> m)) {
+        private Listed listedOf(JsonNode m, boolean digests) {
+            if (!m.isObject()) {
                 throw NearfitException.inFile(name, "damaged manifest: an entry is not an object");
             }
-            if (!(m.get("name") instanceof String arrayName) || !ARRAY_NAME.matcher(arrayName).matches()) {
+            String arrayName = m.path("name").textValue();
+            if (arrayName == null || !ARRAY_NAME.matcher(arrayName).matches()) {
                 throw NearfitException.inFile(name, "damaged manifest: an entry has no valid name");
             }
-            ElementType type = m.get("type") instanceof String code ? ElementType.ofCode(code) : null;
+            String code = m.path("type").textValue();
+            ElementType type = code != null ? ElementType.ofCode(code) : null;
             if (type == null) {
                 throw bad(arrayName, "type", "is not f64, i32 or i64");
             }
             long count = wholeIn(m.get("count"), MAX_ENTRY_BYTES / type.width(), arrayName, "count");
             long crc = wholeIn(m.get("crc32"), 0xFFFF_FFFFL, arrayName, "crc32");
-            Object sha = m.get("sha256");
-            if ((sha != null || digests) && !(sha instanceof String hex && SHA256_HEX.matcher(hex).matches())) {
+            JsonNode sha = m.get("sha256");
+            boolean given = sha != null && !sha.isNull();
+            if ((given || digests) && !(given && sha.isTextual() && SHA256_HEX.matcher(sha.textValue()).matches())) {
                 throw bad(arrayName, "sha256", "is not 64 lower-case hex digits");
             }
-            return new Listed(arrayName, type, count, crc, (String) sha);
+            return new Listed(arrayName, type, count, crc, given ? sha.textValue() : null);
         }
 
-        private long wholeIn(Object v, long max, String arrayName, String field) {
-            if (!(v instanceof Double d) || d != Math.rint(d) || d < 0 || d > max) {
+        private long wholeIn(JsonNode v, long max, String arrayName, String field) {
+            if (v == null || !v.isNumber() || v.decimalValue().signum() != 0 && v.decimalValue().stripTrailingZeros().scale() > 0
+                    || v.decimalValue().signum() < 0 || v.decimalValue().compareTo(java.math.BigDecimal.valueOf(max)) > 0) {
                 throw bad(arrayName, field, "is not a whole number from 0 to " + max);
             }
-            return (long) (double) d;
+            return v.decimalValue().longValueExact();
         }
 
         private NearfitException bad(String arrayName, String field, String what) {
@@ -478,10 +482,10 @@ public final class ModelArchive {
     }
 
     /** The major.minor version as "1" or "1.1"; returns the minor (0 when absent). */
-    private static int checkVersion(Object version, String name) {
-        String v = String.valueOf(version);
+    private static int checkVersion(JsonNode version, String name) {
+        String v = version == null ? "null" : version.isTextual() ? version.textValue() : version.toString();
         java.util.regex.Matcher m = java.util.regex.Pattern.compile("(\\d{1,6})(?:\\.(\\d{1,6}))?").matcher(v);
-        if (!(version instanceof String) || !m.matches()) {
+        if (version == null || !version.isTextual() || !m.matches()) {
             throw NearfitException.inFile(name, "damaged manifest: format_version \"" + v + "\"");
         }
         if (Integer.parseInt(m.group(1)) != FORMAT_MAJOR) {
@@ -503,11 +507,11 @@ public final class ModelArchive {
         }
     }
 
-    private static List<?> listOf(Object o, String name) {
-        if (!(o instanceof List<?> list)) {
+    private static JsonNode listOf(JsonNode o, String name) {
+        if (o == null || !o.isArray()) {
             throw NearfitException.inFile(name, "damaged manifest: no entries list");
         }
-        return list;
+        return o;
     }
 
     private static void putStored(ZipOutputStream zip, String entryName, byte[] b) throws IOException {

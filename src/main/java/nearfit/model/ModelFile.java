@@ -1,5 +1,6 @@
 package nearfit.model;
 
+import java.math.BigDecimal;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.time.format.DateTimeParseException;
@@ -11,6 +12,17 @@ import java.util.List;
 import java.util.Map;
 
 import nearfit.table.NearfitException;
+
+import static nearfit.model.ManifestValues.finiteDoubles;
+import static nearfit.model.ManifestValues.integer;
+import static nearfit.model.ManifestValues.number;
+import static nearfit.model.ManifestValues.numberOrNaN;
+import static nearfit.model.ManifestValues.object;
+import static nearfit.model.ManifestValues.oneOf;
+import static nearfit.model.ManifestValues.spelled;
+import static nearfit.model.ManifestValues.text;
+import static nearfit.model.ManifestValues.texts;
+import static nearfit.model.ManifestValues.whole;
 
 /**
  * Saves and loads a {@link ReferenceModel} as a model file (suggested extension {@code .nfm}): a
@@ -58,44 +70,22 @@ public final class ModelFile {
      * mean), flags {threshold, residual_median, residual_scale,
      * z_scale}, tuning (the tune JSON object, or null).
      */
-    static Map<String, Object> manifestOf(ReferenceModel model) {
-        Map<String, Object> m = new LinkedHashMap<>();
-        m.put("tool_version", model.toolVersion());
-        m.put("created", model.created().truncatedTo(ChronoUnit.SECONDS).toString());
-        Map<String, Object> source = new LinkedHashMap<>();
-        source.put("name", model.source().name());
-        source.put("size", model.source().sizeBytes() < 0 ? null : (Object) model.source().sizeBytes());
-        source.put("sha256", model.source().sha256());
-        m.put("source", source);
-        m.put("row_condition", model.source().rowCondition());
-        m.put("rows", (long) model.rows().size());
+    static ManifestDocument manifestOf(ReferenceModel model) {
         ModelColumns c = model.columns();
-        Map<String, Object> columns = new LinkedHashMap<>();
-        columns.put("inputs", c.inputs());
-        columns.put("response", c.response());
-        columns.put("response_labels", c.responseLabels());
-        columns.put("group", c.group());
-        columns.put("group_labels", c.groupLabels());
-        m.put("columns", columns);
-        Map<String, Object> scaling = new LinkedHashMap<>();
-        scaling.put("method", model.settings().scaling());
-        scaling.put("center", model.scaleCenter());
-        scaling.put("spread", model.scaleSpread());
-        scaling.put("whitening", model.whitening());
-        m.put("scaling", scaling);
-        m.put("metric", model.settings().metric());
-        m.put("weights", model.settings().weights());
-        m.put("k", (long) model.settings().k());
-        m.put("band", model.settings().band());
-        m.put("estimate", model.settings().estimate());
-        Map<String, Object> flags = new LinkedHashMap<>();
-        flags.put("threshold", model.settings().flagThreshold());
-        flags.put("residual_median", model.residualScale().median());
-        flags.put("residual_scale", model.residualScale().scale());
-        flags.put("z_scale", model.settings().zScale());
-        m.put("flags", flags);
-        m.put("tuning", model.tuning() == null ? null : model.tuning().toJson());
-        return m;
+        ModelSettings s = model.settings();
+        return new ManifestDocument(model.toolVersion(),
+                model.created().truncatedTo(ChronoUnit.SECONDS).toString(),
+                new ManifestDocument.SourceFields(model.source().name(),
+                        model.source().sizeBytes() < 0 ? null : BigDecimal.valueOf(model.source().sizeBytes()),
+                        model.source().sha256()),
+                model.source().rowCondition(), BigDecimal.valueOf(model.rows().size()),
+                new ManifestDocument.ColumnFields(c.inputs(), c.response(), c.responseLabels(), c.group(), c.groupLabels()),
+                new ManifestDocument.ScalingFields(s.scaling(), ManifestDocument.listOf(model.scaleCenter()),
+                        ManifestDocument.listOf(model.scaleSpread()), ManifestDocument.listOf(model.whitening())),
+                s.metric(), s.weights(), BigDecimal.valueOf(s.k()), s.band(), s.estimate(),
+                new ManifestDocument.FlagFields(s.flagThreshold(), model.residualScale().median(),
+                        model.residualScale().scale(), s.zScale()),
+                model.tuning() == null ? null : (ManifestDocument.TuningFields) model.tuning().toJson());
     }
 
     /**
@@ -112,9 +102,9 @@ public final class ModelFile {
     public static ReferenceModel read(Path path) {
         String name = path.toString();
         try (ModelArchive.Opened archive = ModelArchive.open(path)) {
-            ManifestFields m = ManifestFields.root(archive.manifest());
-            int rows = m.integer("rows", 0, Integer.MAX_VALUE);
-            ModelColumns columns = columnsOf(m.object("columns"));
+            ManifestDocument m = ManifestDocument.of(archive.manifest());
+            int rows = integer("rows", m.rows(), 0, Integer.MAX_VALUE);
+            ModelColumns columns = columnsOf(object("columns", m.columns()));
             Described described = describedOf(m, columns, rows);
             ReferenceRows stored = rowsOf(archive.read(needs(columns, rows)), columns);
             checkCodes(stored, columns);
@@ -144,19 +134,20 @@ public final class ModelFile {
         return needs;
     }
 
-    private static ModelColumns columnsOf(ManifestFields col) {
-        List<String> inputs = col.texts("inputs");
-        String response = col.text("response");
-        List<String> responseLabels = col.texts("response_labels");
-        String group = col.textOrNull("group");
-        List<String> groupLabels = col.texts("group_labels");
+    private static ModelColumns columnsOf(ManifestDocument.ColumnFields col) {
+        List<String> inputs = texts("columns.inputs", col.inputs());
+        String response = text("columns.response", col.response());
+        List<String> responseLabels = texts("columns.response_labels", col.responseLabels());
+        String group = col.group();
+        List<String> groupLabels = texts("columns.group_labels", col.groupLabels());
         if (inputs.isEmpty() || inputs.size() > MAX_INPUTS) {
-            throw col.bad("inputs", "has " + inputs.size() + " names; a model has 1 to " + MAX_INPUTS + " inputs");
+            throw ManifestDocument.bad("columns.inputs", "has " + inputs.size() + " names; a model has 1 to "
+                    + MAX_INPUTS + " inputs");
         }
         try {
             return new ModelColumns(inputs, response, responseLabels, group, groupLabels);
         } catch (IllegalArgumentException e) {
-            throw new IllegalArgumentException("manifest field \"" + col.path() + "\": " + e.getMessage(), e);
+            throw new IllegalArgumentException("manifest field \"columns\": " + e.getMessage(), e);
         }
     }
 
@@ -170,68 +161,72 @@ public final class ModelFile {
         }
     }
 
-    private static Described describedOf(ManifestFields m, ModelColumns columns, int rows) {
-        ManifestFields src = m.object("source");
-        String sha = src.textOrNull("sha256");
+    private static Described describedOf(ManifestDocument m, ModelColumns columns, int rows) {
+        ManifestDocument.SourceFields src = object("source", m.source());
+        String sha = src.sha256();
         if (sha != null && !sha.matches("[0-9a-f]{64}")) {
-            throw src.bad("sha256", "is not 64 lower-case hex digits");
+            throw ManifestDocument.bad("source.sha256", "is not 64 lower-case hex digits");
         }
-        String sourceName = src.text("name");
+        String sourceName = text("source.name", src.name());
         if (sourceName.isEmpty()) {
-            throw src.bad("name", "is empty");
+            throw ManifestDocument.bad("source.name", "is empty");
         }
         SourceInfo source = new SourceInfo(sourceName,
-                src.required("size") == null ? -1 : src.whole("size", 0, MAX_EXACT_WHOLE), sha,
-                m.textOrNull("row_condition"));
+                src.size() == null ? -1 : whole("source.size", src.size(), 0, MAX_EXACT_WHOLE), sha,
+                m.rowCondition());
         ModelSettings settings = settingsOf(m, rows);
-        ManifestFields scaling = m.object("scaling");
+        ManifestDocument.ScalingFields scaling = m.scaling();
         int d = columns.inputs().size();
-        double[] center = scaling.finiteDoubles("center", d);
-        double[] spread = scaling.finiteDoubles("spread", d);
-        checkScaling(scaling, settings.scaling(), center, spread);
+        double[] center = finiteDoubles("scaling.center", scaling.center(), d);
+        double[] spread = finiteDoubles("scaling.spread", scaling.spread(), d);
+        checkScaling(settings.scaling(), center, spread);
         double[] whitening = whiteningOf(scaling, settings.metric(), d);
-        ManifestFields flags = m.object("flags");
+        ManifestDocument.FlagFields flags = m.flags();
         ReferenceModel.ResidualScale residual = new ReferenceModel.ResidualScale(
-                flags.numberOrNaN("residual_median"), flags.numberOrNaN("residual_scale"));
+                numberOrNaN("flags.residual_median", flags.residualMedian()),
+                numberOrNaN("flags.residual_scale", flags.residualScale()));
         if (residual.scale() < 0) {
-            throw flags.bad("residual_scale", "is " + Json.write(residual.scale()) + "; a scale cannot be negative");
+            throw ManifestDocument.bad("flags.residual_scale", "is " + spelled(residual.scale())
+                    + "; a scale cannot be negative");
         }
-        TuningSummary tuning = m.required("tuning") == null ? null : TuningSummary.fromJson(m.object("tuning"));
-        return new Described(m.text("tool_version"), created(m), source, columns, settings, center, spread,
-                whitening, residual, tuning);
+        TuningSummary tuning = m.tuning() == null ? null : TuningSummary.fromManifest(m.tuning(), "tuning");
+        return new Described(text("tool_version", m.toolVersion()), created(m), source, columns, settings, center,
+                spread, whitening, residual, tuning);
     }
 
     /** The settings; k must be at least 1 and at most the stored rows. */
-    private static ModelSettings settingsOf(ManifestFields m, int rows) {
-        ManifestFields scaling = m.object("scaling");
-        ManifestFields flags = m.object("flags");
-        String metric = m.oneOf("metric", ModelSettings.METRICS);
-        String weights = m.oneOf("weights", ModelSettings.WEIGHTS);
-        String method = scaling.oneOf("method", ModelSettings.SCALINGS);
-        String band = m.oneOf("band", ModelSettings.BANDS);
-        String zScale = flags.oneOf("z_scale", ModelSettings.Z_SCALES);
+    private static ModelSettings settingsOf(ManifestDocument m, int rows) {
+        ManifestDocument.ScalingFields scaling = object("scaling", m.scaling());
+        ManifestDocument.FlagFields flags = object("flags", m.flags());
+        String metric = oneOf("metric", m.metric(), ModelSettings.METRICS);
+        String weights = oneOf("weights", m.weights(), ModelSettings.WEIGHTS);
+        String method = oneOf("scaling.method", scaling.method(), ModelSettings.SCALINGS);
+        String band = oneOf("band", m.band(), ModelSettings.BANDS);
+        String zScale = oneOf("flags.z_scale", flags.zScale(), ModelSettings.Z_SCALES);
         if (rows == 0) {
             throw new IllegalArgumentException("the model holds no usable reference rows (its manifest says \"rows\": 0)");
         }
-        int k = m.integer("k", 1, rows);
-        double threshold = flags.number("threshold");
+        int k = integer("k", m.k(), 1, rows);
+        double threshold = number("flags.threshold", flags.threshold());
         if (!(threshold > 0)) {
-            throw flags.bad("threshold", "is " + Json.write(threshold) + "; a flag threshold must be positive");
+            throw ManifestDocument.bad("flags.threshold", "is " + spelled(threshold)
+                    + "; a flag threshold must be positive");
         }
         // Files written before the estimate existed have no field: they were fitted with the mean.
-        String estimate = m.present("estimate") ? m.oneOf("estimate", ModelSettings.ESTIMATES) : ModelSettings.ESTIMATES.get(0);
+        String estimate = m.estimate() != null ? oneOf("estimate", m.estimate(), ModelSettings.ESTIMATES)
+                : ModelSettings.ESTIMATES.get(0);
         return new ModelSettings(metric, weights, method, k, band, threshold, zScale, estimate);
     }
 
     /** Spreads positive and of normal size (a subnormal divisor overflows); "none" is centre 0, spread 1. */
-    private static void checkScaling(ManifestFields scaling, String method, double[] center, double[] spread) {
+    private static void checkScaling(String method, double[] center, double[] spread) {
         for (int j = 0; j < spread.length; j++) {
             if (!(spread[j] >= Double.MIN_NORMAL)) {
-                throw scaling.bad("spread[" + j + "]", "is " + Json.write(spread[j]) + "; a spread must be positive"
-                        + (spread[j] > 0 ? " and at least " + Double.MIN_NORMAL : ""));
+                throw ManifestDocument.bad("scaling.spread[" + j + "]", "is " + spelled(spread[j])
+                        + "; a spread must be positive" + (spread[j] > 0 ? " and at least " + Double.MIN_NORMAL : ""));
             }
             if ("none".equals(method) && (center[j] != 0 || spread[j] != 1)) {
-                throw scaling.bad(center[j] != 0 ? "center[" + j + "]" : "spread[" + j + "]",
+                throw ManifestDocument.bad(center[j] != 0 ? "scaling.center[" + j + "]" : "scaling.spread[" + j + "]",
                         "must be " + (center[j] != 0 ? "0" : "1") + " when \"scaling.method\" is none");
             }
         }
@@ -241,26 +236,26 @@ public final class ModelFile {
      * The whitening matrix: for the Mahalanobis metric d×d finite values, lower triangular with a
      * positive diagonal (the inverse of a Cholesky factor, as the fit computes it); else null.
      */
-    private static double[] whiteningOf(ManifestFields scaling, String metric, int d) {
+    private static double[] whiteningOf(ManifestDocument.ScalingFields scaling, String metric, int d) {
         boolean mahalanobis = "mahalanobis".equals(metric);
         if (!mahalanobis) {
-            if (scaling.required("whitening") != null) {
-                throw scaling.bad("whitening", "must be null for the " + metric + " metric");
+            if (scaling.whitening() != null) {
+                throw ManifestDocument.bad("scaling.whitening", "must be null for the " + metric + " metric");
             }
             return null;
         }
-        if (scaling.required("whitening") == null) {
-            throw scaling.bad("whitening", "is missing (null); the mahalanobis metric needs it");
+        if (scaling.whitening() == null) {
+            throw ManifestDocument.bad("scaling.whitening", "is missing (null); the mahalanobis metric needs it");
         }
-        double[] w = scaling.finiteDoubles("whitening", d * d);
+        double[] w = finiteDoubles("scaling.whitening", scaling.whitening(), d * d);
         for (int i = 0; i < d; i++) {
             if (!(w[i * d + i] > 0)) {
-                throw scaling.bad("whitening[" + (i * d + i) + "]", "is " + Json.write(w[i * d + i])
+                throw ManifestDocument.bad("scaling.whitening[" + (i * d + i) + "]", "is " + spelled(w[i * d + i])
                         + "; the diagonal of the whitening matrix must be positive");
             }
             for (int k = i + 1; k < d; k++) {
                 if (w[i * d + k] != 0) {
-                    throw scaling.bad("whitening[" + (i * d + k) + "]", "is " + Json.write(w[i * d + k])
+                    throw ManifestDocument.bad("scaling.whitening[" + (i * d + k) + "]", "is " + spelled(w[i * d + k])
                             + "; the whitening matrix is lower triangular, so it must be 0");
                 }
             }
@@ -299,12 +294,12 @@ public final class ModelFile {
         }
     }
 
-    private static Instant created(ManifestFields m) {
-        String text = m.text("created");
+    private static Instant created(ManifestDocument m) {
+        String text = text("created", m.created());
         try {
             return Instant.parse(text);
         } catch (DateTimeParseException e) {
-            throw m.bad("created", "is not an ISO 8601 UTC time: " + text);
+            throw ManifestDocument.bad("created", "is not an ISO 8601 UTC time: " + text);
         }
     }
 }

@@ -1,7 +1,8 @@
 package nearfit.model;
 
-import java.util.LinkedHashMap;
-import java.util.Map;
+import java.math.BigDecimal;
+import java.util.ArrayList;
+import java.util.List;
 
 /**
  * A tuning table as the {@code tune} command prints it and a model file keeps it: one figure per
@@ -53,53 +54,49 @@ public record TuningSummary(long rows, int[] k, double[] rmse, double[] rmseSe, 
     }
 
     /**
-     * The JSON object of the {@code tune --format json} output, keys in this order: rows, k, then
-     * rmse, rmse_se, mae, press, r2_pred (or error_rate, error_rate_se), best_k, one_se_k, sampled.
+     * The JSON object of the {@code tune --format json} output and of a manifest's {@code tuning}, a
+     * record the JSON library writes, keys in this order: rows, k, then rmse, rmse_se, mae, press,
+     * r2_pred (or error_rate, error_rate_se), best_k, one_se_k, sampled (null when every row was
+     * used), and scheme when recorded.
      */
-    public Map<String, Object> toJson() {
-        Map<String, Object> m = new LinkedHashMap<>();
-        m.put("rows", rows);
-        m.put("k", k);
-        if (forCategories()) {
-            m.put("error_rate", errorRate);
-            m.put("error_rate_se", errorRateSe);
-        } else {
-            m.put("rmse", rmse);
-            m.put("rmse_se", rmseSe);
-            m.put("mae", mae);
-            m.put("press", press);
-            m.put("r2_pred", r2Pred);
+    public Object toJson() {
+        List<BigDecimal> ks = new ArrayList<>(k.length);
+        for (int v : k) {
+            ks.add(BigDecimal.valueOf(v));
         }
-        m.put("best_k", (long) bestK);
-        m.put("one_se_k", (long) oneSeK);
-        m.put("sampled", sampled < 0 ? null : (Object) sampled);
-        if (scheme != null) {
-            m.put("scheme", scheme);
-        }
-        return m;
+        return new ManifestDocument.TuningFields(BigDecimal.valueOf(rows), ks, ManifestDocument.listOf(rmse),
+                ManifestDocument.listOf(rmseSe), ManifestDocument.listOf(mae), ManifestDocument.listOf(press),
+                ManifestDocument.listOf(r2Pred), ManifestDocument.listOf(errorRate),
+                ManifestDocument.listOf(errorRateSe), BigDecimal.valueOf(bestK), BigDecimal.valueOf(oneSeK),
+                sampled < 0 ? null : BigDecimal.valueOf(sampled), scheme);
     }
 
-    /** Reads the object {@link #toJson()} writes; throws {@link IllegalArgumentException} naming a bad field. */
-    static TuningSummary fromJson(ManifestFields m) {
-        int[] k = m.ints("k", 1, Integer.MAX_VALUE);
-        boolean categories = m.map().containsKey("error_rate");
-        long sampled = m.present("sampled") ? m.whole("sampled", 0, Long.MAX_VALUE >> 11) : -1;
+    /**
+     * Reads the object {@link #toJson()} writes, as a manifest binds it at {@code path}; throws
+     * {@link IllegalArgumentException} naming a bad field.
+     */
+    static TuningSummary fromManifest(ManifestDocument.TuningFields t, String path) {
+        int[] k = ManifestValues.ints(path + ".k", t.k(), 1, Integer.MAX_VALUE);
+        boolean categories = t.errorRate() != null;
+        long sampled = t.sampled() != null ? ManifestValues.whole(path + ".sampled", t.sampled(), 0, Long.MAX_VALUE >> 11)
+                : -1;
         try {
-            return new TuningSummary(m.whole("rows", 0, Integer.MAX_VALUE), k,
-                    categories ? null : m.doubles("rmse"),
-                    categories ? null : m.doubles("rmse_se"),
-                    categories ? null : m.doubles("mae"),
-                    categories ? null : m.doubles("press"),
-                    categories ? null : m.doubles("r2_pred"),
-                    categories ? m.doubles("error_rate") : null,
-                    categories ? m.doubles("error_rate_se") : null,
-                    m.integer("best_k", 1, Integer.MAX_VALUE), m.integer("one_se_k", 1, Integer.MAX_VALUE),
-                    sampled, m.present("scheme") ? m.text("scheme") : null);
+            return new TuningSummary(ManifestValues.whole(path + ".rows", t.rows(), 0, Integer.MAX_VALUE), k,
+                    categories ? null : ManifestValues.doubles(path + ".rmse", t.rmse()),
+                    categories ? null : ManifestValues.doubles(path + ".rmse_se", t.rmseSe()),
+                    categories ? null : ManifestValues.doubles(path + ".mae", t.mae()),
+                    categories ? null : ManifestValues.doubles(path + ".press", t.press()),
+                    categories ? null : ManifestValues.doubles(path + ".r2_pred", t.r2Pred()),
+                    categories ? ManifestValues.doubles(path + ".error_rate", t.errorRate()) : null,
+                    categories ? ManifestValues.doubles(path + ".error_rate_se", t.errorRateSe()) : null,
+                    ManifestValues.integer(path + ".best_k", t.bestK(), 1, Integer.MAX_VALUE),
+                    ManifestValues.integer(path + ".one_se_k", t.oneSeK(), 1, Integer.MAX_VALUE),
+                    sampled, t.scheme());
         } catch (IllegalArgumentException e) {
             if (e.getMessage().startsWith("manifest field")) {
                 throw e;
             }
-            throw new IllegalArgumentException("manifest field \"" + m.path() + "\": " + e.getMessage(), e);
+            throw new IllegalArgumentException("manifest field \"" + path + "\": " + e.getMessage(), e);
         }
     }
 }

@@ -10,7 +10,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 
-import nearfit.model.Json;
+import nearfit.model.JsonTrees;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -95,7 +95,7 @@ class BatchCommandsTest {
     void checkFailsWithStatus1WhenATurbineUnderPerforms() {
         CliRun.Result r = CliRun.inProcess("check", model, weak.toString(), "--quiet", "--format", "json");
         assertEquals(1, r.status(), r.toString());
-        Map<?, ?> json = (Map<?, ?>) Json.parse(r.out().strip());
+        Map<?, ?> json = (Map<?, ?>) JsonTrees.parse(r.out().strip());
         assertEquals(900.0, json.get("rows"));
         assertEquals(Boolean.FALSE, json.get("passed"));
         Map<?, ?> byGroup = (Map<?, ?>) json.get("by_group");
@@ -135,7 +135,7 @@ class BatchCommandsTest {
         CliRun.Result r = CliRun.inProcess("tune", healthy.toString(), "-x", "wind_ms", "-y", "power_kw",
                 "--kmax", "30", "--format", "json", "--quiet");
         assertEquals(0, r.status(), r.toString());
-        Map<?, ?> json = (Map<?, ?>) Json.parse(r.out().strip());
+        Map<?, ?> json = (Map<?, ?>) JsonTrees.parse(r.out().strip());
         assertEquals(List.of("rows", "k", "rmse", "rmse_se", "mae", "press", "r2_pred", "best_k", "one_se_k",
                 "sampled"), List.copyOf(json.keySet()));
         assertEquals(900.0, json.get("rows"));
@@ -150,7 +150,7 @@ class BatchCommandsTest {
     void fitWithKAutoTakesTheOneSeKOfTune() {
         CliRun.Result tune = CliRun.inProcess("tune", healthy.toString(), "-x", "wind_ms", "-y", "power_kw",
                 "--format", "json", "--quiet");
-        long oneSe = Math.round((Double) ((Map<?, ?>) Json.parse(tune.out().strip())).get("one_se_k"));
+        long oneSe = Math.round((Double) ((Map<?, ?>) JsonTrees.parse(tune.out().strip())).get("one_se_k"));
         CliRun.Result fit = CliRun.inProcess("fit", healthy.toString(), "-x", "wind_ms", "-y", "power_kw",
                 "-o", dir.resolve("auto.nfm").toString(), "--quiet");
         assertEquals(0, fit.status(), fit.toString());
@@ -162,7 +162,7 @@ class BatchCommandsTest {
         CliRun.Result r = CliRun.inProcess("fit", healthy.toString(), "-x", "wind_ms", "-y", "power_kw",
                 "--k", "abc", "-o", dir.resolve("x.nfm").toString());
         assertEquals(2, r.status());
-        assertEquals("nearfit: --k: \"abc\" is not a whole number or auto", r.err().strip());
+        assertEquals("nearfit: Invalid value for option '--k': \"abc\" is not a whole number of at least 1 or auto", r.err().strip());
     }
 
     @Test

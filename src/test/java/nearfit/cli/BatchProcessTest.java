@@ -59,7 +59,7 @@ class BatchProcessTest {
     void aBadOptionAsAProcessExits2WithOneLineAndNoStackTrace() throws Exception {
         CliRun.Result r = CliRun.process(dir, "check", "ref.nfm", "jan.csv", "--limit", "lots");
         assertEquals(2, r.status());
-        assertEquals("nearfit: --limit: \"lots\" is not a percentage from 0 to 100", r.err().strip());
+        assertEquals("nearfit: Invalid value for option '--limit': \"lots\" is not a percentage from 0 to 100", r.err().strip());
     }
 
     /**

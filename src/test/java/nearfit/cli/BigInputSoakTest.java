@@ -183,7 +183,7 @@ class BigInputSoakTest {
         // 0: within the flagged-share limit; 1: over it. Either is a finished check.
         assertTrue(r.status() == 0 || r.status() == 1, r.err());
         assertEquals("", r.err());
-        Object rows = ((java.util.Map<?, ?>) nearfit.model.Json.parse(r.out().strip())).get("rows");
+        Object rows = ((java.util.Map<?, ?>) nearfit.model.JsonTrees.parse(r.out().strip())).get("rows");
         assertEquals((double) ROWS, rows, r.out());
     }
 

@@ -10,7 +10,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
-import nearfit.model.Json;
+import nearfit.model.JsonTrees;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -54,7 +54,7 @@ class CategoryResponseTest {
         CliRun.Result r = CliRun.inProcess("tune", log.toString(), "-x", "flow_m3h,head_m", "-y", "state",
                 "--kmax", "9", "--format", "json", "--quiet");
         assertEquals(0, r.status(), r.toString());
-        Map<?, ?> json = (Map<?, ?>) Json.parse(r.out().strip());
+        Map<?, ?> json = (Map<?, ?>) JsonTrees.parse(r.out().strip());
         assertEquals(List.of("rows", "k", "error_rate", "error_rate_se", "best_k", "one_se_k", "sampled"),
                 List.copyOf(json.keySet()));
         assertTrue((Double) ((List<?>) json.get("error_rate")).get(0) < 0.05, r.out());

@@ -12,7 +12,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
-import nearfit.model.Json;
+import nearfit.model.JsonTrees;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -76,7 +76,7 @@ class CheckCommandTest {
                 + "2026-02-01T00:10:00Z,T01,7,5,800\n2026-02-01T00:20:00Z,T01,8.5,1100\n", StandardCharsets.UTF_8);
         CliRun.Result r = CliRun.inProcess("check", model, ragged.toString(), "--limit", "100", "--format", "json");
         assertEquals(0, r.status(), r.toString());
-        assertEquals(2.0, ((Map<?, ?>) Json.parse(r.out())).get("rows"), "the line with a decimal comma is not a row");
+        assertEquals(2.0, ((Map<?, ?>) JsonTrees.parse(r.out())).get("rows"), "the line with a decimal comma is not a row");
         assertTrue(r.err().contains(" in ") && r.err().contains("; 1 ragged rows dropped (another number of fields "
                 + "than the header; describe lists their lines)\n"), r.err());
     }
@@ -98,7 +98,7 @@ class CheckCommandTest {
         CliRun.Result r = CliRun.inProcess("check", model, kmh.toString(), "--quiet", "--limit", "100",
                 "--format", "json");
         assertEquals(0, r.status(), "with no --max-outside the rows beyond are reported, not judged: " + r);
-        Map<?, ?> beyond = (Map<?, ?>) ((Map<?, ?>) Json.parse(r.out())).get("beyond_reference");
+        Map<?, ?> beyond = (Map<?, ?>) ((Map<?, ?>) JsonTrees.parse(r.out())).get("beyond_reference");
         double share = (Double) beyond.get("fraction");
         // Winds of 2..16 m/s become 7.2..57.6 km/h: every row above 16 km/h lies above the reference's range.
         assertTrue(share > 0.7, beyond.toString());
@@ -132,7 +132,7 @@ class CheckCommandTest {
         CliRun.Result r = CliRun.inProcess("check", ringModel, centre.toString(), "--quiet", "--limit", "100",
                 "--format", "json");
         assertEquals(0, r.status(), r.toString());
-        Map<?, ?> beyond = (Map<?, ?>) ((Map<?, ?>) Json.parse(r.out())).get("beyond_reference");
+        Map<?, ?> beyond = (Map<?, ?>) ((Map<?, ?>) JsonTrees.parse(r.out())).get("beyond_reference");
         assertEquals(2.0, beyond.get("far"), beyond.toString());
         assertEquals(2.0, beyond.get("rows"), beyond.toString());
         for (Object input : ((Map<?, ?>) beyond.get("by_input")).values()) {
@@ -146,7 +146,7 @@ class CheckCommandTest {
         CliRun.Result r = CliRun.inProcess("check", model, healthy.toString(), "--quiet", "--where", "wind_ms > 3",
                 "--format", "json");
         assertEquals(0, r.status(), r.toString());
-        Map<?, ?> checked = (Map<?, ?>) ((Map<?, ?>) Json.parse(r.out())).get("checked");
+        Map<?, ?> checked = (Map<?, ?>) ((Map<?, ?>) JsonTrees.parse(r.out())).get("checked");
         java.security.MessageDigest sha = java.security.MessageDigest.getInstance("SHA-256");
         String expected = java.util.HexFormat.of().formatHex(sha.digest(Files.readAllBytes(Path.of(model))));
         assertEquals(expected, checked.get("model_sha256"));

@@ -12,7 +12,7 @@ import java.util.Map;
 
 import nearfit.knn.Estimates;
 import nearfit.knn.ScoredBlock;
-import nearfit.model.Json;
+import nearfit.model.JsonTrees;
 import org.junit.jupiter.api.Test;
 
 class CheckReportTest {
@@ -76,7 +76,7 @@ class CheckReportTest {
 
     @Test
     void jsonCarriesTheDocumentedFieldsAndTheCaution() {
-        Map<?, ?> m = (Map<?, ?>) Json.parse(sample(0.01).toJson());
+        Map<?, ?> m = (Map<?, ?>) JsonTrees.parse(sample(0.01).toJson());
         assertEquals(List.of("checked", "rows", "scored", "flagged", "flagged_fraction", "limit", "passed", "threshold",
                 "beyond_reference", "by_group", "worst", "caution"), List.copyOf(m.keySet()));
         assertEquals(Boolean.FALSE, m.get("passed"));

@@ -8,7 +8,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Map;
 
-import nearfit.model.Json;
+import nearfit.model.JsonTrees;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -39,7 +39,7 @@ class DemoLogCheckTest {
         CliRun.Result r = CliRun.inProcess("check", model, log, "--quiet", "--format", "json",
                 "--where", "turbine = T01 and time >= 2025-09-01 and time < 2025-11-01");
         assertEquals(0, r.status(), r.toString());
-        Map<?, ?> json = (Map<?, ?>) Json.parse(r.out().strip());
+        Map<?, ?> json = (Map<?, ?>) JsonTrees.parse(r.out().strip());
         assertTrue((Double) json.get("flagged_fraction") < 0.002, r.out());
     }
 

@@ -11,7 +11,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 
-import nearfit.model.Json;
+import nearfit.model.JsonTrees;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -43,7 +43,7 @@ class DemoLogRangesTest {
         int status = Main.run(new String[] {"describe", demoLog().toString(), "--format", "json", "--quiet"},
                 new PrintWriter(out), new PrintWriter(err));
         assertEquals(0, status, err.toString());
-        Map<?, ?> doc = (Map<?, ?>) Json.parse(out.toString());
+        Map<?, ?> doc = (Map<?, ?>) JsonTrees.parse(out.toString());
         Map<String, Map<?, ?>> byName = new HashMap<>();
         for (Object c : (List<?>) doc.get("columns")) {
             Map<?, ?> column = (Map<?, ?>) c;

@@ -11,7 +11,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 
-import nearfit.model.Json;
+import nearfit.model.JsonTrees;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -60,7 +60,7 @@ class DescribeCommandTest {
         assertEquals(0, r.status(), r.err());
         assertEquals(1, r.out().strip().lines().count());
         @SuppressWarnings("unchecked")
-        Map<String, Object> doc = (Map<String, Object>) Json.parse(r.out());
+        Map<String, Object> doc = (Map<String, Object>) JsonTrees.parse(r.out());
         assertEquals(11.0, ((Number) doc.get("rows")).doubleValue());
         assertEquals(1.0, ((Number) doc.get("ragged_rows")).doubleValue());
         assertEquals(1.0, ((Number) doc.get("dropped_rows")).doubleValue());

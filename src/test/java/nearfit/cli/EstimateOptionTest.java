@@ -102,6 +102,6 @@ class EstimateOptionTest {
         assertTrue(r.err().contains("--estimate") && r.err().contains("mean, median"), r.err());
         CliRun.Result view = CliRun.inProcess("view", reference.toString(), "--estimate", "mode");
         assertEquals(2, view.status(), view.toString());
-        assertTrue(view.err().contains("--estimate: \"mode\" is not one of mean, median"), view.err());
+        assertTrue(view.err().contains("--estimate': \"mode\" is not one of mean, median"), view.err());
     }
 }

@@ -59,6 +59,6 @@ class PlotCommandTest {
     void aBadSizeIsAUsageErrorNamingTheOption() {
         CliRun.Result r = CliRun.inProcess("plot", log, "-x", "wind_ms", "-y", "power_kw", "--size", "wide");
         assertEquals(2, r.status());
-        assertTrue(r.err().startsWith("nearfit: --size: \"wide\""), r.err());
+        assertTrue(r.err().startsWith("nearfit: Invalid value for option '--size': \"wide\""), r.err());
     }
 }

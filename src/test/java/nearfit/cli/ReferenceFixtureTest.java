@@ -11,7 +11,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 
-import nearfit.model.Json;
+import nearfit.model.JsonTrees;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -65,7 +65,7 @@ class ReferenceFixtureTest {
         CliRun.Result r = CliRun.inProcess("tune", reference.toString(), "-x", "wind_ms,air_temp_c", "-y", "power_kw",
                 "--scale", "none", "--kmax", "15", "--format", "json", "--quiet");
         assertEquals(0, r.status(), r.toString());
-        Map<?, ?> json = (Map<?, ?>) Json.parse(r.out().strip());
+        Map<?, ?> json = (Map<?, ?>) JsonTrees.parse(r.out().strip());
         List<?> rmse = (List<?>) json.get("rmse");
         List<?> mae = (List<?>) json.get("mae");
         List<String> lines = resourceLines("sklearn-loo.csv");

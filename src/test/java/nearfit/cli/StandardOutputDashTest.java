@@ -18,7 +18,7 @@ import java.util.List;
 
 import javax.imageio.ImageIO;
 
-import nearfit.model.Json;
+import nearfit.model.JsonTrees;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -69,7 +69,7 @@ class StandardOutputDashTest {
         assertEquals(Files.readString(file), dash.out());
         assertTrue(dash.out().lines().count() > 10, "T02's weak rows are flagged: " + dash.out());
         String report = dash.err().strip();
-        Object json = Json.parse(report);
+        Object json = JsonTrees.parse(report);
         assertTrue(json instanceof java.util.Map<?, ?>, report);
         // The same report as with a file, but for the time of the run.
         assertEquals(toFile.out().strip().replaceAll("\"run_at\":\"[^\"]*\"", ""),

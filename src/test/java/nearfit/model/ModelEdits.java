@@ -43,7 +43,7 @@ public final class ModelEdits {
     /** The manifest as parsed JSON (mutable maps and lists). */
     @SuppressWarnings("unchecked")
     public static Map<String, Object> manifest(byte[] zip) {
-        return (Map<String, Object>) Json.parse(new String(entries(zip).get(ModelArchive.MANIFEST),
+        return (Map<String, Object>) JsonTrees.parse(new String(entries(zip).get(ModelArchive.MANIFEST),
                 StandardCharsets.UTF_8));
     }
 
@@ -55,7 +55,7 @@ public final class ModelEdits {
         Map<String, Object> m = manifest(zip);
         edit.accept(m);
         Map<String, byte[]> entries = entries(zip);
-        byte[] manifest = (Json.write(m) + "\n").getBytes(StandardCharsets.UTF_8);
+        byte[] manifest = (JsonTrees.write(m) + "\n").getBytes(StandardCharsets.UTF_8);
         entries.put(ModelArchive.MANIFEST, manifest);
         entries.put(ModelArchive.MANIFEST_DIGEST, (sha256(manifest) + "\n").getBytes(StandardCharsets.US_ASCII));
         return stored(entries);
@@ -95,7 +95,7 @@ public final class ModelEdits {
                 }
             }
         }
-        byte[] manifest = (Json.write(m) + "\n").getBytes(StandardCharsets.UTF_8);
+        byte[] manifest = (JsonTrees.write(m) + "\n").getBytes(StandardCharsets.UTF_8);
         entries.put(ModelArchive.MANIFEST, manifest);
         entries.put(ModelArchive.MANIFEST_DIGEST, (sha256(manifest) + "\n").getBytes(StandardCharsets.US_ASCII));
         return stored(entries);

@@ -42,7 +42,7 @@ class ModelEstimateFieldTest {
         ModelSettings median = new ModelSettings(s.metric(), s.weights(), s.scaling(), s.k(), s.band(),
                 s.flagThreshold(), s.zScale(), "median");
         ReferenceModel m = withSettings(sample, median);
-        Map<String, Object> manifest = ModelFile.manifestOf(m);
+        Map<String, Object> manifest = JsonText.fieldsOf(ModelFile.manifestOf(m));
         assertEquals("median", manifest.get("estimate"));
         ReferenceModel back = ModelFile.read(write(manifest, m, "median.nfm"));
         assertEquals("median", back.settings().estimate());
@@ -52,7 +52,7 @@ class ModelEstimateFieldTest {
     @Test
     void aManifestWrittenBeforeTheFieldReadsAsTheMean() {
         ReferenceModel m = ModelFileTest.sample(false);
-        Map<String, Object> manifest = ModelFile.manifestOf(m);
+        Map<String, Object> manifest = JsonText.fieldsOf(ModelFile.manifestOf(m));
         manifest.remove("estimate");
         ReferenceModel back = ModelFile.read(write(manifest, m, "old.nfm"));
         assertEquals("mean", back.settings().estimate());
@@ -62,7 +62,7 @@ class ModelEstimateFieldTest {
     @Test
     void anUnknownEstimateIsADamagedModelNamingTheField() {
         ReferenceModel m = ModelFileTest.sample(false);
-        Map<String, Object> manifest = ModelFile.manifestOf(m);
+        Map<String, Object> manifest = JsonText.fieldsOf(ModelFile.manifestOf(m));
         manifest.put("estimate", "mode");
         Path p = write(manifest, m, "mode.nfm");
         NearfitException e = assertThrows(NearfitException.class, () -> ModelFile.read(p));

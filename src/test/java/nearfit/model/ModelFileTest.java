@@ -65,7 +65,7 @@ class ModelFileTest {
         assertArrayEquals(m.rows().response(), back.rows().response());
         assertArrayEquals(m.rows().groupCodes(), back.rows().groupCodes());
         assertArrayEquals(m.rows().sourceLines(), back.rows().sourceLines());
-        assertEquals(Json.write(m.tuning().toJson()), Json.write(back.tuning().toJson()));
+        assertEquals(JsonTrees.write(m.tuning().toJson()), JsonTrees.write(back.tuning().toJson()));
     }
 
     @Test
@@ -76,7 +76,7 @@ class ModelFileTest {
         Path p = dir.resolve("scheme.nfm");
         ModelFile.write(withScheme, p, false, List.of());
         assertEquals("5-fold cross-validation", ModelFile.read(p).tuning().scheme());
-        assertFalse(Json.write(m.tuning().toJson()).contains("scheme"), "no key when not recorded, as before");
+        assertFalse(JsonTrees.write(m.tuning().toJson()).contains("scheme"), "no key when not recorded, as before");
     }
 
     @Test
@@ -109,7 +109,7 @@ class ModelFileTest {
     @Test
     void aManifestMissingAFieldIsADamagedModelNamingTheField() throws IOException {
         Path p = dir.resolve("nok.nfm");
-        Map<String, Object> manifest = ModelFile.manifestOf(sample(false));
+        Map<String, Object> manifest = JsonText.fieldsOf(ModelFile.manifestOf(sample(false)));
         manifest.remove("metric");
         Map<String, Object> arrays = new LinkedHashMap<>();
         arrays.put("source_line", new long[0]);
@@ -122,7 +122,7 @@ class ModelFileTest {
     void aRowCountThatDisagreesWithTheArraysIsRefused() {
         Path p = dir.resolve("rows.nfm");
         ReferenceModel m = sample(false);
-        Map<String, Object> manifest = ModelFile.manifestOf(m);
+        Map<String, Object> manifest = JsonText.fieldsOf(ModelFile.manifestOf(m));
         manifest.put("rows", 5L);
         ModelArchive.write(p, false, List.of(), manifest, arraysOf(m));
         NearfitException e = assertThrows(NearfitException.class, () -> ModelFile.read(p));

@@ -114,7 +114,7 @@ final class ModelMutations {
         String path = leaves.get(r.nextInt(leaves.size()));
         Object value = HOSTILE[r.nextInt(HOSTILE.length)];
         boolean remove = r.nextInt(10) == 0 && !path.endsWith("]");
-        edit.append(remove ? "remove " + path : path + " = " + Json.write(value));
+        edit.append(remove ? "remove " + path : path + " = " + JsonTrees.write(value));
         return ModelEdits.withManifest(original, m -> {
             if (remove) {
                 removeLeaf(m, path);

@@ -114,7 +114,7 @@ class ModelTrustTest {
         }
         Map<String, byte[]> entries = ModelEdits.entries(euclidean);
         entries.remove(ModelArchive.MANIFEST_DIGEST);
-        entries.put(ModelArchive.MANIFEST, (Json.write(m) + "\n").getBytes(StandardCharsets.UTF_8));
+        entries.put(ModelArchive.MANIFEST, (JsonTrees.write(m) + "\n").getBytes(StandardCharsets.UTF_8));
         return ModelEdits.stored(entries);
     }
 
@@ -161,7 +161,7 @@ class ModelTrustTest {
                     + " to 268435453"})
     void aManifestValueOutOfRangeIsRefusedNamingTheField(String path, String json, String message)
             throws IOException {
-        Path p = file("field.nfm", ModelEdits.withManifest(euclidean, m -> ModelEdits.set(m, path, Json.parse(json))));
+        Path p = file("field.nfm", ModelEdits.withManifest(euclidean, m -> ModelEdits.set(m, path, JsonTrees.parse(json))));
         assertEquals(message, refusal(p));
     }
 
@@ -177,7 +177,7 @@ class ModelTrustTest {
                     + " metric needs it"})
     void aWhiteningValueOutOfRangeIsRefusedNamingTheField(String path, String json, String message)
             throws IOException {
-        Path p = file("white.nfm", ModelEdits.withManifest(mahalanobis, m -> ModelEdits.set(m, path, Json.parse(json))));
+        Path p = file("white.nfm", ModelEdits.withManifest(mahalanobis, m -> ModelEdits.set(m, path, JsonTrees.parse(json))));
         assertEquals(message, refusal(p));
     }
 
@@ -277,7 +277,7 @@ class ModelTrustTest {
         head.remove("data/" + name + ".f64");
         Map<String, Object> m = ModelEdits.manifest(euclidean);
         listed.accept(m);
-        byte[] manifest = (Json.write(m) + "\n").getBytes(StandardCharsets.UTF_8);
+        byte[] manifest = (JsonTrees.write(m) + "\n").getBytes(StandardCharsets.UTF_8);
         head.put(ModelArchive.MANIFEST, manifest);
         head.put(ModelArchive.MANIFEST_DIGEST, (ModelEdits.sha256(manifest) + "\n").getBytes(StandardCharsets.US_ASCII));
         return ModelEdits.withDeflatedZeros(ModelEdits.stored(head), "data/" + name + ".f64", 16L << 20);
@@ -326,7 +326,7 @@ class ModelTrustTest {
             e.put("crc32", (double) crc.getValue());
             e.put("sha256", ModelEdits.sha256(data));
         }
-        byte[] manifest = (Json.write(m) + "\n").getBytes(StandardCharsets.UTF_8);
+        byte[] manifest = (JsonTrees.write(m) + "\n").getBytes(StandardCharsets.UTF_8);
         byte[] digest = (ModelEdits.sha256(manifest) + "\n").getBytes(StandardCharsets.US_ASCII);
         HandZip zip = new HandZip();
         zip.add(ModelArchive.MANIFEST, manifest);
