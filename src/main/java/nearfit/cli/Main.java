@@ -4,6 +4,7 @@ import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.io.OutputStreamWriter;
 import java.nio.charset.StandardCharsets;
+import java.util.List;
 
 import nearfit.table.NearfitException;
 import picocli.CommandLine;
@@ -20,18 +21,17 @@ import picocli.CommandLine.Option;
 @Command(name = "nearfit",
         mixinStandardHelpOptions = true,
         versionProvider = Main.Version.class,
-        description = "k-nearest-neighbour reference curves for equipment logs, in the terminal.",
-        subcommands = {
-            ViewCommand.class,
-            DescribeCommand.class,
-            PlotCommand.class,
-            TuneCommand.class,
-            FitCommand.class,
-            PredictCommand.class,
-            CheckCommand.class,
-            CompletionCommand.class,
-        })
+        description = "k-nearest-neighbour reference curves for equipment logs, in the terminal.")
 public final class Main implements Runnable {
+    /**
+     * The sub-commands, in the order help lists them. Not in {@code @Command(subcommands = ...)}: building the
+     * model of every command by reflection took about 200 ms of a cold start (two thirds of a small
+     * {@code describe}), so a command line that names one command builds only that one ({@link #commandLine}).
+     */
+    private static final List<Class<?>> COMMANDS = List.of(ViewCommand.class, DescribeCommand.class,
+            PlotCommand.class, TuneCommand.class, FitCommand.class, PredictCommand.class, CheckCommand.class,
+            CompletionCommand.class);
+
     /** Exit status for a usage or input error. */
     public static final int EXIT_USAGE = 2;
     /** Exit status of {@code check} when the flagged share is over the limit. */
@@ -78,7 +78,7 @@ public final class Main implements Runnable {
 
     /** As {@link #run(String[], PrintWriter, PrintWriter)}, with commands and mixins made by {@code factory}. */
     static int run(String[] args, PrintWriter out, PrintWriter err, CommandLine.IFactory factory) {
-        CommandLine cli = commandLine(factory);
+        CommandLine cli = commandLine(factory, args);
         cli.setOut(out);
         cli.setErr(err);
         boolean debug = java.util.Arrays.asList(args).contains("--debug");
@@ -141,11 +141,33 @@ public final class Main implements Runnable {
 
     /** A fresh command line with every sub-command; used by completion too. */
     static CommandLine commandLine() {
-        return commandLine(CommandLine.defaultFactory());
+        return commandLine(CommandLine.defaultFactory(), new String[0]);
     }
 
-    private static CommandLine commandLine(CommandLine.IFactory factory) {
+    /**
+     * The command line for {@code args}: with only the sub-command they name when the first word that is not an
+     * option is a command's name, else with every sub-command (for help, the version, a mistyped command
+     * and its suggestion). The commands' names come from their own annotations.
+     */
+    static CommandLine commandLine(CommandLine.IFactory factory, String[] args) {
         CommandLine cli = new CommandLine(new Main(), factory);
+        String named = null;
+        for (String a : args) {
+            if (!a.startsWith("-")) {
+                named = a;
+                break;
+            }
+        }
+        boolean known = false;
+        for (Class<?> c : COMMANDS) {
+            known |= c.getAnnotation(Command.class).name().equals(named);
+        }
+        for (Class<?> c : COMMANDS) {
+            String name = c.getAnnotation(Command.class).name();
+            if (!known || name.equals(named)) {
+                cli.addSubcommand(name, c);
+            }
+        }
         cli.setCaseInsensitiveEnumValuesAllowed(true);
         registerPathConverter(cli);
         return cli;

@@ -65,4 +65,22 @@ class MainTest {
         assertEquals(0, r.status());
         assertTrue(r.out().contains("describe") && r.out().contains("check"), "completion lists commands");
     }
+
+    @Test
+    void aCommandLineThatNamesACommandBuildsOnlyThatCommand() {
+        picocli.CommandLine one = Main.commandLine(picocli.CommandLine.defaultFactory(),
+                new String[] {"--debug", "describe", "check"}); // "check" here is a file name
+        assertEquals(java.util.Set.of("describe"), one.getSubcommands().keySet());
+        for (String[] args : new String[][] {{}, {"--help"}, {"--version"}, {"chek", "m.nfm"}}) {
+            assertEquals(java.util.Set.of("view", "describe", "plot", "tune", "fit", "predict", "check", "completion"),
+                    Main.commandLine(picocli.CommandLine.defaultFactory(), args).getSubcommands().keySet(),
+                    String.join(" ", args));
+        }
+        // Help still lists every command, and a mistyped one still gets its suggestion.
+        Result help = run("--help");
+        assertTrue(help.out().contains("describe") && help.out().contains("completion"), help.out());
+        Result typo = run("chek", "m.nfm", "data.csv");
+        assertEquals(2, typo.status());
+        assertTrue(typo.err().contains("did you mean check?"), typo.err());
+    }
 }
