@@ -83,6 +83,10 @@ final class FitCommand implements Callable<Integer> {
         ModelFile.write(saved, output, model.force, inputs);
         model.out().printf("fitted k = %d on %s; wrote %s%n", saved.settings().k(),
                 nearfit.table.VisibleText.of(source.described), nearfit.table.VisibleText.of(output.toString()));
+        String edge = saved.tuning() == null ? null : TuneReport.edgeNote(saved.tuning());
+        if (edge != null) {
+            model.err().println("nearfit: " + edge); // about the choice, not the output: beside warnings
+        }
         model.out().flush();
         return 0;
     }

@@ -69,6 +69,25 @@ final class TuneReport {
         out.printf(Locale.ROOT, "rows %d%s; lowest %s at k = %d; one-SE k = %d%n", t.rows(),
                 t.sampled() < 0 ? "" : " (leave-one-out on a sample of " + t.sampled() + ")",
                 t.forCategories() ? "error rate" : "RMSE", t.bestK(), t.oneSeK());
+        String edge = edgeNote(t);
+        if (edge != null) {
+            out.println(edge);
+        }
+    }
+
+    /**
+     * The line that says a choice lies at the largest k tried, or null when none does: the figures may still
+     * fall beyond the range, so the choice is the range's, not the data's.
+     */
+    static String edgeNote(TuningSummary t) {
+        if (!t.bestAtEdge() && !t.oneSeAtEdge()) {
+            return null;
+        }
+        String which = t.bestAtEdge() && t.oneSeAtEdge() ? "the lowest " + (t.forCategories() ? "error rate" : "RMSE")
+                + " and the one-SE k are" : t.bestAtEdge() ? "the lowest " + (t.forCategories() ? "error rate" : "RMSE")
+                + " is" : "the one-SE k is";
+        return String.format(Locale.ROOT, "note: %s at the largest k tried (%d); a larger k may do better: "
+                + "try --kmax %d", which, t.largestK(), (int) Math.min(2L * t.largestK(), t.rows() - 1));
     }
 
     /** Five significant digits, no exponent for ordinary magnitudes; NaN as a dash. */

@@ -48,6 +48,24 @@ public record TuningSummary(long rows, int[] k, double[] rmse, double[] rmseSe, 
         }
     }
 
+    /** The largest k tried. */
+    public int largestK() {
+        return k[k.length - 1];
+    }
+
+    /**
+     * Whether the one-SE k is the largest k tried while a larger one could have been (below rows - 1): a
+     * choice at the edge of the range tried is no choice, since the figures may keep falling beyond it.
+     */
+    public boolean oneSeAtEdge() {
+        return oneSeK == largestK() && largestK() < rows - 1;
+    }
+
+    /** As {@link #oneSeAtEdge()}, for the k of the lowest figure. */
+    public boolean bestAtEdge() {
+        return bestK == largestK() && largestK() < rows - 1;
+    }
+
     /** Whether this table holds error rates of a category response. */
     public boolean forCategories() {
         return errorRate != null;

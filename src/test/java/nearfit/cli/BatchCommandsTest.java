@@ -146,6 +146,28 @@ class BatchCommandsTest {
         assertTrue(best >= 1 && oneSe >= best && oneSe <= 30, r.out());
     }
 
+    /** A choice at the largest k tried is the range's, not the data's: tune and fit say so (issue #12). */
+    @Test
+    void aChoiceAtTheLargestKTriedIsSaidOutLoud() {
+        CliRun.Result edge = CliRun.inProcess("tune", healthy.toString(), "-x", "wind_ms", "-y", "power_kw",
+                "--kmax", "2", "--quiet");
+        assertEquals(0, edge.status(), edge.toString());
+        assertTrue(edge.out().contains("note: the lowest RMSE and the one-SE k are at the largest k tried (2); "
+                + "a larger k may do better: try --kmax 4"), edge.out());
+        CliRun.Result fit = CliRun.inProcess("fit", healthy.toString(), "-x", "wind_ms", "-y", "power_kw",
+                "--kmax", "2", "-o", dir.resolve("edge.nfm").toString(), "--quiet");
+        assertEquals(0, fit.status(), fit.toString());
+        assertTrue(fit.err().contains("nearfit: note: the lowest RMSE and the one-SE k are at the largest k tried (2)"),
+                fit.err());
+        // With the default range the note appears exactly when a choice is the largest k tried.
+        CliRun.Result table = CliRun.inProcess("tune", healthy.toString(), "-x", "wind_ms", "-y", "power_kw", "--quiet");
+        CliRun.Result json = CliRun.inProcess("tune", healthy.toString(), "-x", "wind_ms", "-y", "power_kw",
+                "--format", "json", "--quiet");
+        Map<?, ?> j = (Map<?, ?>) JsonTrees.parse(json.out().strip());
+        boolean atEdge = (Double) j.get("best_k") == 50 || (Double) j.get("one_se_k") == 50;
+        assertEquals(atEdge, table.out().contains("at the largest k tried"), table.out());
+    }
+
     @Test
     void fitWithKAutoTakesTheOneSeKOfTune() {
         CliRun.Result tune = CliRun.inProcess("tune", healthy.toString(), "-x", "wind_ms", "-y", "power_kw",
