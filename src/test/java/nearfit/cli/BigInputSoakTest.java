@@ -184,7 +184,7 @@ class BigInputSoakTest {
         assertTrue(r.status() == 0 || r.status() == 1, r.err());
         assertEquals("", r.err());
         Object rows = ((java.util.Map<?, ?>) nearfit.model.JsonTrees.parse(r.out().strip())).get("rows");
-        assertEquals((double) ROWS, rows, r.out());
+        assertEquals((double) (ROWS - 3), rows, r.out()); // the three ragged lines of the demo log are dropped
     }
 
     @Test
@@ -221,6 +221,6 @@ class BigInputSoakTest {
     private static void assertFirstFrame(Run r) {
         Matcher cells = Pattern.compile("braille_cells (\\d+)").matcher(r.out());
         assertTrue(cells.find() && Integer.parseInt(cells.group(1)) > 100, r.out());
-        assertTrue(r.out().contains("of " + String.format(Locale.ROOT, "%,d", ROWS)), r.out());
+        assertTrue(r.out().contains("of " + String.format(Locale.ROOT, "%,d", ROWS - 3)), r.out()); // 3 ragged dropped
     }
 }
