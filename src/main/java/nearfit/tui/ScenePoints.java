@@ -281,10 +281,16 @@ final class ScenePoints {
                 query[j][i] = in[mine[i]];
             }
         }
-        double[] fit = others.estimateAll(query, nearfit.knn.Progress.NONE).fit();
-        double[] response = data.response();
+        double[] all = data.response();
+        double[] response = new double[n];
         for (int i = 0; i < n; i++) {
-            y[mine[i]] = response[mine[i]] - fit[i];
+            response[i] = all[mine[i]];
+        }
+        // The core's one scoring call gives the residuals; the face only places them.
+        double[] residual = nearfit.knn.Scoring.score(others, query, response, new nearfit.knn.ZBasis.LocalSpread(),
+                nearfit.knn.KnnSettings.DEFAULT_FLAG_THRESHOLD, nearfit.knn.Progress.NONE).residual();
+        for (int i = 0; i < n; i++) {
+            y[mine[i]] = residual[i];
         }
         return y;
     }
