@@ -7,18 +7,30 @@ package nearfit.knn;
  * distance for {@link #EUCLIDEAN} and {@link #MAHALANOBIS}, the distance itself otherwise. Ties are
  * decided on keys, so every index and the brute-force scan agree exactly.
  */
-public enum Metric {
+public enum Metric implements ChoiceWord {
     /** Square root of the sum of squared differences. */
-    EUCLIDEAN,
+    EUCLIDEAN("euclidean"),
     /** Sum of absolute differences. */
-    MANHATTAN,
+    MANHATTAN("manhattan"),
     /** Largest absolute difference. */
-    CHEBYSHEV,
+    CHEBYSHEV("chebyshev"),
     /**
      * Euclidean after whitening the scaled inputs with the inverse Cholesky factor of their
      * covariance (so the distance is {@code sqrt((x-y)' S^-1 (x-y))}).
      */
-    MAHALANOBIS;
+    MAHALANOBIS("mahalanobis");
+
+    private final String word;
+
+    Metric(String word) {
+        this.word = word;
+    }
+
+    @Override
+    public String word() {
+        return word;
+    }
+
 
     /** The metric the index applies to the (possibly whitened) coordinates. */
     Metric base() {

@@ -1,13 +1,24 @@
 package nearfit.knn;
 
 /** How each input is scaled before distances are taken; fitted on the reference rows. */
-public enum Scaling {
+public enum Scaling implements ChoiceWord {
     /** {@code (x - mean) / SD}, population SD. */
-    Z,
+    Z("z"),
     /** {@code (x - median) / (1.4826 MAD)}; 1.4826 makes the MAD consistent with the SD of a normal. */
-    ROBUST,
+    ROBUST("robust"),
     /** {@code (x - min) / (max - min)}. */
-    RANGE,
+    RANGE("range"),
     /** The raw values. */
-    NONE
+    NONE("none");
+
+    private final String word;
+
+    Scaling(String word) {
+        this.word = word;
+    }
+
+    @Override
+    public String word() {
+        return word;
+    }
 }
