@@ -21,22 +21,22 @@ import picocli.CommandLine.Spec;
 final class ModelOptions {
     @Option(names = "--metric", converter = OptionChoices.MetricWords.class,
             completionCandidates = OptionChoices.MetricWords.class, paramLabel = "METRIC",
-            description = "Distance between rows: euclidean, manhattan, chebyshev, mahalanobis (default: euclidean; predict and check: the model's).")
+            description = "Distance between rows: ${COMPLETION-CANDIDATES} (default: euclidean; predict and check: the model's).")
     Metric metric;
 
     @Option(names = "--weights", converter = OptionChoices.WeightsWords.class,
             completionCandidates = OptionChoices.WeightsWords.class, paramLabel = "WEIGHTS",
-            description = "Neighbour weights: uniform, inverse, tricube (default: uniform; predict and check: the model's).")
+            description = "Neighbour weights: ${COMPLETION-CANDIDATES} (default: uniform; predict and check: the model's).")
     Weighting weights;
 
     @Option(names = "--scale", converter = OptionChoices.ScaleWords.class,
             completionCandidates = OptionChoices.ScaleWords.class, paramLabel = "SCALING",
-            description = "Input scaling: z, robust, range, none (default: z; predict and check: the model's).")
+            description = "Input scaling: ${COMPLETION-CANDIDATES} (default: z; predict and check: the model's).")
     Scaling scale;
 
     @Option(names = "--band", converter = OptionChoices.BandWords.class,
             completionCandidates = OptionChoices.BandWords.class, paramLabel = "BAND",
-            description = "Band around the fit: q10-q90, q05-q95, sd2, none (default: q05-q95; predict and check: the model's).")
+            description = "Band around the fit: ${COMPLETION-CANDIDATES} (default: q05-q95; predict and check: the model's).")
     Band band;
 
     @Option(names = "--estimate", converter = OptionChoices.EstimateWords.class,

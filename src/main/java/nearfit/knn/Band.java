@@ -3,27 +3,20 @@ package nearfit.knn;
 /** The band drawn around the fit: the neighbours' spread. */
 public enum Band implements ChoiceWord {
     /** Weighted 10% and 90% quantiles of the neighbours' responses. */
-    Q10_Q90("q10-q90", 0.10, 0.90),
+    Q10_Q90(0.10, 0.90),
     /** Weighted 5% and 95% quantiles. */
-    Q05_Q95("q05-q95", 0.05, 0.95),
+    Q05_Q95(0.05, 0.95),
     /** The fit plus and minus two weighted SDs (the neighbours' spread about their weighted mean). */
-    SD2("sd2", Double.NaN, Double.NaN),
+    SD2(Double.NaN, Double.NaN),
     /** No band; low and high are NaN. */
-    NONE("none", Double.NaN, Double.NaN);
+    NONE(Double.NaN, Double.NaN);
 
-    private final String word;
     private final double low;
     private final double high;
 
-    Band(String word, double low, double high) {
-        this.word = word;
+    Band(double low, double high) {
         this.low = low;
         this.high = high;
-    }
-
-    @Override
-    public String word() {
-        return word;
     }
 
     /** The lower probability for a quantile band, NaN otherwise. */

@@ -5,12 +5,19 @@ import java.util.List;
 
 /**
  * A settings choice with its one word: what the command line accepts and its help shows, what the
- * model file's manifest stores and what the explorer's header and notes say. The words are part of
- * the model file format, so they are written out per constant rather than derived from the names.
+ * model file's manifest stores and what the explorer's header and notes say. The word is the
+ * constant's name in lower case with {@code _} as {@code -} unless the enum says otherwise
+ * ({@link FlagScale}). The words are part of the model file format: renaming a constant changes
+ * one, which ChoiceOptionsTest and ReleasedModelFileTest catch.
  */
 public interface ChoiceWord {
-    /** The word, lower case, e.g. {@code q05-q95}. */
-    String word();
+    /** The constant's name (every enum has it). */
+    String name();
+
+    /** The word, lower case, e.g. {@code q05-q95} for {@code Q05_Q95}. */
+    default String word() {
+        return name().toLowerCase(java.util.Locale.ROOT).replace('_', '-');
+    }
 
     /** The choice among {@code choices} whose word is {@code word} exactly, or {@code null}. */
     static <E extends ChoiceWord> E find(E[] choices, String word) {

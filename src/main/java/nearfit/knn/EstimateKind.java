@@ -9,23 +9,12 @@ package nearfit.knn;
  */
 public enum EstimateKind implements ChoiceWord {
     /** The weighted mean of the neighbours' responses. */
-    MEAN("mean"),
+    MEAN,
     /**
      * The weighted median: the weighted quantile at p = 0.5 by the band's rule ({@link Band}: plotting
      * positions {@code p_i = (C_i - (w_i + w_1)/2) / (W - (w_1 + w_n)/2)}), so with equal weights the
      * Hyndman &amp; Fan definition 7 median, the middle value or the mean of the middle two. Rows that
      * drag the mean off the bulk of their neighbours (curtailment, icing) move it far less.
      */
-    MEDIAN("median");
-
-    private final String word;
-
-    EstimateKind(String word) {
-        this.word = word;
-    }
-
-    @Override
-    public String word() {
-        return word;
-    }
+    MEDIAN
 }

@@ -29,6 +29,7 @@ public enum FlagScale implements ChoiceWord {
         this.word = word;
     }
 
+    /** Not the name's: {@code reference} and {@code local} say what the scale comes from. */
     @Override
     public String word() {
         return word;

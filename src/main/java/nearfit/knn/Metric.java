@@ -9,28 +9,16 @@ package nearfit.knn;
  */
 public enum Metric implements ChoiceWord {
     /** Square root of the sum of squared differences. */
-    EUCLIDEAN("euclidean"),
+    EUCLIDEAN,
     /** Sum of absolute differences. */
-    MANHATTAN("manhattan"),
+    MANHATTAN,
     /** Largest absolute difference. */
-    CHEBYSHEV("chebyshev"),
+    CHEBYSHEV,
     /**
      * Euclidean after whitening the scaled inputs with the inverse Cholesky factor of their
      * covariance (so the distance is {@code sqrt((x-y)' S^-1 (x-y))}).
      */
-    MAHALANOBIS("mahalanobis");
-
-    private final String word;
-
-    Metric(String word) {
-        this.word = word;
-    }
-
-    @Override
-    public String word() {
-        return word;
-    }
-
+    MAHALANOBIS;
 
     /** The metric the index applies to the (possibly whitened) coordinates. */
     Metric base() {

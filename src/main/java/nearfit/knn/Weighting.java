@@ -5,12 +5,12 @@ package nearfit.knn;
  */
 public enum Weighting implements ChoiceWord {
     /** Every counted neighbour weighs the same. */
-    UNIFORM("uniform"),
+    UNIFORM,
     /**
      * {@code 1/d}. When some counted neighbours are at distance 0 they share all the weight
      * equally and the others get none.
      */
-    INVERSE("inverse"),
+    INVERSE,
     /**
      * Tricube {@code (1 - (d/h)^3)^3} (Cleveland 1979), with h the distance to the first
      * neighbour beyond the k-th distance. When no row lies beyond (k covers every row), or when h
@@ -18,16 +18,5 @@ public enum Weighting implements ChoiceWord {
      * in the last place apart share a square root), the weights are uniform. Since h is strictly greater than the k-th distance, every counted weight is
      * positive; when all counted rows are at one distance the weights are equal, i.e. uniform.
      */
-    TRICUBE("tricube");
-
-    private final String word;
-
-    Weighting(String word) {
-        this.word = word;
-    }
-
-    @Override
-    public String word() {
-        return word;
-    }
+    TRICUBE
 }
