@@ -8,12 +8,7 @@ import java.util.Map;
 import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.input.KeyType;
 
-import nearfit.knn.Band;
-import nearfit.knn.EstimateKind;
-import nearfit.knn.Metric;
-import nearfit.knn.Scaling;
 import nearfit.knn.TuningTable;
-import nearfit.knn.Weighting;
 
 /**
  * The explorer's key map as a pure function: a state, a key and what the key may consult give the next state
@@ -43,7 +38,7 @@ public final class KeyPress {
         return switch (s.overlay()) {
             case NONE -> plain(fresh, key, cx);
             case HELP -> key.getKeyType() == KeyType.Character && key.getCharacter() == '?'
-                    ? Step.of(fresh.edit().close().build()) : panel(fresh, key, cx, KeyBinding.values().length);
+                    ? Step.of(fresh.edit().close().build()) : panel(fresh, key, cx, KeyTable.values().length);
             case PICKER -> picker(fresh, key, cx);
             case TUNING -> tuning(fresh, key, cx);
             case FLAGS -> flagTable(fresh, key, cx);
@@ -74,93 +69,31 @@ public final class KeyPress {
         }
     }
 
+    /** A key on the plot: the key table's entry for it, if any. */
     private static Step plain(ViewState s, KeyStroke key, KeyContext cx) {
-        switch (key.getKeyType()) {
-            case ArrowLeft: return Step.of(moveCrosshair(s, -FINE_STEP));
-            case ArrowRight: return Step.of(moveCrosshair(s, FINE_STEP));
-            case ArrowDown: return Step.of(moveCrosshair(s, -COARSE_STEP));
-            case ArrowUp: return Step.of(moveCrosshair(s, COARSE_STEP));
-            case Escape: return Step.of(s.edit().close().build());
-            case Character: return character(s, key.getCharacter(), cx);
-            default: return Step.of(s);
-        }
-    }
-
-    private static Step character(ViewState s, char c, KeyContext cx) {
-        ViewState.Builder b = s.edit();
-        switch (c) {
-            case '?': return Step.of(b.open(Overlay.HELP, Ask.NOTHING).build());
-            case 'q': return Step.of(b.quit(true).build());
-            case 'x': return Step.of(openPicker(s, Ask.DISPLAY_INPUT, cx));
-            case 'y': return Step.of(openPicker(s, Ask.RESPONSE, cx));
-            case 'i': return Step.of(openPicker(s, Ask.INPUTS, cx));
-            case 'g': return Step.of(openPicker(s, Ask.GROUP, cx));
-            case 'v': return s.inputs().size() > 1 ? Step.of(openPicker(s, Ask.HELD_INPUT, cx))
-                    : Step.of(b.warning("only one input: nothing is held").build());
-            case '+': return Step.of(b.k(KLadder.up(s.k(), Math.max(1, cx.results().rowsUsed() - 1))).build());
-            case '-': return Step.of(b.k(KLadder.down(s.k())).build());
-            case 'k': return Step.of(b.open(Overlay.PROMPT, Ask.K).build());
-            case '/': return Step.of(b.open(Overlay.PROMPT, Ask.CONDITION).typed(s.condition()).build());
-            case 't': return Step.of(b.open(Overlay.TUNING, Ask.NOTHING).cursor(tuningCursor(s, cx)).build());
-            case 'F': return Step.of(b.open(Overlay.FLAGS, Ask.NOTHING).build());
-            case 'L': return Step.of(b.open(Overlay.LOAD, Ask.NOTHING).build());
-            case 'e': return Step.of(b.open(Overlay.EXPORT, Ask.NOTHING).build());
-            case 'm': {
-                Metric m = cycle(Metric.values(), s.metric());
-                return Step.of(b.metric(m).message("metric " + ChoiceNames.of(m)).build());
-            }
-            case 'w': {
-                Weighting w = cycle(Weighting.values(), s.weighting());
-                return Step.of(b.weighting(w).message("weights " + ChoiceNames.of(w)).build());
-            }
-            case 's': {
-                Scaling sc = cycle(Scaling.values(), s.scaling());
-                return Step.of(b.scaling(sc).message("scale " + ChoiceNames.of(sc)).build());
-            }
-            case 'b': {
-                Band band = cycle(Band.values(), s.band());
-                return Step.of(b.band(band).message("band " + ChoiceNames.of(band)).build());
-            }
-            case 'R': {
-                boolean narrows = !s.conditionNarrowsReference();
-                return Step.of(b.conditionNarrowsReference(narrows).markedRow(-1).message(narrows
-                        ? "the row condition now narrows the reference too (R: all rows)"
-                        : "the reference is all rows; the row condition narrows what is shown (R: condition)").build());
-            }
-            case 'c': {
-                EstimateKind e = cycle(EstimateKind.values(), s.estimate());
-                return Step.of(b.estimate(e).message("estimate " + ChoiceNames.of(e)).build());
-            }
-            case 'f': return Step.of(b.flagMarks(!s.flagMarks()).build());
-            case 'r': return Step.of(b.mode(s.mode() == PlotMode.RESIDUALS ? PlotMode.RESPONSE : PlotMode.RESIDUALS)
-                    .build());
-            case 'T': return cx.hasTime() ? Step.of(b.mode(s.mode() == PlotMode.RESIDUALS_OVER_TIME
-                    ? PlotMode.RESPONSE : PlotMode.RESIDUALS_OVER_TIME).build())
-                    : Step.of(b.warning("no time column in this file").build());
-            case 'n': return Step.of(stepGroup(s, cx, 1));
-            case 'p': return Step.of(stepGroup(s, cx, -1));
-            case 'a': return Step.of(b.group(-1).compare(false).build());
-            case 'o': return s.group() < 0 ? Step.of(b.warning("highlight a group first: g, then n or p").build())
-                    : Step.of(b.compare(!s.compare()).build());
-            case ']': return Step.of(zoom(s, cx, 0.5));
-            case '[': return Step.of(s.wholeRange() ? b.warning("already showing the whole data").build()
-                    : zoom(s, cx, 2.0));
-            case '0': return Step.of(s.wholeRange() ? b.warning("already showing the whole data").build()
-                    : b.zoom(Double.NaN, Double.NaN).build());
-            case '<': return Step.of(moveHeld(s, -HELD_STEP));
-            case '>': return Step.of(moveHeld(s, HELD_STEP));
-            case 'h': return s.inputs().size() > 1 ? Step.of(b.nearHeldOnly(!s.nearHeldOnly()).build())
-                    : Step.of(b.warning("only one input: nothing is held").build());
-            default: return Step.of(s);
-        }
+        KeyTable entry = KeyTable.of(key);
+        return entry == null ? Step.of(s) : entry.act(s, key, cx);
     }
 
     static <E extends Enum<E>> E cycle(E[] values, E current) {
         return values[(current.ordinal() + 1) % values.length];
     }
 
-    private static ViewState moveCrosshair(ViewState s, double by) {
-        return s.edit().crosshair(Math.max(0, Math.min(1, s.crosshair() + by))).build();
+    /** The arrows: left and right a fine step, down and up a coarse one. */
+    static Step moveCrosshair(ViewState s, KeyStroke key, KeyContext cx) {
+        double by = switch (key.getKeyType()) {
+            case ArrowLeft -> -FINE_STEP;
+            case ArrowRight -> FINE_STEP;
+            case ArrowDown -> -COARSE_STEP;
+            case ArrowUp -> COARSE_STEP;
+            default -> 0;
+        };
+        return Step.of(s.edit().crosshair(Math.max(0, Math.min(1, s.crosshair() + by))).build());
+    }
+
+    /** {@code <} and {@code >}: the held input's quantile down or up a step. */
+    static Step moveHeld(ViewState s, KeyStroke key, KeyContext cx) {
+        return Step.of(moveHeld(s, key.getCharacter() == '<' ? -HELD_STEP : HELD_STEP));
     }
 
     private static ViewState moveHeld(ViewState s, double by) {
@@ -174,7 +107,11 @@ public final class KeyPress {
         return s.edit().heldQuantile(held).build();
     }
 
-    private static ViewState stepGroup(ViewState s, KeyContext cx, int by) {
+    static Step stepGroup(ViewState s, KeyContext cx, int by) {
+        return Step.of(nextGroup(s, cx, by));
+    }
+
+    private static ViewState nextGroup(ViewState s, KeyContext cx, int by) {
         if (s.groupColumn() != null && cx.groupCount() > 0) {
             int n = cx.groupCount();
             int g = s.group() < 0 ? (by > 0 ? 0 : n - 1) : Math.floorMod(s.group() + by, n);
@@ -187,7 +124,11 @@ public final class KeyPress {
     }
 
     /** Halves or doubles the view's width keeping the crosshair's value at the same place on screen. */
-    private static ViewState zoom(ViewState s, KeyContext cx, double factor) {
+    static Step zoom(ViewState s, KeyContext cx, double factor) {
+        return Step.of(zoomed(s, cx, factor));
+    }
+
+    private static ViewState zoomed(ViewState s, KeyContext cx, double factor) {
         double from = s.wholeRange() ? cx.dataFrom() : s.zoomFrom();
         double to = s.wholeRange() ? cx.dataTo() : s.zoomTo();
         double whole = cx.dataTo() - cx.dataFrom();
@@ -203,12 +144,22 @@ public final class KeyPress {
         return s.edit().zoom(newFrom, newFrom + span).build();
     }
 
+    /** {@code t}: the tuning panel, its cursor on the current k. */
+    static Step openTuning(ViewState s, KeyStroke key, KeyContext cx) {
+        return Step.of(s.edit().open(Overlay.TUNING, Ask.NOTHING).cursor(tuningCursor(s, cx)).build());
+    }
+
     private static int tuningCursor(ViewState s, KeyContext cx) {
         TuningTable t = cx.results().tuning();
         return t == null ? 0 : TuningCriterion.line(t, s.k());
     }
 
     /** Opens a picker with its cursor on the current choice. */
+    static Step picker(ViewState s, Ask ask, KeyContext cx) {
+        return Step.of(openPicker(s, ask, cx));
+    }
+
+
     private static ViewState openPicker(ViewState s, Ask ask, KeyContext cx) {
         ViewState opened = s.edit().open(Overlay.PICKER, ask).build();
         int at = Pickers.options(ask, opened, cx.columns()).indexOf(Pickers.current(opened));

@@ -10,7 +10,7 @@ final class Panels {
 
     static void paint(Pen pen, ScreenRegions layout, ViewState s, Results r, FrameInput in, Sketches sketches) {
         switch (s.overlay()) {
-            case HELP -> list(pen, layout, "keys (Esc closes)", helpLines(), s.cursor(), false, 7);
+            case HELP -> list(pen, layout, "keys (Esc closes)", KeyTable.helpLines(), s.cursor(), false, KeyTable.KEY_COLUMN);
             case PICKER -> fitted(pen, layout, "choose the " + s.ask().title() + " (Enter, Esc)", pickerLines(s, in),
                     s.cursor());
             case TUNING -> tuning(pen, layout, s, r, sketches);
@@ -23,14 +23,6 @@ final class Panels {
             case NONE -> {
             }
         }
-    }
-
-    static List<String> helpLines() {
-        List<String> out = new ArrayList<>();
-        for (KeyBinding k : KeyBinding.values()) {
-            out.add(Figures.pad(k.key(), 7) + k.meaning());
-        }
-        return out;
     }
 
     private static List<String> pickerLines(ViewState s, FrameInput in) {

@@ -36,7 +36,7 @@ final class ScreenPainter {
         boolean warn = s.message().isEmpty() ? !r.failure().isEmpty() : s.warning();
         pen.text(0, layout.statusRow(), status(s, r, in, layout.width(), pen.look().ascii()),
                 warn ? Ink.WARNING : Ink.TEXT);
-        pen.text(0, layout.keyRow(), KeyBinding.keyBar(layout.width()), Ink.LABEL);
+        pen.text(0, layout.keyRow(), KeyTable.keyBar(layout.width()), Ink.LABEL);
         Panels.paint(pen, layout, s, r, in, sketches);
     }
 

@@ -173,7 +173,7 @@ class ExplorerSignalTest {
 
     @Test
     void ctrlCWithTheHelpOverlayOpenExits130AndRestoresTheTerminal() throws Exception {
-        ctrlCInOverlay("?", KeyBinding.FLAG_MARKS.meaning());
+        ctrlCInOverlay("?", KeyTable.FLAG_MARKS.meaning());
     }
 
     @Test

@@ -82,11 +82,11 @@ class ExplorerTest {
                 pages.add(helpBody(v.text()));
                 v.key(KeyType.PageDown);
             }
-            for (KeyBinding k : KeyBinding.values()) {
+            for (KeyTable k : KeyTable.values()) {
                 assertTrue(pages.stream().anyMatch(p -> p.contains(k.meaning())), "help shows " + k.key());
             }
             v.key(KeyType.Escape);
-            assertFalse(v.text().contains(KeyBinding.EXPORT.meaning()), "help closed");
+            assertFalse(v.text().contains(KeyTable.EXPORT.meaning()), "help closed");
         }
     }
 

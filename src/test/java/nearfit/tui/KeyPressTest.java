@@ -121,7 +121,7 @@ class KeyPressTest {
     void everyKeyOfTheMapDoesSomethingOnThePlot() {
         // Each character key of the help list changes the state or says why it cannot.
         ViewState s = two.edit().groupColumn("turbine").group(0).build();
-        for (KeyBinding k : KeyBinding.values()) {
+        for (KeyTable k : KeyTable.values()) {
             if (k.key().length() == 1 && !k.key().equals("q")) {
                 Step step = press(s, k.key().charAt(0));
                 assertFalse(step.state().equals(s) && step.effect().equals(Effect.NONE), "key " + k.key());

@@ -100,7 +100,7 @@ class ScreenTrustTest {
                     v.key(KeyType.PageDown);
                 }
                 assertTrue(v.text().matches("(?s).*lines \\d+-(\\d+) of \\1 ↑[ ,].*"), "the end, nothing below: " + v.text());
-                for (KeyBinding k : KeyBinding.values()) {
+                for (KeyTable k : KeyTable.values()) {
                     assertTrue(pages.stream().anyMatch(p -> p.contains(k.meaning())),
                             size[0] + "x" + size[1] + ": help shows " + k.key() + " whole");
                 }

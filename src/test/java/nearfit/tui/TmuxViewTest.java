@@ -43,9 +43,9 @@ class TmuxViewTest {
             waitFor(session, s -> s.contains("k=30"), "k after +");
 
             tmux("send-keys", "-t", session, "?");
-            waitFor(session, s -> s.contains(KeyBinding.FLAG_MARKS.meaning()), "help after ?");
+            waitFor(session, s -> s.contains(KeyTable.FLAG_MARKS.meaning()), "help after ?");
             tmux("send-keys", "-t", session, "Escape");
-            waitFor(session, s -> !s.contains(KeyBinding.FLAG_MARKS.meaning()), "help closed");
+            waitFor(session, s -> !s.contains(KeyTable.FLAG_MARKS.meaning()), "help closed");
 
             tmux("send-keys", "-t", session, "F");
             waitFor(session, s -> s.contains("flagged rows:") && s.contains("residual"), "flagged table after F");
