@@ -160,7 +160,12 @@ public final class CoreWorkbench implements Workbench {
             }
             Curve c = model.curve(display, held, x, KnnChoices.progress(control));
             Estimates e = c.estimates();
-            return new CurveResult(x, e.fit(), e.bandLow(), e.bandHigh(), e.windowWidth(), e.neighbourCount());
+            // With a group compared, its rows' residuals against the others' fit come with the curve, for the
+            // plot of residuals.
+            ComparedResiduals compared = q.compare() && q.group() >= 0 && q.groupColumn() != null
+                    ? references.compared(m, q.groupColumn(), q.group()) : null;
+            return new CurveResult(x, e.fit(), e.bandLow(), e.bandHigh(), e.windowWidth(), e.neighbourCount(),
+                    compared);
         } catch (CancelledException e) {
             throw new CancellationException("curve superseded");
         }
@@ -253,12 +258,12 @@ public final class CoreWorkbench implements Workbench {
     }
 
     @Override
-    public Cells tuningChart(TuningTable t, int currentK, int width, int height, boolean ascii) {
+    public Cells tuningChart(TuningFigures t, int currentK, int width, int height, boolean ascii) {
         double[] k = new double[t.kmax()];
         for (int i = 0; i < k.length; i++) {
             k[i] = i + 1;
         }
-        TuningScene s = new TuningScene(k, TuningCriterion.values(t), TuningCriterion.se(t), t.bestK(), t.oneSeK(), "");
+        TuningScene s = new TuningScene(k, t.values(), t.se(), t.bestK(), t.oneSeK(), "");
         return new GridCells(TuningChart.compose(s, width, height, ascii ? CanvasKind.ASCII : CanvasKind.BRAILLE));
     }
 

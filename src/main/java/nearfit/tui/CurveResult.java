@@ -11,9 +11,16 @@ package nearfit.tui;
  * @param bandHigh   the band's upper edge, NaN when the band is off
  * @param width      the window width: the scaled distance to the k-th neighbour
  * @param neighbours the neighbours used, more than k when rows tie with the k-th distance
+ * @param compared   with a group compared, its rows' residuals against the other groups' fit; else {@code null}
  */
 public record CurveResult(double[] x, double[] fit, double[] bandLow, double[] bandHigh, double[] width,
-        int[] neighbours) {
+        int[] neighbours, ComparedResiduals compared) {
+    /** A curve with no group compared. */
+    public CurveResult(double[] x, double[] fit, double[] bandLow, double[] bandHigh, double[] width,
+            int[] neighbours) {
+        this(x, fit, bandLow, bandHigh, width, neighbours, null);
+    }
+
     /** Checks that every array has one entry per point. */
     public CurveResult {
         int n = x.length;

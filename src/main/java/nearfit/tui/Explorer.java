@@ -11,15 +11,16 @@ import java.util.concurrent.TimeUnit;
 
 import com.googlecode.lanterna.TerminalSize;
 import com.googlecode.lanterna.input.KeyStroke;
-import com.googlecode.lanterna.input.KeyType;
 import com.googlecode.lanterna.screen.Screen;
 import com.googlecode.lanterna.screen.TerminalScreen;
 
 import nearfit.table.NearfitException;
 
 /**
- * The explorer: holds the current {@link ViewState} and the latest {@link Results}, turns key presses into new
- * states, asks the {@link Workbench} for what a state needs on background {@link Jobs}, and draws frames.
+ * The explorer's event loop: holds the current {@link ViewState} and the latest {@link Results}, turns key
+ * presses into new states, asks the {@link Workbench} for what a state needs on background {@link Jobs}, and
+ * has each frame painted from the state and the results. Keys, finished jobs and ticks arrive as
+ * {@link Event}s on one queue.
  *
  * <p>All fields are used from one thread, the one that calls {@link #run} (or, in tests, {@link #press} and
  * {@link #settle}); background jobs only post events to the queue.
@@ -35,25 +36,26 @@ public final class Explorer implements AutoCloseable {
     private final TerminalScreen screen;
     private final Workbench workbench;
     private final Look look;
-    private final BlockingQueue<Object> events = new LinkedBlockingQueue<>();
+    private final BlockingQueue<Event> events = new LinkedBlockingQueue<>();
     private final Jobs jobs = new Jobs(events);
     private final Sketches sketches;
     private final Exporter exporter;
-    private final Map<List<Object>, Double> quantiles = new HashMap<>();
+    private final DataExtent extent;
     private final it.unimi.dsi.fastutil.ints.Int2ObjectOpenHashMap<com.googlecode.lanterna.TextCharacter> characters =
             new it.unimi.dsi.fastutil.ints.Int2ObjectOpenHashMap<>();
     private ViewState state;
     private Results results;
     private ScreenRegions layout;
     private long generation;
-    private Object curveKey;
-    private Object tuningKey;
-    private Object flagsKey;
+    private CurveKey curveKey;
+    /** The settings of the latest tuning job, with k 1: tuning does not depend on k. */
+    private FitKey tuningKey;
+    private FlagsKey flagsKey;
     /**
      * The curve key whose job last finished. New tuning or flags wait until the current curve is in, so the
      * curve has the cores: at start, and after a k change (which makes the flags stale).
      */
-    private Object curveDoneKey;
+    private CurveKey curveDoneKey;
     private boolean submitAfterFrame;
     /** The kind of job whose failure the results show, or {@code null}: it goes when that job runs again. */
     private Jobs.Kind failedKind;
@@ -76,6 +78,7 @@ public final class Explorer implements AutoCloseable {
         this.look = look;
         this.sketches = new Sketches(workbench);
         this.exporter = new Exporter(workbench);
+        this.extent = new DataExtent(workbench);
         this.state = initial;
         this.results = Results.none(workbench.rowsUsed(initial.condition()));
         this.layout = layoutOf(screen.getTerminalSize());
@@ -162,11 +165,11 @@ public final class Explorer implements AutoCloseable {
      * @return 0 after {@code q}, {@link #EXIT_INTERRUPTED} after Ctrl-C
      */
     public int run() throws IOException, InterruptedException {
-        startKeyReader();
-        screen.getTerminal().addResizeListener((t, size) -> events.offer(Jobs.TICK));
+        KeyReader.start(screen, events);
+        screen.getTerminal().addResizeListener((t, size) -> events.offer(Event.TICK));
         start();
         while (!state.quit()) {
-            Object e = events.poll(250, TimeUnit.MILLISECONDS);
+            Event e = events.poll(250, TimeUnit.MILLISECONDS);
             while (e != null && !state.quit()) {
                 handle(e);
                 e = events.poll();
@@ -179,13 +182,13 @@ public final class Explorer implements AutoCloseable {
         return exitStatus;
     }
 
-    private void handle(Object e) throws IOException {
-        if (e instanceof KeyStroke key) {
-            Step step = KeyPress.next(state, key, context());
+    private void handle(Event e) throws IOException {
+        if (e instanceof Event.Key key) {
+            Step step = KeyPress.next(state, key.stroke(), context());
             state = step.state();
             perform(step.effect());
             submit();
-        } else if (e instanceof Jobs.Done d) {
+        } else if (e instanceof Event.JobDone d) {
             apply(d);
             if (d.kind() == Jobs.Kind.CURVE && jobs.isCurrent(d)) {
                 // Tuning and flags are started after the frame that shows this curve (see draw).
@@ -195,37 +198,10 @@ public final class Explorer implements AutoCloseable {
         }
     }
 
-    private void startKeyReader() {
-        Thread reader = new Thread(() -> {
-            try {
-                // Lanterna's virtual terminal holds its lock while it blocks in readInput, which would stop
-                // every frame, so it is polled; a real terminal is read blocking.
-                boolean poll = screen.getTerminal() instanceof com.googlecode.lanterna.terminal.virtual.VirtualTerminal;
-                while (true) {
-                    KeyStroke k = poll ? screen.pollInput() : screen.readInput();
-                    if (poll && k == null) {
-                        Thread.sleep(5);
-                        continue;
-                    }
-                    events.add(k == null ? new KeyStroke(KeyType.EOF) : k);
-                    if (k == null || k.getKeyType() == KeyType.EOF) {
-                        return;
-                    }
-                }
-            } catch (IOException | RuntimeException e) {
-                events.add(new KeyStroke(KeyType.EOF));
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-            }
-        }, "nearfit-keys");
-        reader.setDaemon(true);
-        reader.start();
-    }
-
     /** Handles every queued event; returns whether there was any. */
     private boolean drainEvents() throws IOException {
         boolean any = false;
-        Object e;
+        Event e;
         while ((e = events.poll()) != null) {
             handle(e);
             any = true;
@@ -242,7 +218,7 @@ public final class Explorer implements AutoCloseable {
         long left;
         while (curveKey != null && !curveKey.equals(curveDoneKey) && !state.quit()
                 && (left = end - System.nanoTime()) > 0) {
-            Object e;
+            Event e;
             try {
                 e = events.poll(left, TimeUnit.NANOSECONDS);
             } catch (InterruptedException stop) {
@@ -255,7 +231,7 @@ public final class Explorer implements AutoCloseable {
         }
     }
 
-    private void apply(Jobs.Done d) {
+    private void apply(Event.JobDone d) {
         if (!jobs.isCurrent(d)) {
             return;
         }
@@ -264,11 +240,7 @@ public final class Explorer implements AutoCloseable {
             failedKind = d.kind();
             return;
         }
-        switch (d.kind()) {
-            case CURVE -> results = results.withCurve((CurveResult) d.value(), Double.NaN);
-            case TUNING -> results = results.withTuning((nearfit.knn.TuningTable) d.value(), Double.NaN);
-            case FLAGS -> results = results.withFlags((FlaggedRows) d.value(), Double.NaN);
-        }
+        results = d.update().apply(results);
     }
 
     static String oneLine(Throwable t) {
@@ -305,18 +277,19 @@ public final class Explorer implements AutoCloseable {
         }
         FitKey model = state.model();
         CurveRequest request = request();
-        List<Object> ck = java.util.Arrays.asList(model, request);
+        CurveKey ck = new CurveKey(model, request);
         if (request != null && !ck.equals(curveKey)) {
             curveKey = ck;
             generation++;
             results = results.withCurve(results.curve(), 0);
             curveAskedAt = System.nanoTime();
             forgetFailureOf(Jobs.Kind.CURVE);
-            jobs.start(Jobs.Kind.CURVE, generation, c -> workbench.curve(model, request, c));
+            jobs.start(Jobs.Kind.CURVE, generation, c -> workbench.curve(model, request, c),
+                    (r, curve) -> r.withCurve(curve, Double.NaN));
         }
         // The flagged rows listed are those the row condition shows, which may be fewer than the reference's.
         String shown = state.condition();
-        List<Object> fk = java.util.Arrays.asList(model, state.groupColumn(), shown);
+        FlagsKey fk = new FlagsKey(model, state.groupColumn(), shown);
         if (request != null && !ck.equals(curveDoneKey)) {
             // Stale flags would only slow the curve down; they start again once it is in.
             if (!fk.equals(flagsKey)) {
@@ -333,7 +306,8 @@ public final class Explorer implements AutoCloseable {
             results = results.withFlags(results.flags(), 0);
             String group = state.groupColumn();
             forgetFailureOf(Jobs.Kind.FLAGS);
-            jobs.start(Jobs.Kind.FLAGS, generation, c -> workbench.flags(model, group, shown, c));
+            jobs.start(Jobs.Kind.FLAGS, generation, c -> workbench.flags(model, group, shown, c),
+                    (r, flags) -> r.withFlags(flags, Double.NaN));
         }
         FitKey anyK = model.withK(1);
         if (!anyK.equals(tuningKey)) {
@@ -341,7 +315,9 @@ public final class Explorer implements AutoCloseable {
             generation++;
             results = results.withTuning(null, 0);
             forgetFailureOf(Jobs.Kind.TUNING);
-            jobs.start(Jobs.Kind.TUNING, generation, c -> workbench.tune(model, c));
+            // The figures are taken from the core's table in the job, so the frame only reads them.
+            jobs.start(Jobs.Kind.TUNING, generation, c -> TuningCriterion.figures(workbench.tune(model, c)),
+                    (r, tuning) -> r.withTuning(tuning, Double.NaN));
         }
     }
 
@@ -378,13 +354,7 @@ public final class Explorer implements AutoCloseable {
 
     /** A quantile from the core, asked once per column, condition and level. */
     private double quantile(String column, double q) {
-        List<Object> key = List.of(column, state.condition(), q);
-        Double v = quantiles.get(key);
-        if (v == null) {
-            v = workbench.quantile(column, state.condition(), q);
-            quantiles.put(key, v);
-        }
-        return v;
+        return extent.quantile(column, state.condition(), q);
     }
 
     private ColumnKind kindOf(String column) {
@@ -412,7 +382,10 @@ public final class Explorer implements AutoCloseable {
                 results.rowsUsed() == 0 ? null : request(), groups, classes, Double.NaN, workbench.loadNotes());
     }
 
-    /** Draws a frame, first taking in a new terminal size (which may ask for a new curve). */
+    /**
+     * Draws a frame: first takes in a new terminal size (which may ask for a new curve) and the jobs' progress,
+     * then makes the frame's drawings and has the painter lay out the state, the results and the drawings.
+     */
     void draw() throws IOException {
         TerminalSize resized = screen.doResizeIfNecessary();
         long now = System.nanoTime();
@@ -424,8 +397,10 @@ public final class Explorer implements AutoCloseable {
         results = new Results(results.curve(), jobs.progress(Jobs.Kind.CURVE), results.tuning(),
                 jobs.progress(Jobs.Kind.TUNING), results.flags(), jobs.progress(Jobs.Kind.FLAGS),
                 results.rowsUsed(), results.failure());
+        FrameInput in = frameInput();
+        Drawings drawings = sketches.of(layout, state, results, in, look.ascii());
         Pen pen = new Pen(screen.newTextGraphics(), look, layout.width(), layout.height(), characters);
-        ScreenPainter.paint(pen, layout, state, results, frameInput(), sketches);
+        ScreenPainter.paint(pen, layout, state, results, in, drawings);
         screen.setCursorPosition(null);
         // After a resize the terminal may reflow or clear its cells, even after the first frame at the new size
         // (a multiplexer over SSH may apply its reflow late), so frames are sent whole for a short while;
@@ -441,6 +416,14 @@ public final class Explorer implements AutoCloseable {
             submitAfterFrame = false;
             submit();
         }
+    }
+
+    /** What a curve job depends on: the model settings and where the curve is evaluated. */
+    private record CurveKey(FitKey model, CurveRequest request) {
+    }
+
+    /** What a flags job depends on: the model settings, the group column labelling the rows and the rows shown. */
+    private record FlagsKey(FitKey model, String groupColumn, String shownCondition) {
     }
 
     private static ScreenRegions layoutOf(TerminalSize size) {

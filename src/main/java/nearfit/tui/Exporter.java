@@ -64,7 +64,7 @@ final class Exporter {
         if (in.request() == null) {
             throw new IllegalStateException("no rows to export: change the row condition");
         }
-        PlotScene scene = ScreenPainter.scene(s, r, in, new Look(false, false));
+        PlotScene scene = PlotScene.of(s, r, in, false);
         return switch (kind) {
             case CURVE_CSV -> out -> curveCsv(s, require(r.curve(), "the curve"), out);
             case FLAGS_CSV -> out -> flagsCsv(s, timeInputs(s), require(r.flags(), "the flagged rows"), out);

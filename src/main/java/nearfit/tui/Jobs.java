@@ -5,6 +5,7 @@ import java.util.concurrent.CancellationException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.TimeUnit;
+import java.util.function.BiFunction;
 import java.util.function.Function;
 
 /**
@@ -16,20 +17,13 @@ import java.util.function.Function;
  * chunk of rows), so a k change gets the cores at once and its frame is not slowed by tuning. Starting a job cancels the older one of its kind, and a result
  * whose generation is no longer the latest of its kind is dropped by {@link #isCurrent}.
  *
- * <p>Finished jobs post a {@link Done} to the explorer's event queue; progress posts {@link #TICK} at most
+ * <p>Finished jobs post an {@link Event.JobDone} to the explorer's event queue; progress posts {@link Event#TICK} at most
  * once per percentage point. {@link #start}, {@link #isCurrent} and {@link #progress} are called from the
  * explorer's thread only.
  */
 final class Jobs implements AutoCloseable {
     /** The kinds of job; each has its own latest generation. */
     enum Kind { CURVE, TUNING, FLAGS }
-
-    /** A finished job: its value, or the failure that ended it. */
-    record Done(Kind kind, long generation, Object value, Throwable failure) {
-    }
-
-    /** Posted when a running job's progress moved on, so the header can be redrawn. */
-    static final Object TICK = new Object();
 
     /**
      * Longest a leave-one-out worker waits for one curve; a curve takes well under a second, so this only
@@ -42,13 +36,13 @@ final class Jobs implements AutoCloseable {
     private int curvesRunning;
     private final ExecutorService curveLane;
     private final ExecutorService longLane;
-    private final BlockingQueue<Object> events;
+    private final BlockingQueue<Event> events;
     private final long[] latest = new long[Kind.values().length];
     private final Control[] running = new Control[Kind.values().length];
     private int outstanding;
     private final int[] outstandingOf = new int[Kind.values().length];
 
-    Jobs(BlockingQueue<Object> events) {
+    Jobs(BlockingQueue<Event> events) {
         this.events = events;
         this.curveLane = Executors.newSingleThreadExecutor(r -> daemon(r, "nearfit-curve"));
         this.longLane = Executors.newSingleThreadExecutor(r -> daemon(r, "nearfit-leave-one-out"));
@@ -60,8 +54,11 @@ final class Jobs implements AutoCloseable {
         return t;
     }
 
-    /** Cancels the running job of this kind and starts {@code work} for generation {@code generation}. */
-    <T> void start(Kind kind, long generation, Function<JobControl, T> work) {
+    /**
+     * Cancels the running job of this kind and starts {@code work} for generation {@code generation}; its value
+     * goes into the results through {@code into}, on the explorer's thread.
+     */
+    <T> void start(Kind kind, long generation, Function<JobControl, T> work, BiFunction<Results, T, Results> into) {
         Control old = running[kind.ordinal()];
         if (old != null) {
             old.cancelled = true;
@@ -73,10 +70,11 @@ final class Jobs implements AutoCloseable {
             outstanding++;
             outstandingOf[kind.ordinal()]++;
         }
-        (kind == Kind.CURVE ? curveLane : longLane).execute(() -> run(kind, generation, c, work));
+        (kind == Kind.CURVE ? curveLane : longLane).execute(() -> run(kind, generation, c, work, into));
     }
 
-    private <T> void run(Kind kind, long generation, Control c, Function<JobControl, T> work) {
+    private <T> void run(Kind kind, long generation, Control c, Function<JobControl, T> work,
+            BiFunction<Results, T, Results> into) {
         if (kind == Kind.CURVE) {
             curveStarted();
         }
@@ -84,13 +82,13 @@ final class Jobs implements AutoCloseable {
             if (!c.cancelled) {
                 T value = work.apply(c);
                 if (!c.cancelled) {
-                    events.add(new Done(kind, generation, value, null));
+                    events.add(new Event.JobDone(kind, generation, r -> into.apply(r, value), null));
                 }
             }
         } catch (CancellationException e) {
             // A newer setting asked for this work again; nothing to report.
         } catch (RuntimeException | Error e) {
-            events.add(new Done(kind, generation, null, e));
+            events.add(new Event.JobDone(kind, generation, null, e));
         } finally {
             if (kind == Kind.CURVE) {
                 curveEnded();
@@ -134,7 +132,7 @@ final class Jobs implements AutoCloseable {
     }
 
     /** Whether a finished job is the latest of its kind. */
-    boolean isCurrent(Done d) {
+    boolean isCurrent(Event.JobDone d) {
         return d.generation() == latest[d.kind().ordinal()];
     }
 
@@ -200,7 +198,7 @@ final class Jobs implements AutoCloseable {
         }
     }
 
-    /** A job's flags that also post a {@link #TICK} when its progress passes a percentage point. */
+    /** A job's flags that also post an {@link Event#TICK} when its progress passes a percentage point. */
     private final class Control extends JobReport {
         volatile boolean finished;
         private final boolean yields;
@@ -225,7 +223,7 @@ final class Jobs implements AutoCloseable {
             int percent = (int) (100 * f);
             if (percent != lastPercent) {
                 lastPercent = percent;
-                events.offer(TICK);
+                events.offer(Event.TICK);
             }
         }
     }

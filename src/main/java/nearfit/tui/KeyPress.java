@@ -8,7 +8,6 @@ import java.util.Map;
 import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.input.KeyType;
 
-import nearfit.knn.TuningTable;
 
 /**
  * The explorer's key map as a pure function: a state, a key and what the key may consult give the next state
@@ -150,8 +149,8 @@ public final class KeyPress {
     }
 
     private static int tuningCursor(ViewState s, KeyContext cx) {
-        TuningTable t = cx.results().tuning();
-        return t == null ? 0 : TuningCriterion.line(t, s.k());
+        TuningFigures t = cx.results().tuning();
+        return t == null ? 0 : t.line(s.k());
     }
 
     /** Opens a picker with its cursor on the current choice. */
@@ -198,16 +197,16 @@ public final class KeyPress {
     }
 
     private static Step tuning(ViewState s, KeyStroke key, KeyContext cx) {
-        TuningTable t = cx.results().tuning();
+        TuningFigures t = cx.results().tuning();
         int lines = t == null ? 0 : t.kmax();
         if (t != null && lines > 0 && key.getKeyType() == KeyType.Enter) {
             return Step.of(s.edit().k(Math.min(s.cursor(), lines - 1) + 1).build());
         }
         if (t != null && key.getKeyType() == KeyType.Character && key.getCharacter() == '*') {
-            return Step.of(s.edit().k(t.bestK()).cursor(TuningCriterion.line(t, t.bestK())).build());
+            return Step.of(s.edit().k(t.bestK()).cursor(t.line(t.bestK())).build());
         }
         if (t != null && key.getKeyType() == KeyType.Character && key.getCharacter() == '1') {
-            return Step.of(s.edit().k(t.oneSeK()).cursor(TuningCriterion.line(t, t.oneSeK())).build());
+            return Step.of(s.edit().k(t.oneSeK()).cursor(t.line(t.oneSeK())).build());
         }
         if (key.getKeyType() == KeyType.Character && key.getCharacter() == 't') {
             return Step.of(s.edit().close().build());

@@ -8,12 +8,12 @@ final class Panels {
     private Panels() {
     }
 
-    static void paint(Pen pen, ScreenRegions layout, ViewState s, Results r, FrameInput in, Sketches sketches) {
+    static void paint(Pen pen, ScreenRegions layout, ViewState s, Results r, FrameInput in, Drawings drawn) {
         switch (s.overlay()) {
             case HELP -> list(pen, layout, "keys (Esc closes)", KeyTable.helpLines(), s.cursor(), false, KeyTable.KEY_COLUMN);
             case PICKER -> fitted(pen, layout, "choose the " + s.ask().title() + " (Enter, Esc)", pickerLines(s, in),
                     s.cursor());
-            case TUNING -> tuning(pen, layout, s, r, sketches);
+            case TUNING -> tuning(pen, layout, s, r, drawn.tuningChart());
             case FLAGS -> list(pen, layout, flagTitle(r), FlagTable.lines(s, r, in, layout.width() - 7), s.cursor() + 1,
                     true, 0);
             case LOAD -> list(pen, layout, LoadPanel.title(in.notes()), LoadPanel.lines(in.notes()), s.cursor(), false, 2);
@@ -121,30 +121,32 @@ final class Panels {
         return out;
     }
 
-    private static void tuning(Pen pen, ScreenRegions layout, ViewState s, Results r, Sketches sketches) {
+    private static void tuning(Pen pen, ScreenRegions layout, ViewState s, Results r, Cells chart) {
         int row = layout.plotTop();
         int h = layout.plotHeight();
         int w = layout.width() - 4;
-        nearfit.knn.TuningTable t = r.tuning();
+        TuningFigures t = r.tuning();
         String title = t == null ? "tuning: " + ScreenPainter.tuningState(r)
                 : "tuning: " + rmseSource(t) + " RMSE against log k (Enter adopts, * lowest, 1 one-SE, Esc)";
         pen.box(2, row, w, h, title);
         if (t == null) {
             return;
         }
-        int tableWidth = 30;
-        int chartWidth = w - 2 - tableWidth - 1;
-        pen.cells(sketches.chart(t, s.k(), chartWidth, h - 2, pen.look().ascii()), 3, row + 1);
+        int tableWidth = ScreenRegions.TUNING_TABLE_WIDTH;
+        int chartWidth = layout.tuningChartWidth();
+        if (chart != null) {
+            pen.cells(chart, 3, row + 1);
+        }
         List<String> lines = new ArrayList<>();
         // The lowest and the one-SE k stay in view above the scrolling table, whatever the window's height.
-        double[] v = TuningCriterion.values(t);
+        double[] v = t.values();
         String[] fixed = {
             String.format(java.util.Locale.ROOT, "* lowest %4d  %10s", t.bestK(), Figures.value(v[t.bestK() - 1])),
             String.format(java.util.Locale.ROOT, "1 one-SE %4d  %10s", t.oneSeK(), Figures.value(v[t.oneSeK() - 1])),
-            sampled(t) ? "RMSE on " + Figures.count(t.evaluatedRows()) + " sampled rows" : "RMSE on every row"};
+            t.sampled() ? "RMSE on " + Figures.count(t.evaluatedRows()) + " sampled rows" : "RMSE on every row"};
         lines.add("   k        RMSE        SE");
-        double[] value = TuningCriterion.values(t);
-        double[] se = TuningCriterion.se(t);
+        double[] value = t.values();
+        double[] se = t.se();
         for (int k = 1; k <= t.kmax(); k++) {
             String mark = k == t.bestK() ? "*" : k == t.oneSeK() ? "1" : " ";
             lines.add(String.format(java.util.Locale.ROOT, "%s%5d  %10s  %8s%s", mark, k,
@@ -165,13 +167,9 @@ final class Panels {
         }
     }
 
-    private static boolean sampled(nearfit.knn.TuningTable t) {
-        return t.evaluatedRows() < t.referenceRows();
-    }
-
     /** Where the panel's RMSE comes from, said beside it: a sample's differs from the status line's. */
-    private static String rmseSource(nearfit.knn.TuningTable t) {
-        return sampled(t) ? "sampled (" + Figures.count(t.evaluatedRows()) + " of " + Figures.count(t.referenceRows())
+    private static String rmseSource(TuningFigures t) {
+        return t.sampled() ? "sampled (" + Figures.count(t.evaluatedRows()) + " of " + Figures.count(t.referenceRows())
                 + " rows)" : "leave-one-out";
     }
 

@@ -19,4 +19,12 @@ package nearfit.tui;
 public record PlotScene(FitKey model, CurveRequest request, CurveResult curve, FlaggedRows flags,
         PlotMode mode, boolean flagMarks, double crosshairX, java.util.Map<String, Double> heldQuantile, boolean nearHeldOnly, int markedRow, boolean ascii,
         String shownCondition) {
+    /** The scene of a state and its latest results; {@code in.request()} must not be {@code null}. */
+    public static PlotScene of(ViewState s, Results r, FrameInput in, boolean ascii) {
+        CurveRequest q = in.request();
+        double x = q.from() + s.crosshair() * (q.to() - q.from());
+        CurveResult curve = r.curve() != null && r.curve().size() == q.steps() ? r.curve() : null;
+        return new PlotScene(s.model(), q, curve, r.flags(), s.mode(), s.flagMarks(), x, s.heldQuantile(),
+                s.nearHeldOnly(), s.markedRow(), ascii, s.condition());
+    }
 }

@@ -1,7 +1,5 @@
 package nearfit.tui;
 
-import nearfit.knn.TuningTable;
-
 /**
  * The latest results of the background jobs, each for the settings it was asked for; a frame is drawn from
  * a {@link ViewState} and this value. Progress is NaN when that job is not running.
@@ -15,7 +13,7 @@ import nearfit.knn.TuningTable;
  * @param rowsUsed       rows satisfying the row condition
  * @param failure        the last job failure as one line, empty for none
  */
-public record Results(CurveResult curve, double curveProgress, TuningTable tuning, double tuningProgress,
+public record Results(CurveResult curve, double curveProgress, TuningFigures tuning, double tuningProgress,
         FlaggedRows flags, double flagsProgress, int rowsUsed, String failure) {
     /** No results yet. */
     public static Results none(int rowsUsed) {
@@ -26,7 +24,7 @@ public record Results(CurveResult curve, double curveProgress, TuningTable tunin
         return new Results(c, progress, tuning, tuningProgress, flags, flagsProgress, rowsUsed, failure);
     }
 
-    public Results withTuning(TuningTable t, double progress) {
+    public Results withTuning(TuningFigures t, double progress) {
         return new Results(curve, curveProgress, t, progress, flags, flagsProgress, rowsUsed, failure);
     }
 

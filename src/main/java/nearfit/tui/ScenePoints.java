@@ -3,7 +3,6 @@ package nearfit.tui;
 import java.util.Arrays;
 import java.util.List;
 
-import nearfit.knn.ReferenceData;
 import nearfit.plot.Scene;
 import nearfit.table.CategoryColumn;
 import nearfit.table.Column;
@@ -14,6 +13,8 @@ import nearfit.table.Table;
  * Turns the explorer's {@link PlotScene} into the plot package's {@link Scene}: the points of the used rows
  * (or their leave-one-out residuals), the curve, the band, the flag marks and the crosshair. The point
  * arrays of the latest scene are kept, so moving the crosshair or changing k does not copy columns again.
+ * Residuals come from the scene (the latest flags and, with a group compared, the curve's compared
+ * residuals), never from a cache: what is drawn is what the results hold.
  */
 final class ScenePoints {
     /** Half-width of the "near the held values" window, as a quantile step (5 % either side). */
@@ -21,7 +22,7 @@ final class ScenePoints {
 
     private final Table table;
     private final WorkbenchCache references;
-    private Object pointsKey;
+    private PointsKey pointsKey;
     private Points points;
     /** Row id to its index in {@link #points}, made when first asked for; {@code null} until then. */
     private it.unimi.dsi.fastutil.ints.Int2IntOpenHashMap pointIndex;
@@ -30,6 +31,12 @@ final class ScenePoints {
      * Row ids and their coordinates and codes on the plot, with the finite extent of y (NaN when none).
      * Arrays never change once built.
      */
+    /** What the points depend on; the flags and compared residuals by identity. */
+    private record PointsKey(String condition, String shownCondition, String response, List<String> inputs,
+            String displayInput, PlotMode mode, String groupColumn, boolean nearHeldOnly,
+            java.util.Map<String, Double> held, nearfit.knn.FlagResult flags, ComparedResiduals compared) {
+    }
+
     private record Points(int[] rows, double[] x, double[] y, int[] codes, double yLow, double yHigh) {
         Points(int[] rows, double[] x, double[] y, int[] codes) {
             this(rows, x, y, codes, lowest(y), highest(y));
@@ -164,10 +171,12 @@ final class ScenePoints {
     }
 
     private Points points(PlotScene s) {
-        nearfit.knn.FlagResult flags = s.mode() == PlotMode.RESPONSE ? null : references.flags(s.model());
-        int compared = s.mode() != PlotMode.RESPONSE && s.request().compare() ? s.request().group() : -1;
-        Object key = Arrays.asList(s.model().condition(), s.shownCondition(), s.model().response(), s.model().inputs(),
-                s.request().displayInput(), s.mode(), s.request().groupColumn(), s.nearHeldOnly(),
+        nearfit.knn.FlagResult flags = s.mode() == PlotMode.RESPONSE || s.flags() == null ? null : s.flags().result();
+        boolean residuals = s.mode() != PlotMode.RESPONSE;
+        ComparedResiduals compared = residuals && s.request().compare() && s.request().group() >= 0
+                && s.curve() != null ? s.curve().compared() : null;
+        PointsKey key = new PointsKey(s.model().condition(), s.shownCondition(), s.model().response(),
+                s.model().inputs(), s.request().displayInput(), s.mode(), s.request().groupColumn(), s.nearHeldOnly(),
                 s.nearHeldOnly() ? s.request().held() : null, flags, compared);
         if (!key.equals(pointsKey)) {
             points = s.mode() == PlotMode.RESPONSE ? responsePoints(s) : residualPoints(s, flags, compared);
@@ -201,19 +210,18 @@ final class ScenePoints {
     }
 
     /**
-     * The leave-one-out residual of every shown reference row. With a group compared ({@code compared} its
-     * code, else -1), the highlighted group's rows get their residual against the curve fitted on the other
-     * groups instead, as the plot of the response shows it; the other rows keep theirs.
+     * The leave-one-out residual of every shown reference row of the latest flags. With a group compared
+     * ({@code compared} not {@code null}), the highlighted group's rows get their residual against the curve
+     * fitted on the other groups instead, as the plot of the response shows it; the other rows keep theirs.
      */
-    private Points residualPoints(PlotScene s, nearfit.knn.FlagResult f, int compared) {
+    private Points residualPoints(PlotScene s, nearfit.knn.FlagResult f, ComparedResiduals compared) {
         if (f == null) {
             return new Points(new int[0], new double[0], new double[0], new int[0]);
         }
         int[] ids = f.rowIds();
-        ReferenceData data = references.model(s.model(), null, -1).data();
         double[] y = f.residual();
-        if (compared >= 0 && s.request().groupColumn() != null) {
-            y = againstOthers(s, data, ids, y.clone(), compared);
+        if (compared != null) {
+            y = placed(ids, y.clone(), compared);
         }
         // The flags' row ids are in the knn package's canonical order, not ascending, so no RowSet.
         RowSet shown = s.shownCondition().equals(s.model().condition()) ? null : references.rows(s.shownCondition());
@@ -238,7 +246,12 @@ final class ScenePoints {
             }
             return new Points(rows, x, ys, groupCodes(s, rows));
         }
-        xAll = data.input(s.model().inputs().indexOf(s.request().displayInput()));
+        // Read by row id, so the flags of the settings before (still shown while new ones are computed) line up.
+        nearfit.table.NumericColumn display = table.numeric(s.request().displayInput());
+        xAll = new double[ids.length];
+        for (int i = 0; i < ids.length; i++) {
+            xAll[i] = display.asDouble(ids[i]);
+        }
         if (n == ids.length) {
             return new Points(ids, xAll, y, groupCodes(s, ids));
         }
@@ -253,44 +266,18 @@ final class ScenePoints {
         return new Points(rows, x, ys, groupCodes(s, rows));
     }
 
-    /** The residuals with the group's rows replaced by their residual against the other groups' model. */
-    private double[] againstOthers(PlotScene s, ReferenceData data, int[] ids, double[] y, int group) {
-        CategoryColumn groups = (CategoryColumn) table.column(s.request().groupColumn());
-        int[] mine = new int[ids.length];
-        int n = 0;
+    /** The residuals with the compared rows' residuals put in their places. */
+    private static double[] placed(int[] ids, double[] y, ComparedResiduals compared) {
+        it.unimi.dsi.fastutil.ints.Int2IntOpenHashMap at = new it.unimi.dsi.fastutil.ints.Int2IntOpenHashMap(ids.length);
+        at.defaultReturnValue(-1);
         for (int i = 0; i < ids.length; i++) {
-            if (groups.code(ids[i]) == group) {
-                mine[n++] = i;
+            at.put(ids[i], i);
+        }
+        for (int j = 0; j < compared.rows().length; j++) {
+            int i = at.get(compared.rows()[j]);
+            if (i >= 0) {
+                y[i] = compared.residuals()[j];
             }
-        }
-        if (n == 0) {
-            return y;
-        }
-        nearfit.knn.KnnModel others;
-        try {
-            others = references.model(s.model(), s.request().groupColumn(), group);
-        } catch (RuntimeException noOthers) {
-            // The curve job says why (no rows of the other groups); the leave-one-out residuals stay.
-            return y;
-        }
-        int d = data.dimensions();
-        double[][] query = new double[d][n];
-        for (int j = 0; j < d; j++) {
-            double[] in = data.input(j);
-            for (int i = 0; i < n; i++) {
-                query[j][i] = in[mine[i]];
-            }
-        }
-        double[] all = data.response();
-        double[] response = new double[n];
-        for (int i = 0; i < n; i++) {
-            response[i] = all[mine[i]];
-        }
-        // The core's one scoring call gives the residuals; the face only places them.
-        double[] residual = nearfit.knn.Scoring.score(others, query, response, new nearfit.knn.ZBasis.LocalSpread(),
-                nearfit.knn.KnnSettings.DEFAULT_FLAG_THRESHOLD, nearfit.knn.Progress.NONE).residual();
-        for (int i = 0; i < n; i++) {
-            y[mine[i]] = residual[i];
         }
         return y;
     }

@@ -1,14 +1,15 @@
 package nearfit.tui;
 
 /**
- * Draws one frame from the state, the latest results and the table's facts. Everything numeric shown comes
- * from the results; this class only lays text out.
+ * Draws one frame from the state, the latest results, the table's facts and the drawings made for them
+ * before the frame. Everything numeric shown comes from the results; this class only lays text and cells
+ * out, asks the core for nothing and starts no job.
  */
 final class ScreenPainter {
     private ScreenPainter() {
     }
 
-    static void paint(Pen pen, ScreenRegions layout, ViewState s, Results r, FrameInput in, Sketches sketches) {
+    static void paint(Pen pen, ScreenRegions layout, ViewState s, Results r, FrameInput in, Drawings drawings) {
         if (!layout.fits() || in.request() == null) {
             pen.clear();
         } else {
@@ -23,9 +24,8 @@ final class ScreenPainter {
             return;
         }
         header(pen, layout, s, r, in);
-        if (in.request() != null) {
-            PlotScene scene = scene(s, r, in, pen.look());
-            PlotCells drawn = sketches.plot(scene, layout.width(), layout.plotHeight());
+        if (in.request() != null && drawings.plot() != null) {
+            PlotCells drawn = drawings.plot();
             pen.cells(drawn.plot(), 0, layout.plotTop());
             pen.cells(drawn.strip(), 0, layout.stripRow());
             stripCaption(pen, layout, s, r, in, drawn);
@@ -37,7 +37,7 @@ final class ScreenPainter {
         pen.text(0, layout.statusRow(), status(s, r, in, layout.width(), pen.look().ascii()),
                 warn ? Ink.WARNING : Ink.TEXT);
         pen.text(0, layout.keyRow(), KeyTable.keyBar(layout.width()), Ink.LABEL);
-        Panels.paint(pen, layout, s, r, in, sketches);
+        Panels.paint(pen, layout, s, r, in, drawings);
     }
 
     /**
@@ -67,15 +67,6 @@ final class ScreenPainter {
                 return;
             }
         }
-    }
-
-    /** The scene handed to the plot package. */
-    static PlotScene scene(ViewState s, Results r, FrameInput in, Look look) {
-        CurveRequest q = in.request();
-        double x = q.from() + s.crosshair() * (q.to() - q.from());
-        CurveResult curve = r.curve() != null && r.curve().size() == q.steps() ? r.curve() : null;
-        return new PlotScene(s.model(), q, curve, r.flags(), s.mode(), s.flagMarks(), x, s.heldQuantile(), s.nearHeldOnly(),
-                s.markedRow(), look.ascii(), s.condition());
     }
 
     private static void tooSmall(Pen pen, ScreenRegions layout) {
@@ -135,7 +126,7 @@ final class ScreenPainter {
             return r.flags().looRmse();
         }
         if (r.tuning() != null) {
-            return TuningCriterion.at(r.tuning(), s.k());
+            return r.tuning().at(s.k());
         }
         return Double.NaN;
     }

@@ -45,6 +45,19 @@ public record ScreenRegions(int width, int height) {
         return height - 1;
     }
 
+    /** Width of the tuning panel's table, in columns; the chart takes the rest of the panel. */
+    static final int TUNING_TABLE_WIDTH = 30;
+
+    /** Columns of the tuning panel's chart: the panel's inside less the table and a gap. */
+    int tuningChartWidth() {
+        return width - 4 - 2 - TUNING_TABLE_WIDTH - 1;
+    }
+
+    /** Rows of the tuning panel's chart: the panel's inside. */
+    int tuningChartHeight() {
+        return plotHeight() - 2;
+    }
+
     /**
      * Points on the curve: one per terminal column. The plot joins them with lines, and halving the points
      * of the braille grid's two dots per column halves the curve's cost after a key press.

@@ -1,27 +1,50 @@
 package nearfit.tui;
 
 /**
- * The drawings the screen takes from the plot package, each kept until its inputs change so that moving
- * between panels redraws without recomposing the scatter. Used from the drawing thread only.
+ * Makes the {@link Drawings} of a frame from the plot package, through the {@link Workbench}, before the frame
+ * is painted; each drawing is kept until its inputs change so that moving between panels redraws without
+ * recomposing the scatter. Used from the explorer's thread only.
  */
 final class Sketches {
+    /**
+     * What the composed plot depends on. k, weights and band reach the plot only through the curve and flags
+     * (compared by identity), so a frame drawn right after a k change, still with the old curve, reuses it.
+     */
+    private record PlotKey(FitKey shape, CurveRequest request, CurveResult curve, FlaggedRows flags, PlotMode mode,
+            boolean flagMarks, double crosshairX, java.util.Map<String, Double> heldQuantile, boolean nearHeldOnly,
+            int markedRow, boolean ascii, int width, int height) {
+    }
+
+    /** What the tuning chart depends on. */
+    private record ChartKey(TuningFigures tuning, int k, int width, int height, boolean ascii) {
+    }
+
     private final Workbench workbench;
-    private Object plotKey;
+    private PlotKey plotKey;
     private PlotCells plot;
-    private Object chartKey;
+    private ChartKey chartKey;
     private Cells chart;
 
     Sketches(Workbench workbench) {
         this.workbench = workbench;
     }
 
+    /** The drawings of a frame of this state and these results at this screen size. */
+    Drawings of(ScreenRegions layout, ViewState s, Results r, FrameInput in, boolean ascii) {
+        if (!layout.fits() || in.request() == null) {
+            return new Drawings(null, null);
+        }
+        PlotCells p = plot(PlotScene.of(s, r, in, ascii), layout.width(), layout.plotHeight());
+        Cells c = s.overlay() == Overlay.TUNING && r.tuning() != null
+                ? chart(r.tuning(), s.k(), layout.tuningChartWidth(), layout.tuningChartHeight(), ascii) : null;
+        return new Drawings(p, c);
+    }
+
     PlotCells plot(PlotScene scene, int width, int height) {
-        // k, weights and band reach the plot only through the curve and flags (compared by identity), so a
-        // frame drawn right after a k change, still with the old curve, reuses the composed plot.
         FitKey m = scene.model();
         FitKey shape = new FitKey(m.condition(), m.response(), m.inputs(), 1, m.metric(),
                 nearfit.knn.Weighting.UNIFORM, m.scaling(), nearfit.knn.Band.NONE);
-        Object key = java.util.Arrays.asList(shape, scene.request(), scene.curve(), scene.flags(), scene.mode(),
+        PlotKey key = new PlotKey(shape, scene.request(), scene.curve(), scene.flags(), scene.mode(),
                 scene.flagMarks(), scene.crosshairX(), scene.heldQuantile(), scene.nearHeldOnly(), scene.markedRow(),
                 scene.ascii(), width, height);
         if (!key.equals(plotKey)) {
@@ -31,8 +54,8 @@ final class Sketches {
         return plot;
     }
 
-    Cells chart(nearfit.knn.TuningTable tuning, int k, int width, int height, boolean ascii) {
-        Object key = java.util.Arrays.asList(tuning, k, width, height, ascii);
+    Cells chart(TuningFigures tuning, int k, int width, int height, boolean ascii) {
+        ChartKey key = new ChartKey(tuning, k, width, height, ascii);
         if (!key.equals(chartKey)) {
             chart = workbench.tuningChart(tuning, k, width, height, ascii);
             chartKey = key;

@@ -14,23 +14,10 @@ final class TuningCriterion {
         return t.kmax() > 0 && !Double.isNaN(t.errorRate()[0]);
     }
 
-    /** The criterion by k - 1. */
-    static double[] values(TuningTable t) {
-        return isCategory(t) ? t.errorRate() : t.rmse();
-    }
-
-    /** Its standard error by k - 1. */
-    static double[] se(TuningTable t) {
-        return isCategory(t) ? t.errorRateSe() : t.rmseSe();
-    }
-
-    /** The criterion at {@code k}, NaN when the table does not reach it. */
-    static double at(TuningTable t, int k) {
-        return k >= 1 && k <= t.kmax() ? values(t)[k - 1] : Double.NaN;
-    }
-
-    /** The panel line of {@code k} (1-based k on line k - 1), 0 when the table does not reach it. */
-    static int line(TuningTable t, int k) {
-        return k >= 1 && k <= t.kmax() ? k - 1 : 0;
+    /** The figures the explorer shows of a tuning table. */
+    static TuningFigures figures(TuningTable t) {
+        boolean category = isCategory(t);
+        return new TuningFigures(category ? t.errorRate() : t.rmse(), category ? t.errorRateSe() : t.rmseSe(),
+                t.bestK(), t.oneSeK(), t.evaluatedRows(), t.referenceRows());
     }
 }

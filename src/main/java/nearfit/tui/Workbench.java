@@ -63,7 +63,7 @@ public interface Workbench {
     PlotCells plot(PlotScene scene, int width, int height);
 
     /** RMSE against log k with the lowest and the one-SE k marked. */
-    Cells tuningChart(TuningTable tuning, int currentK, int width, int height, boolean ascii);
+    Cells tuningChart(TuningFigures tuning, int currentK, int width, int height, boolean ascii);
 
     /** The plot as a PNG image of {@code width} by {@code height} pixels. */
     void writePng(PlotScene scene, int width, int height, OutputStream out) throws IOException;

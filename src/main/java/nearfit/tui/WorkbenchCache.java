@@ -27,8 +27,18 @@ final class WorkbenchCache {
     private final Table table;
     private final Map<String, RowSet> rows = lru();
     private final Map<List<Object>, SortedValues> sorted = lru();
-    private final Map<List<Object>, CompletableFuture<KnnModel>> models = lru();
+    private final Map<ModelKey, CompletableFuture<KnnModel>> models = lru();
     private final Map<FitKey, nearfit.knn.FlagResult> flags = lru();
+    private final Map<ComparedKey, ComparedResiduals> compared = lru();
+
+    /** A model's rows, response and inputs, and the rows of one group left out ({@code group} -1: none). */
+    private record ModelKey(String condition, String response, List<String> inputs, nearfit.knn.Metric metric,
+            nearfit.knn.Scaling scaling, String groupColumn, int group) {
+    }
+
+    /** A group compared with the others under some settings. */
+    private record ComparedKey(FitKey model, String groupColumn, int group) {
+    }
 
     WorkbenchCache(Table table) {
         this.table = table;
@@ -76,7 +86,7 @@ final class WorkbenchCache {
      * group column, the rows of group {@code group} are left out (the curve of the other groups).
      */
     KnnModel model(FitKey m, String groupColumn, int group) {
-        List<Object> key = Arrays.asList(m.condition(), m.response(), m.inputs(), m.metric(), m.scaling(),
+        ModelKey key = new ModelKey(m.condition(), m.response(), m.inputs(), m.metric(), m.scaling(),
                 groupColumn, groupColumn == null ? -1 : group);
         CompletableFuture<KnnModel> f;
         boolean mine = false;
@@ -160,5 +170,56 @@ final class WorkbenchCache {
         synchronized (flags) {
             return flags.get(m);
         }
+    }
+
+    /**
+     * The reference rows of group {@code group} with their residuals against the model fitted on the other
+     * groups' rows, from the core's one scoring call; kept per settings and group. Empty when the group has no
+     * reference rows; throws as {@link #model} does when the other groups have none.
+     */
+    ComparedResiduals compared(FitKey m, String groupColumn, int group) {
+        ComparedKey key = new ComparedKey(m, groupColumn, group);
+        synchronized (compared) {
+            ComparedResiduals kept = compared.get(key);
+            if (kept != null) {
+                return kept;
+            }
+        }
+        ReferenceData data = model(m, null, -1).data();
+        int[] ids = data.rowIds();
+        CategoryColumn groups = (CategoryColumn) table.column(groupColumn);
+        int[] mine = new int[ids.length];
+        int n = 0;
+        for (int i = 0; i < ids.length; i++) {
+            if (groups.code(ids[i]) == group) {
+                mine[n++] = i;
+            }
+        }
+        int d = data.dimensions();
+        double[][] query = new double[d][n];
+        for (int j = 0; j < d; j++) {
+            double[] in = data.input(j);
+            for (int i = 0; i < n; i++) {
+                query[j][i] = in[mine[i]];
+            }
+        }
+        double[] all = data.response();
+        double[] response = new double[n];
+        int[] rows = new int[n];
+        for (int i = 0; i < n; i++) {
+            response[i] = all[mine[i]];
+            rows[i] = ids[mine[i]];
+        }
+        double[] residual = new double[0];
+        if (n > 0) {
+            KnnModel others = model(m, groupColumn, group);
+            residual = nearfit.knn.Scoring.score(others, query, response, new nearfit.knn.ZBasis.LocalSpread(),
+                    nearfit.knn.KnnSettings.DEFAULT_FLAG_THRESHOLD, nearfit.knn.Progress.NONE).residual();
+        }
+        ComparedResiduals out = new ComparedResiduals(rows, residual);
+        synchronized (compared) {
+            compared.put(key, out);
+        }
+        return out;
     }
 }

@@ -25,7 +25,7 @@ class HeaderTest {
 
     /** Tuning done (best k 15, one-SE k 30) and flags 40 % through. */
     private Results results() {
-        return new Results(null, Double.NaN, wb.tune(null, JobControl.NONE), Double.NaN, null, 0.4, 1_234, "");
+        return new Results(null, Double.NaN, TuningCriterion.figures(wb.tune(null, JobControl.NONE)), Double.NaN, null, 0.4, 1_234, "");
     }
 
     @Test

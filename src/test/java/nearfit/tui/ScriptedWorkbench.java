@@ -153,7 +153,7 @@ class ScriptedWorkbench implements Workbench {
     }
 
     @Override
-    public Cells tuningChart(TuningTable tuning, int currentK, int width, int height, boolean ascii) {
+    public Cells tuningChart(TuningFigures tuning, int currentK, int width, int height, boolean ascii) {
         return new TextCells(width, height, "chart best " + tuning.bestK(), '.');
     }
 
