@@ -5,7 +5,7 @@ import nearfit.knn.KnnSettings;
 import nearfit.tui.keys.FitKey;
 
 /** The explorer's choices as the knn package's settings. */
-public final class KnnChoices {
+final class KnnChoices {
     /** Worker threads for one curve or leave-one-out run; the machine's processors. */
     static final int THREADS = Math.max(1, Runtime.getRuntime().availableProcessors());
 

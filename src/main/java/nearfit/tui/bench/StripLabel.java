@@ -6,7 +6,7 @@ import nearfit.plot.CanvasKind;
 import nearfit.plot.CellGrid;
 import nearfit.plot.PlotFrame;
 import nearfit.plot.WidthStrip;
-import nearfit.tui.paint.Figures;
+import nearfit.tui.results.Figures;
 
 /**
  * The window-width strip with its scale label in the left margin, which ends one blank cell before the first

@@ -25,7 +25,6 @@ import nearfit.tui.keys.KeyPress;
 import nearfit.tui.keys.Step;
 import nearfit.tui.keys.ViewState;
 import nearfit.tui.paint.Drawings;
-import nearfit.tui.paint.Figures;
 import nearfit.tui.paint.LoadPanel;
 import nearfit.tui.paint.Look;
 import nearfit.tui.paint.Pen;
@@ -34,6 +33,7 @@ import nearfit.tui.paint.ScreenRegions;
 import nearfit.tui.results.ColumnInfo;
 import nearfit.tui.results.ColumnKind;
 import nearfit.tui.results.CurveRequest;
+import nearfit.tui.results.Figures;
 import nearfit.tui.results.FrameInput;
 import nearfit.tui.results.Results;
 

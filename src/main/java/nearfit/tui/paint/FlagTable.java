@@ -6,6 +6,7 @@ import java.util.Locale;
 
 import nearfit.table.VisibleText;
 import nearfit.tui.keys.ViewState;
+import nearfit.tui.results.Figures;
 import nearfit.tui.results.FlaggedRow;
 import nearfit.tui.results.FrameInput;
 import nearfit.tui.results.Results;

@@ -7,6 +7,7 @@ import nearfit.tui.keys.ChoiceNames;
 import nearfit.tui.keys.PlotMode;
 import nearfit.tui.keys.ViewState;
 import nearfit.tui.results.ColumnKind;
+import nearfit.tui.results.Figures;
 import nearfit.tui.results.FrameInput;
 import nearfit.tui.results.Results;
 

@@ -3,6 +3,8 @@ package nearfit.tui.paint;
 import java.util.ArrayList;
 import java.util.List;
 
+import nearfit.tui.results.Figures;
+
 /**
  * One header line made of parts, each with spellings from full to shortest, shortened in a fixed order of
  * importance until the line fits: the least important parts give way first, so the parts never shortened

@@ -9,6 +9,7 @@ import nearfit.table.ColumnGaps;
 import nearfit.table.LoadNotes;
 import nearfit.table.LoadReport;
 import nearfit.table.VisibleText;
+import nearfit.tui.results.Figures;
 
 /**
  * The load-report panel as text lines: what the loader read, its warnings about the file as a whole (say, it

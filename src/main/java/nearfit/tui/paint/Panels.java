@@ -10,6 +10,7 @@ import nearfit.tui.keys.Pickers;
 import nearfit.tui.keys.Prompts;
 import nearfit.tui.keys.ViewState;
 import nearfit.tui.results.Cells;
+import nearfit.tui.results.Figures;
 import nearfit.tui.results.FrameInput;
 import nearfit.tui.results.Ink;
 import nearfit.tui.results.Results;

@@ -6,6 +6,7 @@ import com.googlecode.lanterna.TextColor;
 import com.googlecode.lanterna.graphics.TextGraphics;
 
 import nearfit.tui.results.Cells;
+import nearfit.tui.results.Figures;
 import nearfit.tui.results.Ink;
 
 /** Writes text and cells into a Lanterna back buffer in the explorer's inks, clipped to the screen. */

@@ -8,6 +8,7 @@ import nearfit.tui.results.ColumnInfo;
 import nearfit.tui.results.ColumnKind;
 import nearfit.tui.results.CurveRequest;
 import nearfit.tui.results.CurveResult;
+import nearfit.tui.results.Figures;
 import nearfit.tui.results.FlaggedRows;
 import nearfit.tui.results.FrameInput;
 import nearfit.tui.results.Ink;

@@ -1,10 +1,8 @@
 package nearfit.tui.results;
 
-import nearfit.tui.keys.ViewState;
-
 /**
  * The latest results of the background jobs, each for the settings it was asked for; a frame is drawn from
- * a {@link ViewState} and this value. Progress is NaN when that job is not running.
+ * a {@link nearfit.tui.keys.ViewState} and this value. Progress is NaN when that job is not running.
  *
  * @param curve          the latest curve, or {@code null}
  * @param curveProgress  progress of the running curve job

@@ -23,10 +23,10 @@ import nearfit.tui.bench.JobReport;
 import nearfit.tui.bench.Workbench;
 import nearfit.tui.keys.ViewState;
 import nearfit.tui.loop.Explorer;
-import nearfit.tui.paint.Figures;
 import nearfit.tui.paint.Look;
 import nearfit.tui.paint.Pen;
 import nearfit.tui.paint.ScreenRegions;
+import nearfit.tui.results.Figures;
 import nearfit.tui.results.Ink;
 
 /**

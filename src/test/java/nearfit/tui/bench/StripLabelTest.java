@@ -12,7 +12,7 @@ import nearfit.plot.AxisKind;
 import nearfit.plot.CanvasKind;
 import nearfit.plot.CellGrid;
 import nearfit.plot.PlotFrame;
-import nearfit.tui.paint.Figures;
+import nearfit.tui.results.Figures;
 
 class StripLabelTest {
     /** A plot area of 20 columns from grid column {@code col0}, x from 0 to 10. */

@@ -1,4 +1,4 @@
-package nearfit.tui.paint;
+package nearfit.tui.results;
 
 import java.util.Locale;
 
