@@ -14,7 +14,9 @@ import nearfit.tui.results.TuningFigures;
 
 /**
  * The explorer's key map as a pure function: a state, a key and what the key may consult give the next state
- * and any effect. Nothing here computes statistics or touches the terminal.
+ * and any effect. The plot's keys are dispatched through {@link KeyTable}; the open panel's own keys (lists,
+ * pickers, the tuning and flagged tables, the export menu, prompts) are handled here. Nothing here computes
+ * statistics or touches the terminal.
  */
 public final class KeyPress {
     /** Crosshair step of the left and right arrows, as a fraction of the view's width. */
