@@ -10,10 +10,10 @@ import java.util.concurrent.Callable;
 
 import nearfit.knn.EstimateKind;
 import nearfit.table.NearfitException;
-import nearfit.tui.CoreWorkbench;
-import nearfit.tui.Look;
-import nearfit.tui.StartSettings;
-import nearfit.tui.TerminalSession;
+import nearfit.tui.bench.CoreWorkbench;
+import nearfit.tui.paint.Look;
+import nearfit.tui.session.StartSettings;
+import nearfit.tui.session.TerminalSession;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;

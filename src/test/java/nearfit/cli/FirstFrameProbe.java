@@ -9,12 +9,12 @@ import com.googlecode.lanterna.TerminalSize;
 import com.googlecode.lanterna.screen.TerminalScreen;
 import com.googlecode.lanterna.terminal.virtual.DefaultVirtualTerminal;
 
-import nearfit.tui.CoreWorkbench;
-import nearfit.tui.Explorer;
-import nearfit.tui.JobControl;
-import nearfit.tui.Look;
-import nearfit.tui.ViewState;
-import nearfit.tui.Workbench;
+import nearfit.tui.bench.CoreWorkbench;
+import nearfit.tui.loop.Explorer;
+import nearfit.tui.bench.JobControl;
+import nearfit.tui.paint.Look;
+import nearfit.tui.keys.ViewState;
+import nearfit.tui.bench.Workbench;
 
 /**
  * Run in a child JVM by {@link BigInputSoakTest}: opens the explorer as {@code nearfit view} does (the

@@ -26,10 +26,10 @@ import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.screen.TerminalScreen;
 import com.googlecode.lanterna.terminal.virtual.DefaultVirtualTerminal;
 
-import nearfit.tui.CoreWorkbench;
-import nearfit.tui.Look;
-import nearfit.tui.StartSettings;
-import nearfit.tui.TerminalSession;
+import nearfit.tui.bench.CoreWorkbench;
+import nearfit.tui.paint.Look;
+import nearfit.tui.session.StartSettings;
+import nearfit.tui.session.TerminalSession;
 
 class ViewCommandTest {
     private static String[] run(String... args) {
