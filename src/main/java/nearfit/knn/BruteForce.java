@@ -15,7 +15,7 @@ public final class BruteForce implements NeighborIndex {
 
     @Override
     public void search(double[] query, int k, int exclude, NeighborList out) {
-        out.reset(k);
+        out.reset(k, base);
         int n = coords.length / d;
         for (int i = 0; i < n; i++) {
             if (i != exclude) {

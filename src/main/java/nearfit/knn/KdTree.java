@@ -13,7 +13,9 @@ package nearfit.knn;
  * plus a d-term sum. The bound is summed from the gaps in dimension order with the operations of
  * {@link Metric#key}, and each gap is at most the matching coordinate difference of every row in the
  * cell, so by monotone rounding it never exceeds the key of a row inside: pruning is exact, ties
- * included.
+ * included. The bound a cell is compared with is the largest key that ties the current k-th
+ * ({@link NeighborList#bound()}, {@link Metric#tieHigh}), so a row that ties it only within the
+ * rounding tolerance is not pruned either.
  */
 public final class KdTree implements NeighborIndex {
     /** Rows per leaf at most. */
@@ -199,7 +201,7 @@ public final class KdTree implements NeighborIndex {
 
     @Override
     public void search(double[] query, int k, int exclude, NeighborList out) {
-        out.reset(k);
+        out.reset(k, base);
         double[] gap = out.gaps(d);
         for (int j = 0; j < d; j++) {
             double q = query[j];

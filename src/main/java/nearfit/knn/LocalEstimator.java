@@ -4,8 +4,9 @@ import java.util.Arrays;
 
 /**
  * The estimator applied to one neighbour list, with the tie rule: D is the k-th smallest key,
- * the s rows closer than D count fully and the e - s rows at exactly D share the remaining k - s
- * places equally. Every sum runs over the neighbours sorted by (key, response), an order that does
+ * the s rows below {@link Metric#tieLow}(D) count fully and the e - s rows that tie D (keys from
+ * tieLow(D) to {@link Metric#tieHigh}(D), distances within a relative 1e-12 of D's) share the
+ * remaining k - s places equally. Every sum runs over the neighbours sorted by (key, response), an order that does
  * not depend on row order or threads, so results are bit-identical under shuffles. Uniform fit:
  * {@code (P[s] + (k - s) (P[e] - P[s]) / (e - s)) / k} with P the prefix sums of y; weighted fits
  * use prefix sums of w*y and w the same way. The median visits the neighbours in response order,
@@ -69,21 +70,21 @@ final class LocalEstimator {
         return count;
     }
 
-    /** s: the number of loaded neighbours strictly closer than the k-th. */
+    /** s: the number of loaded neighbours closer than the k-th (below its tie band). */
     int closer(int k) {
-        double d = key[k - 1];
+        double low = metric.tieLow(key[k - 1]);
         int s = k - 1;
-        while (s > 0 && key[s - 1] == d) {
+        while (s > 0 && key[s - 1] >= low) {
             s--;
         }
         return s;
     }
 
-    /** e: the number of neighbours counted at k (closer ones and every one tied with the k-th). */
+    /** e: the number of neighbours counted at k (closer ones and every one that ties the k-th). */
     int counted(int k) {
-        double d = key[k - 1];
+        double high = metric.tieHigh(key[k - 1]);
         int e = k;
-        while (e < count && key[e] == d) {
+        while (e < count && key[e] <= high) {
             e++;
         }
         return e;
@@ -257,7 +258,8 @@ final class LocalEstimator {
 
     /**
      * The class vote at k into {@code shares} (length classCount, sums to 1); returns the winner:
-     * the largest share, then the class whose nearest counted member is closest, then the lowest code.
+     * the largest share, then the class whose nearest counted member is closest (beyond the tie
+     * tolerance: nearest members that tie count as equally near), then the lowest code.
      */
     int vote(int k, double[] shares, double[] nearest) {
         int s = closer(k);
@@ -278,7 +280,7 @@ final class LocalEstimator {
         for (int c = 0; c < shares.length; c++) {
             shares[c] /= total;
             if (nearest[c] != Double.POSITIVE_INFINITY && (best < 0 || shares[c] > shares[best]
-                    || (shares[c] == shares[best] && nearest[c] < nearest[best]))) {
+                    || (shares[c] == shares[best] && nearest[c] < metric.tieLow(nearest[best])))) {
                 best = c;
             }
         }

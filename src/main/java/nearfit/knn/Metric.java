@@ -6,6 +6,15 @@ package nearfit.knn;
  * <p>Internally each index compares a <em>key</em> that is monotone in the distance: the squared
  * distance for {@link #EUCLIDEAN} and {@link #MAHALANOBIS}, the distance itself otherwise. Ties are
  * decided on keys, so every index and the brute-force scan agree exactly.
+ *
+ * <p>A key <em>ties</em> the k-th key D when its distance is within a relative {@link #TIE_TOLERANCE}
+ * of D's distance: {@code tieLow(D) <= key <= tieHigh(D)}. On squared keys the matching bounds are
+ * {@code D (1 - 1e-12)^2} and {@code D (1 + 1e-12)^2}, since {@code |r - R| <= 1e-12 R} is
+ * {@code R^2 (1 - 1e-12)^2 <= r^2 <= R^2 (1 + 1e-12)^2}. The factors are rounded once (relative
+ * error 1e-16, far inside the tolerance) and applied by one rounded multiplication, which is monotone,
+ * so a larger D never gives a smaller bound. Why 1e-12: two distances equal in exact arithmetic come
+ * out of scaling and summing a few ulps apart (about 1e-15 relative) when the values are not much
+ * larger than their spacing; see the package guide for the limit.
  */
 public enum Metric implements ChoiceWord {
     /** Square root of the sum of squared differences. */
@@ -19,6 +28,23 @@ public enum Metric implements ChoiceWord {
      * covariance (so the distance is {@code sqrt((x-y)' S^-1 (x-y))}).
      */
     MAHALANOBIS;
+
+    /** Relative tolerance on distances within which a row ties the k-th distance. */
+    static final double TIE_TOLERANCE = 1e-12;
+    private static final double TIE_HIGH = 1 + TIE_TOLERANCE;
+    private static final double TIE_LOW = 1 - TIE_TOLERANCE;
+    private static final double TIE_HIGH_SQUARED = TIE_HIGH * TIE_HIGH;
+    private static final double TIE_LOW_SQUARED = TIE_LOW * TIE_LOW;
+
+    /** The largest key that ties {@code key} (the k-th key): see the class comment. */
+    double tieHigh(double key) {
+        return key * (base() == EUCLIDEAN ? TIE_HIGH_SQUARED : TIE_HIGH);
+    }
+
+    /** The smallest key that ties {@code key}; keys below it are closer than the k-th. */
+    double tieLow(double key) {
+        return key * (base() == EUCLIDEAN ? TIE_LOW_SQUARED : TIE_LOW);
+    }
 
     /** The metric the index applies to the (possibly whitened) coordinates. */
     Metric base() {

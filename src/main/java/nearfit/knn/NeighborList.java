@@ -4,9 +4,10 @@ import java.util.Arrays;
 
 /**
  * The neighbours of one query: reference positions and keys, ascending by (key, position), with
- * every row tied with the k-th key included, so {@link #count()} can exceed k. Also the search's
- * scratch space (a max-heap of the k best and a buffer of rows tied with the heap's top), reused
- * from query to query: one list per thread, not thread-safe.
+ * every row that ties the k-th key included ({@link Metric#tieHigh}: within a relative 1e-12 of the
+ * k-th distance), so {@link #count()} can exceed k. Also the search's scratch space (a max-heap of
+ * the k best and a buffer of rows that tie the heap's top), reused from query to query: one list
+ * per thread, not thread-safe.
  *
  * <p>Keys are those of {@link Metric}: squared distances for Euclidean and Mahalanobis. During a
  * search the heap holds index-specific <em>slots</em> (the k-d tree's tree-order row), mapped to
@@ -15,13 +16,19 @@ import java.util.Arrays;
  */
 public final class NeighborList {
     private int k;
+    private Metric metric = Metric.EUCLIDEAN;
     private int heapSize;
     private double[] heapKey = new double[16];
     private int[] heapPos = new int[16];
-    /** The heap's top once k are held, else +infinity: the key a candidate must not exceed. */
+    /**
+     * The key a candidate must not exceed: once k are held, the largest key that ties the heap's top
+     * ({@link Metric#tieHigh}); +infinity before, unless {@link #limit} lowered it.
+     */
     private double bound;
     private double[] gaps = new double[0];
     private int tieCount;
+    /** The largest key in the tie buffer (meaningful when tieCount &gt; 0). */
+    private double tieMax;
     private double[] tieKey = new double[16];
     private int[] tiePos = new int[16];
 
@@ -56,9 +63,10 @@ public final class NeighborList {
         return positions;
     }
 
-    /** Starts a search for k neighbours. */
-    void reset(int newK) {
+    /** Starts a search for k neighbours under a base metric (which fixes the tie bound). */
+    void reset(int newK, Metric base) {
         k = newK;
+        metric = base;
         heapSize = 0;
         tieCount = 0;
         count = 0;
@@ -69,7 +77,7 @@ public final class NeighborList {
         }
     }
 
-    /** The key a candidate must not exceed to matter: the heap's top once k are held. */
+    /** The key a candidate must not exceed to matter: the tie bound of the heap's top once k are held. */
     double bound() {
         return bound;
     }
@@ -83,34 +91,51 @@ public final class NeighborList {
     }
 
     /**
-     * Offers a candidate; keeps the k best and every candidate tied with the k-th. Returns the new
+     * Offers a candidate; keeps the k best and every candidate that ties the k-th. Returns the new
      * {@link #bound()}.
      */
     double offer(double key, int pos) {
         if (heapSize < k) {
             push(key, pos);
             if (heapSize == k) {
-                bound = heapKey[0];
+                bound = Math.min(bound, metric.tieHigh(heapKey[0]));
             }
             return bound;
         }
-        double top = heapKey[0];
-        if (key > top) {
+        if (key > bound) {
             return bound;
         }
-        if (key == top) {
+        double top = heapKey[0];
+        if (key >= top) {
             addTie(key, pos);
             return bound;
         }
         int topPos = heapPos[0];
         replaceTop(key, pos);
-        if (heapKey[0] == top) {
-            addTie(top, topPos);
-        } else {
-            tieCount = 0; // the buffered ties were at the old top, now beyond the k-th
+        addTie(top, topPos);
+        double newTop = heapKey[0];
+        if (newTop < top) {
+            bound = Math.min(bound, metric.tieHigh(newTop));
+            if (tieMax > bound) {
+                dropTiesAbove(bound); // buffered rows that tied the old top but not the new one
+            }
         }
-        bound = heapKey[0];
         return bound;
+    }
+
+    /** Removes buffered ties whose key exceeds the bound. */
+    private void dropTiesAbove(double b) {
+        int m = 0;
+        double max = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < tieCount; i++) {
+            if (tieKey[i] <= b) {
+                tieKey[m] = tieKey[i];
+                tiePos[m++] = tiePos[i];
+                max = Math.max(max, tieKey[i]);
+            }
+        }
+        tieCount = m;
+        tieMax = max;
     }
 
     private void push(double key, int pos) {
@@ -155,18 +180,21 @@ public final class NeighborList {
             tieKey = Arrays.copyOf(tieKey, tieCount * 2);
             tiePos = Arrays.copyOf(tiePos, tieCount * 2);
         }
+        tieMax = tieCount == 0 ? key : Math.max(tieMax, key);
         tieKey[tieCount] = key;
         tiePos[tieCount++] = pos;
     }
 
     /**
-     * Lowers the bound to {@code cap} before any candidate is offered: valid when at least k rows
-     * the search may return have a key {@code <= cap}, since then the k-th key is {@code <= cap}
-     * and no row the result holds (ties included) is rejected.
+     * Lowers the bound to the tie bound of {@code cap} before any candidate is offered: valid when
+     * at least k rows the search may return have a key {@code <= cap}, since then the k-th key is
+     * {@code <= cap} and no row the result holds (ties included, {@link Metric#tieHigh} being
+     * monotone) is rejected.
      */
     void limit(double cap) {
-        if (cap < bound) {
-            bound = cap;
+        double b = metric.tieHigh(cap);
+        if (b < bound) {
+            bound = b;
         }
     }
 

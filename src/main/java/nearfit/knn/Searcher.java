@@ -86,7 +86,7 @@ public final class Searcher {
 
     /**
      * Searches k neighbours of scaled coordinates q, excluding a position; for tricube weights
-     * also the first distance beyond the k-th, when a row lies beyond.
+     * also the first distance beyond the k-th's tie band, when a row lies beyond.
      */
     void find(double[] q, int k, int exclude) {
         find(q, k, exclude, model.settings().weighting() == Weighting.TRICUBE);
@@ -101,7 +101,8 @@ public final class Searcher {
         int available = index.size() - (exclude >= 0 ? 1 : 0);
         index.search(q, Math.min(k + 1, available), exclude, list);
         int c = list.count();
-        if (c < available && list.key(c - 1) == list.key(k - 1)) {
+        if (c < available && list.key(c - 1) <= index.metric().tieHigh(list.key(k - 1))) {
+            // every row found ties the k-th: search past them for the first row beyond
             index.search(q, c + 1, exclude, list);
         }
     }

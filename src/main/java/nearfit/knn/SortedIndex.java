@@ -4,10 +4,11 @@ package nearfit.knn;
  * One input: the coordinates in ascending order (the canonical reference order guarantees it),
  * a binary search for the query, then a window grown on both sides, nearest side first. Keys grow
  * monotonically outwards on each side, so the window stops as soon as both next keys exceed the
- * k-th key. The window grows by blocks of equal key (a contiguous position range on one side), the
- * left block before the right one at an equal key, so the output arrives in (key, position) order
- * and needs no sort: with heavily tied inputs (a sensor's rounding) the tied block holds hundreds
- * of rows and sorting it per query dominated the cost.
+ * largest key that ties the k-th ({@link Metric#tieHigh}). The window grows by blocks of equal key
+ * (a contiguous position range on one side), the left block before the right one at an equal
+ * key, so the output arrives in (key, position) order and needs no sort: with heavily tied inputs
+ * (a sensor's rounding) the tied block holds hundreds of rows and sorting it per query dominated
+ * the cost.
  */
 public final class SortedIndex implements NeighborIndex {
     private final double[] x;
@@ -35,7 +36,7 @@ public final class SortedIndex implements NeighborIndex {
     @Override
     public void search(double[] query, int k, int exclude, NeighborList out) {
         double q = query[0];
-        out.reset(k);
+        out.reset(k, base);
         if (Double.isNaN(q)) {
             searchOneByOne(q, k, exclude, out);
             return;
@@ -58,8 +59,8 @@ public final class SortedIndex implements NeighborIndex {
             double kl = l >= 0 ? key(l, q) : Double.POSITIVE_INFINITY;
             double kr = r < n ? key(r, q) : Double.POSITIVE_INFINITY;
             double key = Math.min(kl, kr);
-            if (count >= k && key > out.key(k - 1)) {
-                break;
+            if (count >= k && key > base.tieHigh(out.key(k - 1))) {
+                break; // beyond every row that ties the k-th
             }
             if (l >= 0 && kl == key) {
                 int a = blockStart(l, key, q, exclude);
@@ -127,7 +128,7 @@ public final class SortedIndex implements NeighborIndex {
             }
             boolean left = kl <= kr;
             double key = left ? kl : kr;
-            if (count >= k && key > kth) {
+            if (count >= k && key > base.tieHigh(kth)) {
                 break;
             }
             out.ensureOutput(count + 1);

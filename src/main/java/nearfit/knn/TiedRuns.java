@@ -8,7 +8,7 @@ package nearfit.knn;
  * than k rows at distance 0, and the tie rule then makes every one of them count equally.
  *
  * <p>When the counted neighbours are one run of m rows (all at the k-th key D, none closer, none
- * else at D), every weighting gives them equal weight (uniform trivially; inverse because they
+ * else that ties D), every weighting gives them equal weight (uniform trivially; inverse because they
  * share one distance, or share all the weight at distance 0; tricube because h, the first
  * distance beyond, exceeds D), so the fit is the run's mean, the local SD its population SD and
  * the band its definition-7 quantiles: the same values the row-by-row estimator computes, up to
@@ -129,21 +129,21 @@ final class TiedRuns {
         int r = p == exclude ? p + 1 : p;
         double kl = l >= 0 ? keyAt(l, q) : Double.POSITIVE_INFINITY;
         double kr = r < n ? keyAt(r, q) : Double.POSITIVE_INFINITY;
-        if (kl == kr) {
-            return -1; // rows on both sides at one key (or no rows at all)
+        if (Math.max(kl, kr) <= base.tieHigh(Math.min(kl, kr))) {
+            return -1; // rows on both sides that tie (or no rows at all)
         }
         int run = runHolding(kl < kr ? l : r);
         if (run < 0 || size(run, exclude) < k) {
             return -1;
         }
         double d = Math.min(kl, kr);
-        // the next row beyond the run on its own side must lie strictly farther (rounding can make
-        // distinct coordinates equally far from q)
+        // the next row beyond the run on its own side must lie beyond the tie bound (rounding can make
+        // distinct coordinates equally far, or nearly so, from q)
         int beyond = kl < kr ? start[run] - 1 : end[run];
         if (beyond == exclude) {
             beyond += kl < kr ? -1 : 1;
         }
-        if (beyond >= 0 && beyond < n && keyAt(beyond, q) <= d) {
+        if (beyond >= 0 && beyond < n && keyAt(beyond, q) <= base.tieHigh(d)) {
             return -1;
         }
         return run;

@@ -319,7 +319,7 @@ public final class Tuning {
             int want = tricube ? Math.min(kmax + 1, available) : kmax;
             index.search(q, want, exclude, list);
             int c = list.count();
-            if (tricube && c < available && list.key(c - 1) == list.key(kmax - 1)) {
+            if (tricube && c < available && list.key(c - 1) <= index.metric().tieHigh(list.key(kmax - 1))) {
                 index.search(q, c + 1, exclude, list);
             }
             est.load(list, indexValues);

@@ -46,9 +46,11 @@ class TuningTest {
         double[] sorted = key.clone();
         java.util.Arrays.sort(sorted);
         double kth = sorted[k - 1];
+        double high = base.tieHigh(kth); // rows within a relative 1e-12 of the k-th distance tie it
+        double low = base.tieLow(kth);
         double beyond = Double.NaN;
         for (double v : sorted) {
-            if (v > kth && v != Double.POSITIVE_INFINITY) {
+            if (v > high && v != Double.POSITIVE_INFINITY) {
                 beyond = v;
                 break;
             }
@@ -57,17 +59,17 @@ class TuningTest {
         int tied = 0;
         boolean zero = false;
         for (int i = 0; i < n; i++) {
-            closer += key[i] < kth ? 1 : 0;
-            tied += key[i] == kth ? 1 : 0;
+            closer += key[i] < low ? 1 : 0;
+            tied += key[i] >= low && key[i] <= high ? 1 : 0;
             zero |= key[i] == 0;
         }
         double num = 0;
         double den = 0;
         for (int i = 0; i < n; i++) {
-            if (key[i] > kth) {
+            if (key[i] > high) {
                 continue;
             }
-            double share = key[i] < kth ? 1 : (double) (k - closer) / tied;
+            double share = key[i] < low ? 1 : (double) (k - closer) / tied;
             double dist = m.settings().metric().distanceOfKey(key[i]);
             double wt;
             if (w == Weighting.UNIFORM) {
@@ -76,7 +78,8 @@ class TuningTest {
                 wt = zero ? (key[i] == 0 ? 1 : 0) : 1 / dist;
             } else {
                 double h = m.settings().metric().distanceOfKey(beyond);
-                boolean degenerate = Double.isNaN(beyond) || !(h > m.settings().metric().distanceOfKey(kth));
+                double farthestCounted = sorted[closer + tied - 1];
+                boolean degenerate = Double.isNaN(beyond) || !(h > m.settings().metric().distanceOfKey(farthestCounted));
                 wt = degenerate ? 1 : Math.pow(1 - Math.pow(dist / h, 3), 3);
             }
             num += share * wt * m.data().response()[i];
