@@ -58,6 +58,9 @@ public final class CsvLoader {
     }
 
     private Table loadFile(Path path, String name) {
+        if (ParquetLoader.isParquet(path)) {
+            return ParquetLoader.load(path, name, options); // by its magic bytes, or a folder as a data set
+        }
         long t0 = System.nanoTime();
         if (Files.isDirectory(path)) {
             throw NearfitException.inFile(name, "is a directory, not a CSV file");
