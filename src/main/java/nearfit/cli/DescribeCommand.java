@@ -109,10 +109,10 @@ final class DescribeCommand implements Callable<Integer> {
             }
         }
         StringBuilder out = new StringBuilder();
-        out.append(String.format(Locale.ROOT, "%s: %d rows kept, %d dropped, %d columns, delimiter %s, %s%s%n",
-                shown(r.source()), r.rows(), r.droppedRows(),
-                summaries.size(), r.delimiterName(), r.headerPresent() ? "header row" : "no header row",
-                r.decimalComma() ? ", decimal comma" : ""));
+        out.append(String.format(Locale.ROOT, "%s: %d rows kept, %d dropped, %d columns, %s%n",
+                shown(r.source()), r.rows(), r.droppedRows(), summaries.size(), r.delimiter() == LoadReport.PARQUET
+                        ? "Parquet" : "delimiter " + r.delimiterName() + ", " + (r.headerPresent() ? "header row"
+                        : "no header row") + (r.decimalComma() ? ", decimal comma" : "")));
         out.append(align(rows));
         for (String c : categories) {
             out.append(c).append('\n');

@@ -83,7 +83,7 @@ public final class ParquetLoader {
         }
         List<String> notes = schema.leftOut().isEmpty() ? List.of()
                 : List.of("columns left out (nested, list, map or of a type not read): " + String.join(", ", schema.leftOut()));
-        Layout layout = new Layout(',', false, true, allNames.size(), names, kept, types, 0, 0, notes);
+        Layout layout = new Layout(LoadReport.PARQUET, false, true, allNames.size(), names, kept, types, 0, 0, notes);
         List<ChunkResult> results = readAll(files, parts, schema, kept, layout, name, options.threads());
         List<String> shown = new ArrayList<>();
         for (Part p : parts) {
