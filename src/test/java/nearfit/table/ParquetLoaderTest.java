@@ -61,7 +61,7 @@ class ParquetLoaderTest {
         for (String column : expected.keySet()) {
             ColumnSummary e = expected.get(column);
             ColumnSummary a = actual.get(column);
-            if (name.equals("site-set")) {
+            if (name.equals("site-set") && Double.isFinite(e.mean())) {
                 // The data set holds the rows grouped by unit: sums run in another order, so the mean and SD
                 // may differ in the last bits; everything else is exact.
                 assertEquals(e.mean(), a.mean(), 1e-12 * Math.abs(e.mean()), column);
