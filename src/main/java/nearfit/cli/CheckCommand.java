@@ -119,14 +119,12 @@ final class CheckCommand implements Callable<Integer> {
         } else {
             // Flagged rows are written as they are found, so none is kept in memory; too few rows scored
             // fails inside the write, so no file is left behind.
-            CommandOutput.text(flaggedOutput, model.force, inputs, out, w -> {
-                PredictionCsv csv = new PredictionCsv(w, scored, columns.response(), List.of());
+            PredictionCsv.open(flaggedOutput, model.force, inputs, out, scored, columns.response(), List.of(), csv -> {
                 scored.forEachBlock(b -> {
                     tally.add(b);
                     csv.rows(b, (block, i) -> block.scores().flagged()[i]);
                 });
                 requireRows(tally, scored, leastRows);
-                csv.flush();
             });
         }
         CheckReport report = tally.report(limitFraction, maxOutsideFraction);
@@ -153,7 +151,7 @@ final class CheckCommand implements Callable<Integer> {
                 s.scaling(), s.band(), scheme(stored.tuning()), s.zScale(), stored.residualScale().median(),
                 stored.residualScale().scale(), ToolVersion.get(), Instant.now().truncatedTo(ChronoUnit.SECONDS),
                 c.inputs(), c.response(), scored.group() == null ? null : scored.group().name(),
-                scored.time() == null ? null : scored.time().name());
+                scored.time() == null ? null : scored.time().name(), scored.rowSource());
     }
 
     /** How the model's k was chosen, in words; what the model file records and nothing more. */

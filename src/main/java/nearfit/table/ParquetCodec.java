@@ -14,7 +14,7 @@ import org.apache.parquet.format.CompressionCodec;
  * refused with the codec's name. A damaged page fails as an {@link IllegalArgumentException} the loader
  * turns into one line naming the file.
  */
-final class ParquetCodec {
+public final class ParquetCodec {
     private ParquetCodec() {
     }
 
@@ -141,7 +141,7 @@ final class ParquetCodec {
      * at least 4 bytes within 64 KiB blocks, literals otherwise. Not the reference encoder's output, but
      * any Snappy decoder reads it.
      */
-    static byte[] snappyCompress(byte[] in, int length) {
+    public static byte[] snappyCompress(byte[] in, int length) {
         ByteArrayOutputStream out = new ByteArrayOutputStream(length / 2 + 16);
         for (int v = length; ; v >>>= 7) {
             if (v < 0x80) {
