@@ -40,7 +40,7 @@ import org.apache.parquet.schema.Type.Repetition;
  * opens its own channel.
  */
 final class ParquetFile {
-    static final byte[] MAGIC = {'P', 'A', 'R', '1'};
+    private static final byte[] MAGIC = ParquetLoader.MAGIC;
     private static final long MILLIS_PER_DAY = 86_400_000L;
     /** Julian day number of 1970-01-01, for INT96 timestamps. */
     private static final long JULIAN_EPOCH_DAY = 2_440_588L;

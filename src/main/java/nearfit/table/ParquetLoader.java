@@ -24,6 +24,10 @@ import java.util.concurrent.Future;
  * file and row index ({@link RowSource}). Recognised by the magic bytes {@code PAR1}, never by the name.
  */
 public final class ParquetLoader {
+    /** The four bytes a Parquet file starts and ends with. Here, not in ParquetFile, so that checking a CSV
+     * file loads none of the Parquet library's classes. */
+    static final byte[] MAGIC = {'P', 'A', 'R', '1'};
+
     private ParquetLoader() {
     }
 
@@ -40,7 +44,7 @@ public final class ParquetLoader {
 
     private static boolean startsWithMagic(Path path) {
         try (InputStream in = Files.newInputStream(path)) {
-            return Arrays.equals(in.readNBytes(4), ParquetFile.MAGIC);
+            return Arrays.equals(in.readNBytes(4), MAGIC);
         } catch (IOException e) {
             return false; // the CSV loader reports the unreadable file
         }
