@@ -44,7 +44,7 @@ final class CheckCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "MODEL", description = "A model file written by fit.")
     Path modelFile;
 
-    @Parameters(index = "1", paramLabel = "FILE", description = "CSV file, plain or gzip; - for standard input.")
+    @Parameters(index = "1", paramLabel = "FILE", description = "CSV file (plain or gzip), Parquet file, or folder of Parquet files; - for standard input.")
     String file;
 
     @Option(names = "--limit", converter = OptionNumbers.Percent.class, paramLabel = "PCT", defaultValue = "1",
@@ -71,7 +71,7 @@ final class CheckCommand implements Callable<Integer> {
     OptionChoices.CheckFormat format;
 
     @Option(names = "-o", paramLabel = "FLAGGED",
-            description = "Also write the flagged rows here as CSV (line, time, group, inputs, response, fit, band_lo, "
+            description = "Also write the flagged rows here as CSV, or Parquet when the name ends in .parquet (line, time, group, inputs, response, fit, band_lo, "
                     + "band_hi, resid, z); - writes them to standard output and the report to standard error. An "
                     + "existing file is kept unless --force is given: add --force when a cron job writes the same "
                     + "file every run.")

@@ -26,7 +26,7 @@ import picocli.CommandLine.Spec;
         description = "Summarise each column of a CSV file (plain, gzip or - for standard input) and report "
                 + "ragged rows and bad cells.")
 final class DescribeCommand implements Callable<Integer> {
-    @Parameters(index = "0", paramLabel = "FILE", description = "The CSV file, plain or gzip; - for standard input.")
+    @Parameters(index = "0", paramLabel = "FILE", description = "The CSV file (plain or gzip), Parquet file, or folder of Parquet files; - for standard input.")
     String file;
 
     @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "table",
