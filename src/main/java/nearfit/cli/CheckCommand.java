@@ -43,7 +43,7 @@ final class CheckCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "MODEL", description = "A model file written by fit.")
     Path modelFile;
 
-    @Parameters(index = "1", paramLabel = "FILE", description = "CSV file, plain or gzip; - for standard input.")
+    @Parameters(index = "1", paramLabel = "FILE", description = "CSV file (plain or gzip), Parquet file, or folder of Parquet files; - for standard input.")
     String file;
 
     @Option(names = "--limit", converter = OptionNumbers.Percent.class, paramLabel = "PCT", defaultValue = "1",
@@ -70,7 +70,7 @@ final class CheckCommand implements Callable<Integer> {
     OptionChoices.CheckFormat format;
 
     @Option(names = "-o", paramLabel = "FLAGGED",
-            description = "Also write the flagged rows here as CSV (line, time, group, inputs, response, fit, band_lo, "
+            description = "Also write the flagged rows here as CSV, or Parquet when the name ends in .parquet (line, time, group, inputs, response, fit, band_lo, "
                     + "band_hi, resid, z); - writes them to standard output and the report to standard error. An "
                     + "existing file is kept unless --force is given: add --force when a cron job writes the same "
                     + "file every run.")
@@ -118,14 +118,12 @@ final class CheckCommand implements Callable<Integer> {
         } else {
             // Flagged rows are written as they are found, so none is kept in memory; too few rows scored
             // fails inside the write, so no file is left behind.
-            CommandOutput.text(flaggedOutput, model.force, inputs, out, w -> {
-                PredictionCsv csv = new PredictionCsv(w, scored, columns.response(), List.of());
+            PredictionCsv.open(flaggedOutput, model.force, inputs, out, scored, columns.response(), List.of(), csv -> {
                 scored.forEachBlock(b -> {
                     tally.add(b);
                     csv.rows(b, (block, i) -> block.scores().flagged()[i]);
                 });
                 requireRows(tally, scored, leastRows);
-                csv.flush();
             });
         }
         CheckReport report = tally.report(limitFraction, maxOutsideFraction);
@@ -151,7 +149,7 @@ final class CheckCommand implements Callable<Integer> {
                 scheme(stored.tuning()), stored.residualScale().median(),
                 stored.residualScale().scale(), ToolVersion.get(), Instant.now().truncatedTo(ChronoUnit.SECONDS),
                 c.inputs(), c.response(), scored.group() == null ? null : scored.group().name(),
-                scored.time() == null ? null : scored.time().name());
+                scored.time() == null ? null : scored.time().name(), scored.rowSource());
     }
 
     /** How the model's k was chosen, in words; what the model file records and nothing more. */

@@ -11,6 +11,7 @@ import java.util.Map;
 import nearfit.knn.KnnSettings;
 import nearfit.knn.ReferenceReach;
 import nearfit.model.JsonText;
+import nearfit.table.RowSource;
 import nearfit.table.VisibleText;
 
 /**
@@ -49,11 +50,21 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
      * @param response       the model's response
      * @param group          the group column, or {@code null}
      * @param timeColumn     the data file's time column shown beside each row, or {@code null}
+     * @param rowSource      what a worst row's source-row value means (CSV line, or Parquet file and row)
      */
     record About(String modelFile, String modelSha256, String dataFile, String rowCondition, KnnSettings settings,
                  String scheme, double residualMedian,
                  double residualScale, String toolVersion, Instant ranAt, List<String> inputs, String response,
-                 String group, String timeColumn) {
+                 String group, String timeColumn, RowSource rowSource) {
+        /** Rows of a CSV file, traced by line. */
+        About(String modelFile, String modelSha256, String dataFile, String rowCondition, int k, String metric,
+              String weights, String scaling, String band, String scheme, String zScale, double residualMedian,
+              double residualScale, String toolVersion, Instant ranAt, List<String> inputs, String response,
+              String group, String timeColumn) {
+            this(modelFile, modelSha256, dataFile, rowCondition, k, metric, weights, scaling, band, scheme, zScale,
+                    residualMedian, residualScale, toolVersion, ranAt, inputs, response, group, timeColumn,
+                    RowSource.CSV_LINES);
+        }
     }
 
     /** Counts for one group; {@code beyond} of its scored rows lie beyond the reference. */
@@ -312,7 +323,14 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
         List<Object> worstRows = new ArrayList<>();
         for (WorstRow w : worst) {
             Map<String, Object> one = new LinkedHashMap<>();
-            one.put("line", w.line());
+            RowSource src = about.rowSource();
+            if (!src.isParquet()) {
+                one.put("line", w.line());
+            } else {
+                // A Parquet row: its file (the data set's file, or the one file) and 0-based row index.
+                one.put("file", src.files().size() == 1 ? about.dataFile() : src.fileOf(w.line()));
+                one.put("row", src.rowIndex(w.line()));
+            }
             if (about.timeColumn() != null) {
                 one.put("time", Double.isNaN(w.time()) ? null : Instant.ofEpochMilli((long) w.time()).toString());
             }
@@ -446,7 +464,10 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
 
     private void writeWorst(PrintWriter out, String groupName) {
         boolean time = about.timeColumn() != null && !about.inputs().contains(about.timeColumn());
-        StringBuilder head = new StringBuilder(String.format(Locale.ROOT, "%10s", "line"));
+        RowSource src = about.rowSource();
+        String origin = src.isParquet() && src.files().size() > 1 ? "%-40s" : "%10s";
+        StringBuilder head = new StringBuilder(String.format(Locale.ROOT, origin,
+                src.isParquet() && src.files().size() > 1 ? "file:row" : src.heading()));
         if (time) {
             head.append(String.format(Locale.ROOT, " %-20s", VisibleText.of(about.timeColumn())));
         }
@@ -458,7 +479,7 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
                 "fit", "band_lo", "band_hi", "resid", "z"));
         out.println(head);
         for (WorstRow w : worst) {
-            StringBuilder row = new StringBuilder(String.format(Locale.ROOT, "%10d", w.line()));
+            StringBuilder row = new StringBuilder(String.format(Locale.ROOT, origin, VisibleText.of(src.label(w.line()))));
             if (time) {
                 row.append(String.format(Locale.ROOT, " %-20s", timeText(w.time())));
             }

@@ -26,7 +26,7 @@ import picocli.CommandLine.Spec;
         description = "Summarise each column of a CSV file (plain, gzip or - for standard input) and report "
                 + "ragged rows and bad cells.")
 final class DescribeCommand implements Callable<Integer> {
-    @Parameters(index = "0", paramLabel = "FILE", description = "The CSV file, plain or gzip; - for standard input.")
+    @Parameters(index = "0", paramLabel = "FILE", description = "The CSV file (plain or gzip), Parquet file, or folder of Parquet files; - for standard input.")
     String file;
 
     @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "table",
@@ -109,10 +109,10 @@ final class DescribeCommand implements Callable<Integer> {
             }
         }
         StringBuilder out = new StringBuilder();
-        out.append(String.format(Locale.ROOT, "%s: %d rows kept, %d dropped, %d columns, delimiter %s, %s%s%n",
-                shown(r.source()), r.rows(), r.droppedRows(),
-                summaries.size(), r.delimiterName(), r.headerPresent() ? "header row" : "no header row",
-                r.decimalComma() ? ", decimal comma" : ""));
+        out.append(String.format(Locale.ROOT, "%s: %d rows kept, %d dropped, %d columns, %s%n",
+                shown(r.source()), r.rows(), r.droppedRows(), summaries.size(), r.delimiter() == LoadReport.PARQUET
+                        ? "Parquet" : "delimiter " + r.delimiterName() + ", " + (r.headerPresent() ? "header row"
+                        : "no header row") + (r.decimalComma() ? ", decimal comma" : "")));
         out.append(align(rows));
         for (String c : categories) {
             out.append(c).append('\n');

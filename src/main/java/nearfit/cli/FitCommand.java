@@ -26,7 +26,7 @@ import picocli.CommandLine.Parameters;
 @Command(name = "fit", mixinStandardHelpOptions = true, sortOptions = false,
         description = "Fit a reference on the rows of FILE and save it as a model file (.nfm) for predict and check.")
 final class FitCommand implements Callable<Integer> {
-    @Parameters(index = "0", paramLabel = "FILE", description = "CSV file, plain or gzip; - for standard input.")
+    @Parameters(index = "0", paramLabel = "FILE", description = "CSV file (plain or gzip), Parquet file, or folder of Parquet files; - for standard input.")
     String file;
 
     @Mixin

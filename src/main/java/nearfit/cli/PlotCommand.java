@@ -46,7 +46,7 @@ final class PlotCommand implements Callable<Integer> {
     /** Curve points across the display input's range. */
     static final int CURVE_POINTS = 400;
 
-    @Parameters(index = "0", paramLabel = "FILE", description = "CSV file, plain or gzip; - for standard input.")
+    @Parameters(index = "0", paramLabel = "FILE", description = "CSV file (plain or gzip), Parquet file, or folder of Parquet files; - for standard input.")
     String file;
 
     @Mixin

@@ -23,11 +23,11 @@ final class PredictCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "MODEL", description = "A model file written by fit.")
     Path modelFile;
 
-    @Parameters(index = "1", paramLabel = "FILE", description = "CSV file, plain or gzip; - for standard input.")
+    @Parameters(index = "1", paramLabel = "FILE", description = "CSV file (plain or gzip), Parquet file, or folder of Parquet files; - for standard input.")
     String file;
 
-    @Option(names = "-o", paramLabel = "OUT", description = "Write the CSV here instead of standard output "
-            + "(- is standard output).")
+    @Option(names = "-o", paramLabel = "OUT", description = "Write the rows here instead of standard output "
+            + "(- is standard output): Parquet when the name ends in .parquet, else CSV.")
     Path output;
 
     @Option(names = "--loo", description = "FILE is the model's own reference file: write leave-one-out "

@@ -8,6 +8,9 @@ import java.util.Collection;
 import java.util.List;
 
 import nearfit.model.ResultCsv;
+import nearfit.model.ResultParquet;
+import nearfit.model.ResultSink;
+import nearfit.table.RowSource;
 
 /**
  * Writes scored rows through {@link ResultCsv}, the one CSV writer: {@code line}, the file's first time
@@ -22,7 +25,8 @@ final class PredictionCsv {
         boolean keep(ScoredRows.Block block, int i);
     }
 
-    private final ResultCsv csv;
+    private final ResultSink csv;
+    private final RowSource rowSource;
     private final ScoredRows source;
     private final List<String> classLabels;
     /** Whether the time column is written on its own (it is not one of the inputs). */
@@ -30,11 +34,17 @@ final class PredictionCsv {
 
     /** Starts a CSV of {@code source}'s rows on {@code w} and writes its header. */
     PredictionCsv(Writer w, ScoredRows source, String responseName, List<String> classLabels) throws IOException {
-        this.csv = new ResultCsv(w);
+        this(new ResultCsv(w), source, responseName, classLabels);
+    }
+
+    /** Starts {@code sink} (a CSV or Parquet form) with the columns of {@code source}'s rows. */
+    PredictionCsv(ResultSink sink, ScoredRows source, String responseName, List<String> classLabels) throws IOException {
+        this.csv = sink;
+        this.rowSource = source.rowSource();
         this.source = source;
         this.classLabels = classLabels;
         this.timeColumn = source.time() != null && !source.inputNames().contains(source.time().name());
-        csv.header(ResultCsv.rowColumns(timeColumn ? source.time().name() : null,
+        csv.header(ResultCsv.rowColumns(rowSource, timeColumn ? source.time().name() : null,
                 source.group() == null ? null : source.group().name(), source.inputNames(),
                 source.hasResponse() ? responseName : null, source.categoryResponse()));
     }
@@ -45,11 +55,45 @@ final class PredictionCsv {
      */
     static void write(ScoredRows s, String responseName, List<String> classLabels, Path target, boolean force,
                       Collection<Path> inputs, PrintWriter stdout, RowFilter filter) {
-        CommandOutput.text(target, force, inputs, stdout, w -> {
-            PredictionCsv csv = new PredictionCsv(w, s, responseName, classLabels);
+        open(target, force, inputs, stdout, s, responseName, classLabels, csv -> {
             s.forEachBlock(b -> csv.rows(b, filter));
-            csv.flush();
         });
+    }
+
+    /** What is written between the header and the end of the file. */
+    @FunctionalInterface
+    interface Body {
+        void writeTo(PredictionCsv rows) throws IOException;
+    }
+
+    /**
+     * Opens the rows' output: Parquet when {@code target}'s name ends in {@code .parquet} (any case), else
+     * CSV; standard output ({@code null} or {@code -}) is always CSV. Writes the header, runs {@code body},
+     * then ends the file.
+     */
+    static void open(Path target, boolean force, Collection<Path> inputs, PrintWriter stdout, ScoredRows s,
+                     String responseName, List<String> classLabels, Body body) {
+        if (isParquet(target)) {
+            CommandOutput.bytes(target, force, inputs, stdout, out -> {
+                java.io.OutputStream buffered = new java.io.BufferedOutputStream(out, 1 << 16);
+                PredictionCsv rows = new PredictionCsv(new ResultParquet(buffered, "nearfit " + ToolVersion.get()), s,
+                        responseName, classLabels);
+                body.writeTo(rows);
+                rows.csv.finish();
+            });
+            return;
+        }
+        CommandOutput.text(target, force, inputs, stdout, w -> {
+            PredictionCsv rows = new PredictionCsv(w, s, responseName, classLabels);
+            body.writeTo(rows);
+            rows.csv.finish();
+        });
+    }
+
+    /** Whether rows written to {@code target} are written as Parquet: a file whose name ends in .parquet. */
+    static boolean isParquet(Path target) {
+        return target != null && !CommandOutput.isStandardOutput(target)
+                && target.getFileName().toString().toLowerCase(java.util.Locale.ROOT).endsWith(".parquet");
     }
 
     /** Writes the rows of {@code block} that {@code filter} keeps. */
@@ -66,7 +110,7 @@ final class PredictionCsv {
     }
 
     private void record(ScoredRows.Block b, int i) throws IOException {
-        csv.whole(b.lines()[i]);
+        ResultCsv.origin(csv, rowSource, b.lines()[i]);
         if (timeColumn) {
             csv.time(b.times()[i]);
         }

@@ -149,6 +149,11 @@ final class ScoredRows {
         return new ScoredRows(model, source, options, threshold, err);
     }
 
+    /** What the rows' source-row values mean (CSV lines, or Parquet files and row indexes). */
+    nearfit.table.RowSource rowSource() {
+        return table.rowSource();
+    }
+
     /** Rows to score (those meeting the row condition). */
     int rowCount() {
         return rowCount;

@@ -57,10 +57,11 @@ final class SourceTable {
                             PrintWriter err) {
         boolean stdin = "-".equals(name);
         Path path = stdin ? null : ArgumentPath.of(name);
-        if (!stdin && (Files.isDirectory(path) || !Files.exists(path))) {
-            throw NearfitException.inFile(name, Files.isDirectory(path) ? "is a folder, not a CSV file" : "no such file");
+        if (!stdin && !Files.exists(path)) {
+            throw NearfitException.inFile(name, "no such file");
         }
-        // A named pipe, <(zcat x) or /dev/stdin is read once as a stream, like standard input: no size, no digest.
+        // A named pipe, <(zcat x) or /dev/stdin is read once as a stream, like standard input: no size, no digest;
+        // nor has a folder (a Parquet data set).
         boolean stream = stdin || !Files.isRegularFile(path);
         CompletableFuture<String> sha = stream ? CompletableFuture.completedFuture(null)
                 : CompletableFuture.supplyAsync(() -> sha256Of(path, name));

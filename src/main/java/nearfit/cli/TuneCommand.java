@@ -17,7 +17,7 @@ import picocli.CommandLine.Parameters;
         description = "Choose k by cross-validation: error figures for every k from 1 to --kmax, "
                 + "the lowest-RMSE k and the one-SE k (the largest k within one standard error of the best).")
 final class TuneCommand implements Callable<Integer> {
-    @Parameters(index = "0", paramLabel = "FILE", description = "CSV file, plain or gzip; - for standard input.")
+    @Parameters(index = "0", paramLabel = "FILE", description = "CSV file (plain or gzip), Parquet file, or folder of Parquet files; - for standard input.")
     String file;
 
     @Mixin

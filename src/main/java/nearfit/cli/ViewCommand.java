@@ -28,7 +28,7 @@ final class ViewCommand implements Callable<Integer> {
     /** The demo log under NEARFIT_HOME, or under the working folder. */
     static final String DEMO = "data-demo/site-log.csv.gz";
 
-    @Parameters(index = "0", arity = "0..1", paramLabel = "FILE", description = "CSV file, optionally .gz.")
+    @Parameters(index = "0", arity = "0..1", paramLabel = "FILE", description = "CSV file (optionally gzip), Parquet file, or folder of Parquet files.")
     Path file;
 
     @Option(names = "-x", split = ",", paramLabel = "COL", description = "Input columns; the first is displayed.")

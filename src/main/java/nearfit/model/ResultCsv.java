@@ -1,7 +1,6 @@
 package nearfit.model;
 
 import java.io.BufferedWriter;
-import java.io.Flushable;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.io.OutputStreamWriter;
@@ -11,6 +10,7 @@ import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
 
+import nearfit.table.RowSource;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 
@@ -26,8 +26,12 @@ import org.apache.commons.csv.CSVPrinter;
  * cells are empty where there is no band, e.g. leave-one-out) or {@code class, share} (a category
  * response). A curve: the display input, then {@code fit, band_lo, band_hi, window_width, neighbours}.
  */
-public final class ResultCsv implements Flushable {
+public final class ResultCsv implements ResultSink {
     public static final String LINE = "line";
+    /** A Parquet source's row index (0-based) in its file, in place of {@link #LINE}. */
+    public static final String ROW = "row";
+    /** A Parquet data set's file (within its folder), before {@link #ROW}. */
+    public static final String FILE = "file";
     public static final String FIT = "fit";
     public static final String BAND_LO = "band_lo";
     public static final String BAND_HI = "band_hi";
@@ -64,8 +68,16 @@ public final class ResultCsv implements Flushable {
      */
     public static List<String> rowColumns(String time, String group, List<String> inputs, String response,
                                           boolean category) {
-        List<String> names = new ArrayList<>();
-        names.add(LINE);
+        return rowColumns(RowSource.CSV_LINES, time, group, inputs, response, category);
+    }
+
+    /**
+     * As {@link #rowColumns(String, String, List, String, boolean)} for rows of {@code source}: a CSV's rows
+     * start with {@code line}, one Parquet file's with {@code row}, a data set's with {@code file, row}.
+     */
+    public static List<String> rowColumns(RowSource source, String time, String group, List<String> inputs,
+                                          String response, boolean category) {
+        List<String> names = new ArrayList<>(originColumns(source));
         if (time != null) {
             names.add(time);
         }
@@ -89,12 +101,29 @@ public final class ResultCsv implements Flushable {
         return names;
     }
 
+    /** The columns that say where a row comes from: {@code line}, {@code row} or {@code file, row}. */
+    public static List<String> originColumns(RowSource source) {
+        if (!source.isParquet()) {
+            return List.of(LINE);
+        }
+        return source.files().size() == 1 ? List.of(ROW) : List.of(FILE, ROW);
+    }
+
+    /** Writes a row's origin cells (see {@link #originColumns}) for its source-row value. */
+    public static void origin(ResultSink sink, RowSource source, long value) throws IOException {
+        if (source.isParquet() && source.files().size() > 1) {
+            sink.text(source.fileOf(value));
+        }
+        sink.whole(source.rowIndex(value));
+    }
+
     /** The columns of a curve along {@code displayInput}. */
     public static List<String> curveColumns(String displayInput) {
         return List.of(displayInput, FIT, BAND_LO, BAND_HI, WINDOW_WIDTH, NEIGHBOURS);
     }
 
     /** Writes the header line; names from a file are neutralised like any text cell. */
+    @Override
     public void header(List<String> names) throws IOException {
         for (String name : names) {
             text(name);
@@ -103,36 +132,42 @@ public final class ResultCsv implements Flushable {
     }
 
     /** A text cell (a label or a name from the file), neutralised; empty for {@code null}. */
+    @Override
     public ResultCsv text(String s) throws IOException {
         printer.print(CsvCells.text(s));
         return this;
     }
 
     /** A number cell; empty for NaN. */
+    @Override
     public ResultCsv number(double v) throws IOException {
         printer.print(CsvCells.number(v));
         return this;
     }
 
     /** A whole number (a line number, a count). */
+    @Override
     public ResultCsv whole(long v) throws IOException {
         printer.print(Long.toString(v));
         return this;
     }
 
     /** A time given in epoch milliseconds (exact in a double) as ISO 8601 UTC; empty for NaN. */
+    @Override
     public ResultCsv time(double epochMillis) throws IOException {
         printer.print(Double.isNaN(epochMillis) ? "" : Instant.ofEpochMilli((long) epochMillis).toString());
         return this;
     }
 
     /** An empty cell (a value that does not apply to the row, such as a band under leave-one-out). */
+    @Override
     public ResultCsv empty() throws IOException {
         printer.print("");
         return this;
     }
 
     /** Ends the current row. */
+    @Override
     public void endRow() throws IOException {
         printer.println();
     }

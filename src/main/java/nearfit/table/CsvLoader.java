@@ -58,10 +58,10 @@ public final class CsvLoader {
     }
 
     private Table loadFile(Path path, String name) {
-        long t0 = System.nanoTime();
-        if (Files.isDirectory(path)) {
-            throw NearfitException.inFile(name, "is a directory, not a CSV file");
+        if (ParquetLoader.isParquet(path)) {
+            return ParquetLoader.load(path, name, options); // by its magic bytes, or a folder as a data set
         }
+        long t0 = System.nanoTime();
         try {
             if (!Files.isRegularFile(path) && Files.exists(path)) {
                 // A pipe such as <(zcat log.gz) has no size and can be read once: read it as a stream

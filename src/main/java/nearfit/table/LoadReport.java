@@ -8,7 +8,7 @@ import java.util.List;
  * @param source         the file as the user named it ("-" for standard input)
  * @param rows           data rows kept (ragged rows are not among them)
  * @param bytes          input bytes read (decompressed for gzip)
- * @param delimiter      the field delimiter used
+ * @param delimiter      the field delimiter used; {@link #PARQUET} for a Parquet file or data set
  * @param headerPresent  whether the first row was read as a header
  * @param decimalComma   whether numbers were read with a decimal comma
  * @param shortRows      rows with fewer fields than the header, dropped (none of their cells is used)
@@ -23,6 +23,9 @@ import java.util.List;
 public record LoadReport(String source, int rows, long bytes, char delimiter, boolean headerPresent,
         boolean decimalComma, long shortRows, long longRows, List<BadCell> raggedExamples, long badCells,
         List<BadCell> badExamples, long nanos, List<String> warnings) {
+    /** The delimiter of a Parquet load, which has none. */
+    public static final char PARQUET = '\0';
+
     /** How many examples of each kind a report keeps. */
     public static final int EXAMPLES = 10;
 
@@ -54,6 +57,7 @@ public record LoadReport(String source, int rows, long bytes, char delimiter, bo
      */
     public String delimiterName() {
         return switch (delimiter) {
+            case PARQUET -> "none (Parquet)";
             case ',' -> "comma";
             case ';' -> "semicolon";
             case '\t' -> "tab";

@@ -16,8 +16,14 @@ public final class Table {
     private final Map<String, Column> byName = new HashMap<>();
     private final LongChunks lines;
     private final LoadReport report;
+    private final RowSource rowSource;
 
     Table(List<Column> columns, LongChunks lines, LoadReport report) {
+        this(columns, lines, report, RowSource.CSV_LINES);
+    }
+
+    Table(List<Column> columns, LongChunks lines, LoadReport report, RowSource rowSource) {
+        this.rowSource = rowSource;
         this.columns = List.copyOf(columns);
         for (Column c : columns) {
             byName.put(c.name(), c);
@@ -78,9 +84,17 @@ public final class Table {
         return out;
     }
 
-    /** The 1-based source line where row {@code row} starts (quoted line breaks make it differ from row + 2). */
+    /**
+     * The source-row value of row {@code row}: for CSV the 1-based line where it starts (quoted line breaks
+     * make it differ from row + 2); for Parquet its file and row index, read through {@link #rowSource()}.
+     */
     public long lineOf(int row) {
         return lines.get(row);
+    }
+
+    /** What {@link #lineOf(int)}'s values mean and how to print them. */
+    public RowSource rowSource() {
+        return rowSource;
     }
 
     /** What the load found. */
@@ -90,7 +104,12 @@ public final class Table {
 
     /** The same columns with another load report (the loader adds warnings once the read is over). */
     Table withReport(LoadReport r) {
-        return new Table(columns, lines, r);
+        return new Table(columns, lines, r, rowSource);
+    }
+
+    /** The same rows with other columns (a column's type decided after loading). */
+    Table withColumns(List<Column> other) {
+        return new Table(other, lines, report, rowSource);
     }
 
     /** Every row. */

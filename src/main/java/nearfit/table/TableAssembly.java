@@ -13,6 +13,12 @@ final class TableAssembly {
     }
 
     static Table assemble(String source, Layout layout, List<ChunkResult> parts, long bytes, long nanos) {
+        return assemble(source, layout, parts, bytes, nanos, RowSource.CSV_LINES);
+    }
+
+    /** As above, with the meaning of the parts' source-row values (Parquet files and row indexes). */
+    static Table assemble(String source, Layout layout, List<ChunkResult> parts, long bytes, long nanos,
+                          RowSource rowSource) {
         for (ChunkResult p : parts) {
             if (p.failure != null) {
                 ChunkResult.Failure f = p.failure;
@@ -52,7 +58,7 @@ final class TableAssembly {
         }
         LoadReport report = new LoadReport(source, rows, bytes, layout.delimiter(), layout.header(),
                 layout.decimalComma(), shortRows, longRows, ragged, badCells, bad, nanos, layout.notes());
-        return new Table(columns, first.lines, report);
+        return new Table(columns, first.lines, report, rowSource);
     }
 
     private static void addExamples(List<BadCell> into, List<BadCell> from) {

@@ -1,5 +1,7 @@
 /**
- * Tables of equipment logs: loading CSV (plain, gzip, standard input, pipes) into chunked primitive columns,
+ * Tables of equipment logs: loading CSV (plain, gzip, standard input, pipes) and Parquet (a file or a data-set
+ * folder, through {@link nearfit.table.ParquetLoader}, which {@code CsvLoader} calls on the magic bytes {@code PAR1})
+ * into chunked primitive columns,
  * the load report with its bad cells and line numbers, row conditions, and column summaries. Depends on no
  * other nearfit package; every other package may depend on it. Owns {@link nearfit.table.NearfitException},
  * the tool's one error type, and {@link nearfit.table.VisibleText}, the one rule for showing file-supplied
@@ -9,6 +11,9 @@
  * <pre>
  * bytes ─▶ Sniffer (delimiter, decimal comma, header) ─▶ ChunkParser per stretch of lines, on every core
  *   (PlainRowReader fast path, RowTokenizer for quoted or unusual rows) ─▶ TableAssembly ─▶ {@link nearfit.table.Table}
+ * Parquet ─▶ ParquetFile (footer, ParquetSchema) ─▶ per (file, row group): pages (ParquetCodec) ─▶ parquet-column's
+ *   decoders ─▶ ColumnBuilder ─▶ TableAssembly</pre>
+ * <pre>
  * Table + "column op value and ..." ─▶ {@link nearfit.table.RowCondition} ─▶ {@link nearfit.table.RowSet} (sorted row ids)
  * Column ─▶ {@link nearfit.table.ColumnSummary} (linear: RankSelection for the quantiles)
  * </pre>
@@ -31,7 +36,8 @@
  *     {@code int} codes into a label dictionary (-1 missing), text not kept. Chunks of 32 Ki values, below
  *     G1's humongous threshold.</li>
  * <li><b>Every row keeps its source line</b> (a {@code long}, 1-based, counting the header), so every
- *     message and every flagged row can name it.</li>
+ *     message and every flagged row can name it; a Parquet row keeps its file and 0-based row index instead,
+ *     read through {@link nearfit.table.RowSource}.</li>
  * <li><b>A cell that does not parse</b> is missing and counted with its line and column; nothing is
  *     guessed or shifted.</li>
  * <li><b>Determinism.</b> The parallel parse gives the same table for any thread count; summaries are the

@@ -63,6 +63,15 @@ class BadInputCorpusTest {
                         + "(\"air_temp_c\" again) as air_temp_c_3"),
                 new Case("gzip-magic-only.gz", 2, "nearfit: FILE: truncated gzip stream: the file ends inside the gzip "
                         + "header (it holds the gzip magic bytes, but no compressed data)"),
+                // Parquet, written by DuckDB (scripts/reference/make-parquet-fixtures): recognised by the magic bytes.
+                new Case("parquet-good.parquet", 0, "parquet-good.parquet: 60 rows kept, 0 dropped, 5 columns, Parquet"),
+                new Case("parquet-lz4.parquet", 0, "parquet-lz4.parquet: 60 rows kept, 0 dropped, 5 columns, Parquet"),
+                new Case("parquet-truncated.parquet", 2, "nearfit: FILE: truncated or damaged: the Parquet file does not "
+                        + "end with PAR1"),
+                new Case("parquet-magic-only.parquet", 2, "nearfit: FILE: truncated or damaged: a footer of 0 bytes in a "
+                        + "file of 16"),
+                new Case("parquet-brotli.parquet", 2, "nearfit: FILE: pages compressed with BROTLI are not supported "
+                        + "(SNAPPY, GZIP, ZSTD, LZ4_RAW or none are)"),
                 new Case("relev\u00e9-donn\u00e9es.csv", 0, "relev\u00e9-donn\u00e9es.csv: 30 rows kept, 0 dropped, 5 columns, "
                         + "delimiter comma, header row"));
     }

@@ -90,8 +90,9 @@ class BadInputTest {
 
     @Test
     void aDirectoryIsNotAFile() {
+        // A folder is read as a Parquet data set; one holding no Parquet file is refused, pointing at the CSV case.
         NearfitException ex = assertThrows(NearfitException.class, () -> CsvLoader.load(dir, "logs", LoadOptions.DEFAULT));
-        assertEquals("logs: is a directory, not a CSV file", ex.getMessage());
+        assertEquals("logs: is a folder with no Parquet file (a CSV file must be named itself)", ex.getMessage());
     }
 
     @Test

@@ -26,9 +26,14 @@ public final class SqlCsvBench {
 
     public static void main(String[] args) throws SQLException {
         String url = args[1];
-        String source = "read_csv('" + args[2].replace("'", "''") + "')";
+        String file = args[2].replace("'", "''");
+        // A .parquet file goes through the engine's Parquet reader, anything else through its CSV reader.
+        String source = file.endsWith(".parquet") ? "read_parquet('" + file + "')" : "read_csv('" + file + "')";
         try (Connection c = DriverManager.getConnection(url); Statement s = c.createStatement()) {
-            if (args[0].equals("load")) {
+            if (args[0].equals("to-parquet")) {
+                // bench-load's Parquet file: the CSV's rows, written by the engine (snappy, its default row groups).
+                s.execute("COPY (SELECT * FROM " + source + ") TO '" + args[3].replace("'", "''") + "' (FORMAT parquet)");
+            } else if (args[0].equals("load")) {
                 s.execute("SET threads = " + Integer.parseInt(args[5]));
                 load(s, source, Integer.parseInt(args[3]), Integer.parseInt(args[4]));
             } else {
