@@ -57,13 +57,11 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
                  double residualScale, String toolVersion, Instant ranAt, List<String> inputs, String response,
                  String group, String timeColumn, RowSource rowSource) {
         /** Rows of a CSV file, traced by line. */
-        About(String modelFile, String modelSha256, String dataFile, String rowCondition, int k, String metric,
-              String weights, String scaling, String band, String scheme, String zScale, double residualMedian,
-              double residualScale, String toolVersion, Instant ranAt, List<String> inputs, String response,
-              String group, String timeColumn) {
-            this(modelFile, modelSha256, dataFile, rowCondition, k, metric, weights, scaling, band, scheme, zScale,
-                    residualMedian, residualScale, toolVersion, ranAt, inputs, response, group, timeColumn,
-                    RowSource.CSV_LINES);
+        About(String modelFile, String modelSha256, String dataFile, String rowCondition, KnnSettings settings,
+              String scheme, double residualMedian, double residualScale, String toolVersion, Instant ranAt,
+              List<String> inputs, String response, String group, String timeColumn) {
+            this(modelFile, modelSha256, dataFile, rowCondition, settings, scheme, residualMedian, residualScale,
+                    toolVersion, ranAt, inputs, response, group, timeColumn, RowSource.CSV_LINES);
         }
     }
 
