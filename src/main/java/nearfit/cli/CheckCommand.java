@@ -11,7 +11,6 @@ import java.util.concurrent.Callable;
 import nearfit.knn.ReferenceReach;
 import nearfit.model.ModelColumns;
 import nearfit.model.ModelFile;
-import nearfit.model.ModelSettings;
 import nearfit.model.ReferenceModel;
 import nearfit.model.RestoredModel;
 import nearfit.model.TuningSummary;
@@ -146,11 +145,10 @@ final class CheckCommand implements Callable<Integer> {
     /** What the check runs on, for the report's header. */
     private CheckReport.About about(ReferenceModel stored, RestoredModel restored, String modelSha, ScoredRows scored,
                                     double cut) {
-        ModelSettings s = restored.settings();
         String where = model.where == null || model.where.isBlank() ? null : model.where.trim();
         ModelColumns c = stored.columns();
-        return new CheckReport.About(modelFile.toString(), modelSha, file, where, s.k(), s.metric(), s.weights(),
-                s.scaling(), s.band(), scheme(stored.tuning()), s.zScale(), stored.residualScale().median(),
+        return new CheckReport.About(modelFile.toString(), modelSha, file, where, restored.settings(),
+                scheme(stored.tuning()), stored.residualScale().median(),
                 stored.residualScale().scale(), ToolVersion.get(), Instant.now().truncatedTo(ChronoUnit.SECONDS),
                 c.inputs(), c.response(), scored.group() == null ? null : scored.group().name(),
                 scored.time() == null ? null : scored.time().name());

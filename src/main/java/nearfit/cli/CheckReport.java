@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
+import nearfit.knn.KnnSettings;
 import nearfit.knn.ReferenceReach;
 import nearfit.model.JsonText;
 import nearfit.table.VisibleText;
@@ -37,13 +38,9 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
      * @param modelSha256    its SHA-256, lower-case hex
      * @param dataFile       the data file as named ({@code -} for standard input)
      * @param rowCondition   the row condition, or {@code null}
-     * @param k              k in effect
-     * @param metric         metric, weights, scaling and band in effect
-     * @param weights        see metric
-     * @param scaling        see metric
-     * @param band           see metric
+     * @param settings       k, metric, weights, scaling, band and z scale in effect (the report spells them
+     *                       with their command-line words)
      * @param scheme         how k was chosen, e.g. {@code leave-one-out (one-SE k)} or {@code given (not tuned)}
-     * @param zScale         local or reference
      * @param residualMedian the reference's median leave-one-out residual (response units)
      * @param residualScale  1.4826 times their MAD (response units)
      * @param toolVersion    the version of nearfit that ran the check
@@ -53,8 +50,8 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
      * @param group          the group column, or {@code null}
      * @param timeColumn     the data file's time column shown beside each row, or {@code null}
      */
-    record About(String modelFile, String modelSha256, String dataFile, String rowCondition, int k, String metric,
-                 String weights, String scaling, String band, String scheme, String zScale, double residualMedian,
+    record About(String modelFile, String modelSha256, String dataFile, String rowCondition, KnnSettings settings,
+                 String scheme, double residualMedian,
                  double residualScale, String toolVersion, Instant ranAt, List<String> inputs, String response,
                  String group, String timeColumn) {
     }
@@ -349,14 +346,15 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
         a.put("response", about.response());
         a.put("group", about.group());
         a.put("time_column", about.timeColumn());
-        a.put("k", (long) about.k());
+        KnnSettings s = about.settings();
+        a.put("k", (long) s.k());
         a.put("k_chosen_by", about.scheme());
-        a.put("metric", about.metric());
-        a.put("weights", about.weights());
-        a.put("scaling", about.scaling());
-        a.put("band", about.band());
+        a.put("metric", s.metric().word());
+        a.put("weights", s.weighting().word());
+        a.put("scaling", s.scaling().word());
+        a.put("band", s.band().word());
         a.put("threshold", threshold);
-        a.put("z_scale", about.zScale());
+        a.put("z_scale", s.flagScale().word());
         a.put("residual_median", about.residualMedian());
         a.put("residual_scale", about.residualScale());
         a.put("tool_version", about.toolVersion());
@@ -417,10 +415,11 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
         out.printf(Locale.ROOT, "model: %s (sha256 %s)%n", VisibleText.of(about.modelFile()), about.modelSha256());
         out.printf(Locale.ROOT, "data: %s%s%n", VisibleText.of(about.dataFile()), about.rowCondition() == null ? ""
                 : ", where " + VisibleText.of(about.rowCondition()));
-        out.printf(Locale.ROOT, "settings: k %d (%s), metric %s, weights %s, scaling %s, band %s%n", about.k(),
-                about.scheme(), about.metric(), about.weights(), about.scaling(), about.band());
+        KnnSettings s = about.settings();
+        out.printf(Locale.ROOT, "settings: k %d (%s), metric %s, weights %s, scaling %s, band %s%n", s.k(),
+                about.scheme(), s.metric().word(), s.weighting().word(), s.scaling().word(), s.band().word());
         out.printf(Locale.ROOT, "flags: |z| > %s, z scale %s (reference residuals: median %s, 1.4826 MAD %s)%n",
-                TuneReport.significant(threshold), about.zScale(), TuneReport.significant(about.residualMedian()),
+                TuneReport.significant(threshold), s.flagScale().word(), TuneReport.significant(about.residualMedian()),
                 TuneReport.significant(about.residualScale()));
         out.printf(Locale.ROOT, "run: nearfit %s at %s%n", about.toolVersion(), about.ranAt());
     }

@@ -63,8 +63,7 @@ final class FitCommand implements Callable<Integer> {
         ReferenceInput input = ReferenceInput.load(file, columns, model, err);
         Source source = new Source(input, model.where);
         input = null; // the table goes: at 10M rows it holds more than the fit still needs
-        TuningOptions.Fitted fitted = tuning.fit(source.data, model.settings(1, z), chosenK, model.threads(), err,
-                model.quiet);
+        TuningOptions.Fitted fitted = tuning.fit(source.data, model.settings(1, z), chosenK, err, model.quiet);
         KnnModel engine = fitted.engine();
         TuningOptions.Result tuned = fitted.tuned();
         FlagResult loo = null;

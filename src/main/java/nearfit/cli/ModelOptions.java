@@ -2,49 +2,55 @@ package nearfit.cli;
 
 import java.io.PrintWriter;
 
-import nearfit.model.ModelSettings;
+import nearfit.knn.Band;
+import nearfit.knn.EstimateKind;
+import nearfit.knn.FlagScale;
+import nearfit.knn.KnnSettings;
+import nearfit.knn.Metric;
+import nearfit.knn.Scaling;
+import nearfit.knn.Weighting;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
 /**
  * The options shared by the commands that fit or score a reference (a picocli mixin). The choices are
- * typed options ({@link OptionChoices}), null when not given (predict and check then keep the model's);
- * the accessors give their words as {@link ModelSettings} spells them.
+ * typed options converting to the knn enums ({@link OptionChoices}), null when not given (predict and
+ * check then keep the model's); {@link #settings} fills in the defaults the help states.
  */
 final class ModelOptions {
     @Option(names = "--metric", converter = OptionChoices.MetricWords.class,
             completionCandidates = OptionChoices.MetricWords.class, paramLabel = "METRIC",
-            description = "Distance between rows: euclidean, manhattan, chebyshev, mahalanobis (default: euclidean; predict and check: the model's).")
-    OptionChoices.MetricChoice metric;
+            description = "Distance between rows: ${COMPLETION-CANDIDATES} (default: euclidean; predict and check: the model's).")
+    Metric metric;
 
     @Option(names = "--weights", converter = OptionChoices.WeightsWords.class,
             completionCandidates = OptionChoices.WeightsWords.class, paramLabel = "WEIGHTS",
-            description = "Neighbour weights: uniform, inverse, tricube (default: uniform; predict and check: the model's).")
-    OptionChoices.WeightsChoice weights;
+            description = "Neighbour weights: ${COMPLETION-CANDIDATES} (default: uniform; predict and check: the model's).")
+    Weighting weights;
 
     @Option(names = "--scale", converter = OptionChoices.ScaleWords.class,
             completionCandidates = OptionChoices.ScaleWords.class, paramLabel = "SCALING",
-            description = "Input scaling: z, robust, range, none (default: z; predict and check: the model's).")
-    OptionChoices.ScaleChoice scale;
+            description = "Input scaling: ${COMPLETION-CANDIDATES} (default: z; predict and check: the model's).")
+    Scaling scale;
 
     @Option(names = "--band", converter = OptionChoices.BandWords.class,
             completionCandidates = OptionChoices.BandWords.class, paramLabel = "BAND",
-            description = "Band around the fit: q10-q90, q05-q95, sd2, none (default: q05-q95; predict and check: the model's).")
-    OptionChoices.BandChoice band;
+            description = "Band around the fit: ${COMPLETION-CANDIDATES} (default: q05-q95; predict and check: the model's).")
+    Band band;
 
     @Option(names = "--estimate", converter = OptionChoices.EstimateWords.class,
             completionCandidates = OptionChoices.EstimateWords.class, paramLabel = "mean|median",
             description = "The fit: the neighbours' weighted mean, or their weighted median (the band's quantile rule "
                     + "at 0.5), which rows far off the rest (curtailment, icing) move less; tune and the flags use it "
                     + "too (default: mean; predict and check: the model's).")
-    OptionChoices.EstimateChoice estimate;
+    EstimateKind estimate;
 
     @Option(names = "--z-scale", converter = OptionChoices.ZScaleWords.class,
             completionCandidates = OptionChoices.ZScaleWords.class, paramLabel = "local|reference",
             description = "What divides a residual to make z: local (the k neighbours' SD at the row) or reference "
                     + "(1.4826 MAD of the reference's leave-one-out residuals) (default: local; predict and check: the model's).")
-    OptionChoices.ZScaleChoice zScale;
+    FlagScale zScale;
 
     @Option(names = "--where", paramLabel = "CONDITION",
             description = "Row condition: COLUMN OP VALUE joined by 'and', e.g. \"turbine != T03 and wind_ms > 3\".")
@@ -79,36 +85,12 @@ final class ModelOptions {
         return command.commandLine().getErr();
     }
 
-    String metric() {
-        return metric == null ? "euclidean" : OptionChoices.word(metric);
-    }
-
-    String weights() {
-        return weights == null ? "uniform" : OptionChoices.word(weights);
-    }
-
-    String scale() {
-        return scale == null ? "z" : OptionChoices.word(scale);
-    }
-
-    String zScale() {
-        return zScale == null ? "local" : OptionChoices.word(zScale);
-    }
-
-    String estimate() {
-        return estimate == null ? "mean" : OptionChoices.word(estimate);
-    }
-
-    String band() {
-        return band == null ? "q05-q95" : OptionChoices.word(band);
-    }
-
-    /** A model's settings with the options given on this command line in place of its own. */
-    ModelSettings over(ModelSettings stored) {
-        return new ModelSettings(metric == null ? stored.metric() : metric(),
-                weights == null ? stored.weights() : weights(), scale == null ? stored.scaling() : scale(),
-                stored.k(), band == null ? stored.band() : band(), stored.flagThreshold(),
-                zScale == null ? stored.zScale() : zScale(), estimate == null ? stored.estimate() : estimate());
+    /** A model's settings with the options given on this command line in place of its own, on {@link #threads}. */
+    KnnSettings over(KnnSettings stored) {
+        return new KnnSettings(stored.k(), metric == null ? stored.metric() : metric,
+                weights == null ? stored.weighting() : weights, scale == null ? stored.scaling() : scale,
+                band == null ? stored.band() : band, estimate == null ? stored.estimate() : estimate,
+                stored.flagThreshold(), zScale == null ? stored.flagScale() : zScale, threads());
     }
 
     /** The thread count: the option's value, or every available core. */
@@ -124,8 +106,14 @@ final class ModelOptions {
         threads();
     }
 
-    /** The settings for a given k and flag threshold. */
-    ModelSettings settings(int k, double flagThreshold) {
-        return new ModelSettings(metric(), weights(), scale(), k, band(), flagThreshold, zScale(), estimate());
+    /**
+     * The settings for a given k and flag threshold on {@link #threads}; an option not given takes the
+     * default its help states: euclidean, uniform, z, q05-q95, mean, local.
+     */
+    KnnSettings settings(int k, double flagThreshold) {
+        return new KnnSettings(k, metric == null ? Metric.EUCLIDEAN : metric,
+                weights == null ? Weighting.UNIFORM : weights, scale == null ? Scaling.Z : scale,
+                band == null ? Band.Q05_Q95 : band, estimate == null ? EstimateKind.MEAN : estimate, flagThreshold,
+                zScale == null ? FlagScale.LOCAL_SD : zScale, threads());
     }
 }

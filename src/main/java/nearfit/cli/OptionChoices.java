@@ -4,14 +4,23 @@ import java.util.ArrayList;
 import java.util.Iterator;
 import java.util.List;
 import java.util.Locale;
+import java.util.function.Function;
 
+import nearfit.knn.Band;
+import nearfit.knn.ChoiceWord;
+import nearfit.knn.EstimateKind;
+import nearfit.knn.FlagScale;
+import nearfit.knn.Metric;
+import nearfit.knn.Scaling;
+import nearfit.knn.Weighting;
 import picocli.CommandLine;
 
 /**
- * The choice options of every command as picocli typed options: an enum per choice and a converter
- * per enum, which is also the option's completion candidates. A constant's word is its name in lower
- * case with {@code _} as {@code -} ({@code Q05_Q95} is {@code q05-q95}): the words of the help, the
- * README and the model file (ChoiceOptionsTest proves they equal {@code ModelSettings}' lists).
+ * The choice options of every command as picocli typed options: a converter per choice, which is also
+ * the option's completion candidates. The settings options convert straight to the knn package's
+ * enums, whose words ({@link ChoiceWord#word}) are the words of the help, the README, the model file and
+ * the explorer; the output formats are this package's own enums, a constant's word its name in lower
+ * case.
  *
  * <p>Words are matched without case and surrounding spaces; a word not allowed is a usage error in
  * one line naming the option and the words allowed, e.g.
@@ -20,24 +29,6 @@ import picocli.CommandLine;
 final class OptionChoices {
     private OptionChoices() {
     }
-
-    /** {@code --metric}. */
-    enum MetricChoice { EUCLIDEAN, MANHATTAN, CHEBYSHEV, MAHALANOBIS }
-
-    /** {@code --weights}. */
-    enum WeightsChoice { UNIFORM, INVERSE, TRICUBE }
-
-    /** {@code --scale}. */
-    enum ScaleChoice { Z, ROBUST, RANGE, NONE }
-
-    /** {@code --band}. */
-    enum BandChoice { Q10_Q90, Q05_Q95, SD2, NONE }
-
-    /** {@code --estimate}. */
-    enum EstimateChoice { MEAN, MEDIAN }
-
-    /** {@code --z-scale}. */
-    enum ZScaleChoice { LOCAL, REFERENCE }
 
     /** {@code describe --format}. */
     enum DescribeFormat { TABLE, JSON }
@@ -48,29 +39,26 @@ final class OptionChoices {
     /** {@code check --format}. */
     enum CheckFormat { TEXT, JSON }
 
-    /** The command-line word of a choice. */
-    static String word(Enum<?> choice) {
-        return choice.name().toLowerCase(Locale.ROOT).replace('_', '-');
+    /** The word of an output format: its name in lower case. */
+    static String word(Enum<?> format) {
+        return format.name().toLowerCase(Locale.ROOT);
     }
 
-    /** The word of a choice, or null for an option not given. */
-    static String wordOrNull(Enum<?> choice) {
-        return choice == null ? null : word(choice);
-    }
+    /** Converts a word to one of the choices; iterates their words, for completion and help. */
+    abstract static class Words<E> implements CommandLine.ITypeConverter<E>, Iterable<String> {
+        private final E[] choices;
+        private final Function<E, String> word;
 
-    /** Converts a word to its constant of {@code E}; iterates the words, for completion and help. */
-    abstract static class Words<E extends Enum<E>> implements CommandLine.ITypeConverter<E>, Iterable<String> {
-        private final Class<E> type;
-
-        Words(Class<E> type) {
-            this.type = type;
+        Words(E[] choices, Function<E, String> word) {
+            this.choices = choices;
+            this.word = word;
         }
 
         @Override
         public E convert(String text) {
             String given = text.trim().toLowerCase(Locale.ROOT);
-            for (E choice : type.getEnumConstants()) {
-                if (word(choice).equals(given)) {
+            for (E choice : choices) {
+                if (word.apply(choice).equals(given)) {
                     return choice;
                 }
             }
@@ -80,73 +68,73 @@ final class OptionChoices {
         @Override
         public Iterator<String> iterator() {
             List<String> words = new ArrayList<>();
-            for (E choice : type.getEnumConstants()) {
-                words.add(word(choice));
+            for (E choice : choices) {
+                words.add(word.apply(choice));
             }
             return words.iterator();
         }
     }
 
-    /** Converter and candidates of {@link MetricChoice}. */
-    static final class MetricWords extends Words<MetricChoice> {
+    /** Converter and candidates of {@link Metric}. */
+    static final class MetricWords extends Words<Metric> {
         public MetricWords() {
-            super(MetricChoice.class);
+            super(Metric.values(), ChoiceWord::word);
         }
     }
 
-    /** Converter and candidates of {@link WeightsChoice}. */
-    static final class WeightsWords extends Words<WeightsChoice> {
+    /** Converter and candidates of {@link Weighting}. */
+    static final class WeightsWords extends Words<Weighting> {
         public WeightsWords() {
-            super(WeightsChoice.class);
+            super(Weighting.values(), ChoiceWord::word);
         }
     }
 
-    /** Converter and candidates of {@link ScaleChoice}. */
-    static final class ScaleWords extends Words<ScaleChoice> {
+    /** Converter and candidates of {@link Scaling}. */
+    static final class ScaleWords extends Words<Scaling> {
         public ScaleWords() {
-            super(ScaleChoice.class);
+            super(Scaling.values(), ChoiceWord::word);
         }
     }
 
-    /** Converter and candidates of {@link BandChoice}. */
-    static final class BandWords extends Words<BandChoice> {
+    /** Converter and candidates of {@link Band}. */
+    static final class BandWords extends Words<Band> {
         public BandWords() {
-            super(BandChoice.class);
+            super(Band.values(), ChoiceWord::word);
         }
     }
 
-    /** Converter and candidates of {@link EstimateChoice}. */
-    static final class EstimateWords extends Words<EstimateChoice> {
+    /** Converter and candidates of {@link EstimateKind}. */
+    static final class EstimateWords extends Words<EstimateKind> {
         public EstimateWords() {
-            super(EstimateChoice.class);
+            super(EstimateKind.values(), ChoiceWord::word);
         }
     }
 
-    /** Converter and candidates of {@link ZScaleChoice}. */
-    static final class ZScaleWords extends Words<ZScaleChoice> {
+    /** Converter and candidates of {@link FlagScale} (those a model file can store). */
+    static final class ZScaleWords extends Words<FlagScale> {
         public ZScaleWords() {
-            super(ZScaleChoice.class);
+            super(FlagScale.offered(), ChoiceWord::word);
         }
     }
 
     /** Converter and candidates of {@link DescribeFormat}. */
     static final class DescribeFormatWords extends Words<DescribeFormat> {
         public DescribeFormatWords() {
-            super(DescribeFormat.class);
+            super(DescribeFormat.values(), OptionChoices::word);
         }
     }
 
     /** Converter and candidates of {@link TuneFormat}. */
     static final class TuneFormatWords extends Words<TuneFormat> {
         public TuneFormatWords() {
-            super(TuneFormat.class);
+            super(TuneFormat.values(), OptionChoices::word);
         }
     }
 
     /** Converter and candidates of {@link CheckFormat}. */
     static final class CheckFormatWords extends Words<CheckFormat> {
         public CheckFormatWords() {
-            super(CheckFormat.class);
+            super(CheckFormat.values(), OptionChoices::word);
         }
     }
 

@@ -7,12 +7,14 @@ import java.util.concurrent.Callable;
 
 import javax.imageio.ImageIO;
 
+import nearfit.knn.Band;
 import nearfit.knn.Curve;
+import nearfit.knn.EstimateKind;
 import nearfit.knn.FlagResult;
 import nearfit.knn.Flags;
 import nearfit.knn.KnnModel;
+import nearfit.knn.KnnSettings;
 import nearfit.knn.ReferenceData;
-import nearfit.model.ModelSettings;
 import nearfit.plot.CanvasKind;
 import nearfit.plot.ComposedPlot;
 import nearfit.plot.Palette;
@@ -80,8 +82,8 @@ final class PlotCommand implements Callable<Integer> {
         CommandOutput.check(png, model.force, inputs);
         PrintWriter err = model.err();
         ReferenceInput input = ReferenceInput.load(file, columns, model, err);
-        Scene scene = scene(input, tuning.fit(input.data(), model.settings(1, ModelSettings.DEFAULT_FLAG_THRESHOLD),
-                chosenK, model.threads(), err, model.quiet).engine());
+        Scene scene = scene(input, tuning.fit(input.data(),
+                model.settings(1, KnnSettings.DEFAULT_FLAG_THRESHOLD), chosenK, err, model.quiet).engine());
         if (png != null) {
             byte[] picture = pngBytes(scene, dims);
             CommandOutput.bytes(png, model.force, inputs, model.out(), out -> out.write(picture));
@@ -118,7 +120,7 @@ final class PlotCommand implements Callable<Integer> {
         ReferenceData data = engine.data();
         double[] x = data.input(0);
         Scene.Builder b = Scene.builder(x, data.isCategory() ? classesAsNumbers(data) : data.response());
-        String title = "k = " + engine.settings().k() + ("median".equals(model.estimate()) ? ", median" : "")
+        String title = "k = " + engine.settings().k() + (engine.settings().estimate() == EstimateKind.MEDIAN ? ", median" : "")
                 + ", " + data.size() + " rows"
                 + (model.where == null ? "" : ", " + model.where.trim());
         // Names come from the file: control characters are made visible before they reach a terminal.
@@ -131,7 +133,7 @@ final class PlotCommand implements Callable<Integer> {
         }
         Curve curve = engine.curve(0, heldAtMedians(data), grid(x), nearfit.knn.Progress.NONE);
         b.curve(curve.x(), curve.estimates().fit());
-        if (!"none".equals(model.band())) {
+        if (engine.settings().band() != Band.NONE) {
             b.band(curve.x(), curve.estimates().bandLow(), curve.estimates().bandHigh(), Scene.BandStyle.SHADED);
         }
         if (data.size() > engine.settings().k() + 1) {

@@ -5,6 +5,7 @@ import java.util.List;
 
 import nearfit.knn.ClassVotes;
 import nearfit.knn.Estimates;
+import nearfit.knn.FlagScale;
 import nearfit.knn.KnnModel;
 import nearfit.knn.Progress;
 import nearfit.knn.ScoredBlock;
@@ -107,7 +108,7 @@ final class ScoredRows {
         this.engine = model.engine();
         this.category = columns.categoryResponse();
         ReferenceModel.ResidualScale scale = model.stored().residualScale();
-        this.zBasis = "local".equals(model.settings().zScale()) ? new ZBasis.LocalSpread()
+        this.zBasis = model.settings().flagScale() == FlagScale.LOCAL_SD ? new ZBasis.LocalSpread()
                 : new ZBasis.ReferenceResiduals(scale.median(), scale.scale());
         this.threshold = threshold;
         this.table = source.table();

@@ -4,7 +4,7 @@ import java.io.PrintWriter;
 import java.util.concurrent.Callable;
 
 import nearfit.knn.KnnModel;
-import nearfit.model.EngineSettings;
+import nearfit.knn.KnnSettings;
 import nearfit.model.ReferenceCapture;
 import nearfit.model.TuningSummary;
 import picocli.CommandLine.Command;
@@ -39,8 +39,7 @@ final class TuneCommand implements Callable<Integer> {
         tuning.validate();
         PrintWriter err = model.err();
         ReferenceInput input = ReferenceInput.load(file, columns, model, err);
-        KnnModel engine = KnnModel.fit(input.data(), EngineSettings.of(model.settings(1,
-                nearfit.model.ModelSettings.DEFAULT_FLAG_THRESHOLD), model.threads()));
+        KnnModel engine = KnnModel.fit(input.data(), model.settings(1, KnnSettings.DEFAULT_FLAG_THRESHOLD));
         TuningOptions.Result r = tuning.run(engine, TerminalProgress.of(err, "tuning", model.quiet));
         TuningSummary summary = ReferenceCapture.summary(r.table(), r.sampled());
         TuneReport.write(summary, format, model.out());

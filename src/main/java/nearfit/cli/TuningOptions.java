@@ -1,6 +1,7 @@
 package nearfit.cli;
 
 import nearfit.knn.KnnModel;
+import nearfit.knn.KnnSettings;
 import nearfit.knn.Tuning;
 import nearfit.knn.TuningTable;
 import nearfit.table.NearfitException;
@@ -65,12 +66,12 @@ final class TuningOptions {
 
     /**
      * Fits the engine with the given k, or with {@code k = auto} ({@link OptionNumbers#K_AUTO}) tunes
-     * and refits with the one-SE k; {@code words} carries every other setting.
+     * and refits with the one-SE k; {@code given} carries every other setting and the thread count.
      */
-    Fitted fit(nearfit.knn.ReferenceData data, nearfit.model.ModelSettings words, int chosenK, int threads,
-               java.io.PrintWriter err, boolean quiet) {
+    Fitted fit(nearfit.knn.ReferenceData data, KnnSettings given, int chosenK, java.io.PrintWriter err,
+               boolean quiet) {
         boolean auto = chosenK == OptionNumbers.K_AUTO;
-        nearfit.knn.KnnSettings settings = nearfit.model.EngineSettings.of(words.withK(auto ? 1 : chosenK), threads);
+        KnnSettings settings = given.withK(auto ? 1 : chosenK);
         KnnModel engine = KnnModel.fit(data, settings);
         if (!auto) {
             return new Fitted(engine, null);

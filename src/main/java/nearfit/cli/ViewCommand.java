@@ -44,7 +44,7 @@ final class ViewCommand implements Callable<Integer> {
             completionCandidates = OptionChoices.EstimateWords.class,
             description = "The curve: the neighbours' weighted mean or weighted median "
                     + "(default: mean; the c key switches).")
-    OptionChoices.EstimateChoice estimate;
+    EstimateKind estimate;
 
     @Option(names = "--ascii", description = "Draw with plain ASCII instead of braille and box lines.")
     boolean ascii;
@@ -57,7 +57,7 @@ final class ViewCommand implements Callable<Integer> {
         if (k < 0) {
             throw new NearfitException("option --k: k must be at least 1, not " + k);
         }
-        EstimateKind curve = estimate == null ? EstimateKind.MEAN : EstimateKind.valueOf(estimate.name());
+        EstimateKind curve = estimate == null ? EstimateKind.MEAN : estimate;
         Path target = file;
         List<String> x = inputs;
         String y = response;

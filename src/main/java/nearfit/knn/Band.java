@@ -1,7 +1,7 @@
 package nearfit.knn;
 
 /** The band drawn around the fit: the neighbours' spread. */
-public enum Band {
+public enum Band implements ChoiceWord {
     /** Weighted 10% and 90% quantiles of the neighbours' responses. */
     Q10_Q90(0.10, 0.90),
     /** Weighted 5% and 95% quantiles. */

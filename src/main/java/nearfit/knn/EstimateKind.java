@@ -7,7 +7,7 @@ package nearfit.knn;
  * the neighbours' spread about their weighted mean under either choice; the SD2 band is centred on
  * the fit.
  */
-public enum EstimateKind {
+public enum EstimateKind implements ChoiceWord {
     /** The weighted mean of the neighbours' responses. */
     MEAN,
     /**

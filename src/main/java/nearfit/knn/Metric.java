@@ -7,7 +7,7 @@ package nearfit.knn;
  * distance for {@link #EUCLIDEAN} and {@link #MAHALANOBIS}, the distance itself otherwise. Ties are
  * decided on keys, so every index and the brute-force scan agree exactly.
  */
-public enum Metric {
+public enum Metric implements ChoiceWord {
     /** Square root of the sum of squared differences. */
     EUCLIDEAN,
     /** Sum of absolute differences. */

@@ -3,7 +3,7 @@ package nearfit.knn;
 /**
  * How the neighbours of a point are weighted. The tie rule's shares multiply these weights.
  */
-public enum Weighting {
+public enum Weighting implements ChoiceWord {
     /** Every counted neighbour weighs the same. */
     UNIFORM,
     /**

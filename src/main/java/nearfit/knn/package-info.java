@@ -32,6 +32,8 @@
  * ScoredBlock s = Scoring.score(tuned, newColumns, newResponse,   // new rows, by the same z and flag rule
  *         new ZBasis.LocalSpread(), 3.5, progress);            // or new ZBasis.ReferenceResiduals(median, scale)
  *
+ * // words of the choices, for options, files and screens: settings.metric().word() ("euclidean"),
+ * // ChoiceWord.find(Band.values(), "q05-q95"), ChoiceWord.words(FlagScale.offered()) (local, reference)
  * // saving: settings(), transform() (center, scale, whitening), data() (inputs, response, row ids);
  * // loading: KnnModel.restore(ReferenceData.numeric(...stored rows...), settings, transform)
  * }</pre>

@@ -3,6 +3,8 @@ package nearfit.model;
 import java.math.BigDecimal;
 import java.util.List;
 
+import nearfit.knn.ChoiceWord;
+
 /**
  * Checks of the values a {@link ManifestDocument} was bound with, each failure an
  * {@link IllegalArgumentException} naming the field's whole path, e.g.
@@ -35,13 +37,15 @@ final class ManifestValues {
         return value;
     }
 
-    /** Text that is one of the words allowed. */
-    static String oneOf(String path, String value, List<String> allowed) {
+    /** The choice whose word the text is; its words are those of {@link ChoiceWord}. */
+    static <E extends ChoiceWord> E choice(String path, String value, E[] allowed) {
         text(path, value);
-        if (!allowed.contains(value)) {
-            throw ManifestDocument.bad(path, "is \"" + value + "\"; it must be one of " + String.join(", ", allowed));
+        E found = ChoiceWord.find(allowed, value);
+        if (found == null) {
+            throw ManifestDocument.bad(path, "is \"" + value + "\"; it must be one of "
+                    + String.join(", ", ChoiceWord.words(allowed)));
         }
-        return value;
+        return found;
     }
 
     /** A finite number. */

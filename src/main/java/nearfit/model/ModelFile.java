@@ -11,14 +11,21 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
+import nearfit.knn.Band;
+import nearfit.knn.EstimateKind;
+import nearfit.knn.FlagScale;
+import nearfit.knn.KnnSettings;
+import nearfit.knn.Metric;
+import nearfit.knn.Scaling;
+import nearfit.knn.Weighting;
 import nearfit.table.NearfitException;
 
+import static nearfit.model.ManifestValues.choice;
 import static nearfit.model.ManifestValues.finiteDoubles;
 import static nearfit.model.ManifestValues.integer;
 import static nearfit.model.ManifestValues.number;
 import static nearfit.model.ManifestValues.numberOrNaN;
 import static nearfit.model.ManifestValues.object;
-import static nearfit.model.ManifestValues.oneOf;
 import static nearfit.model.ManifestValues.spelled;
 import static nearfit.model.ManifestValues.text;
 import static nearfit.model.ManifestValues.texts;
@@ -72,7 +79,7 @@ public final class ModelFile {
      */
     static ManifestDocument manifestOf(ReferenceModel model) {
         ModelColumns c = model.columns();
-        ModelSettings s = model.settings();
+        KnnSettings s = model.settings();
         return new ManifestDocument(model.toolVersion(),
                 model.created().truncatedTo(ChronoUnit.SECONDS).toString(),
                 new ManifestDocument.SourceFields(model.source().name(),
@@ -80,11 +87,12 @@ public final class ModelFile {
                         model.source().sha256()),
                 model.source().rowCondition(), BigDecimal.valueOf(model.rows().size()),
                 new ManifestDocument.ColumnFields(c.inputs(), c.response(), c.responseLabels(), c.group(), c.groupLabels()),
-                new ManifestDocument.ScalingFields(s.scaling(), ManifestDocument.listOf(model.scaleCenter()),
+                new ManifestDocument.ScalingFields(s.scaling().word(), ManifestDocument.listOf(model.scaleCenter()),
                         ManifestDocument.listOf(model.scaleSpread()), ManifestDocument.listOf(model.whitening())),
-                s.metric(), s.weights(), BigDecimal.valueOf(s.k()), s.band(), s.estimate(),
+                s.metric().word(), s.weighting().word(), BigDecimal.valueOf(s.k()), s.band().word(),
+                s.estimate().word(),
                 new ManifestDocument.FlagFields(s.flagThreshold(), model.residualScale().median(),
-                        model.residualScale().scale(), s.zScale()),
+                        model.residualScale().scale(), s.flagScale().word()),
                 model.tuning() == null ? null : (ManifestDocument.TuningFields) model.tuning().toJson());
     }
 
@@ -153,7 +161,7 @@ public final class ModelFile {
 
     /** What the manifest says of a model besides its rows, every value checked. */
     private record Described(String toolVersion, Instant created, SourceInfo source, ModelColumns columns,
-                             ModelSettings settings, double[] center, double[] spread, double[] whitening,
+                             KnnSettings settings, double[] center, double[] spread, double[] whitening,
                              ReferenceModel.ResidualScale residual, TuningSummary tuning) {
         ReferenceModel with(ReferenceRows rows) {
             return new ReferenceModel(toolVersion, created, source, columns, settings, center, spread, whitening,
@@ -174,7 +182,7 @@ public final class ModelFile {
         SourceInfo source = new SourceInfo(sourceName,
                 src.size() == null ? -1 : whole("source.size", src.size(), 0, MAX_EXACT_WHOLE), sha,
                 m.rowCondition());
-        ModelSettings settings = settingsOf(m, rows);
+        KnnSettings settings = settingsOf(m, rows);
         ManifestDocument.ScalingFields scaling = m.scaling();
         int d = columns.inputs().size();
         double[] center = finiteDoubles("scaling.center", scaling.center(), d);
@@ -194,15 +202,18 @@ public final class ModelFile {
                 spread, whitening, residual, tuning);
     }
 
-    /** The settings; k must be at least 1 and at most the stored rows. */
-    private static ModelSettings settingsOf(ManifestDocument m, int rows) {
+    /**
+     * The settings; k must be at least 1 and at most the stored rows. A file stores no thread count: the
+     * settings read have 1 (the reader of the model sets its own).
+     */
+    private static KnnSettings settingsOf(ManifestDocument m, int rows) {
         ManifestDocument.ScalingFields scaling = object("scaling", m.scaling());
         ManifestDocument.FlagFields flags = object("flags", m.flags());
-        String metric = oneOf("metric", m.metric(), ModelSettings.METRICS);
-        String weights = oneOf("weights", m.weights(), ModelSettings.WEIGHTS);
-        String method = oneOf("scaling.method", scaling.method(), ModelSettings.SCALINGS);
-        String band = oneOf("band", m.band(), ModelSettings.BANDS);
-        String zScale = oneOf("flags.z_scale", flags.zScale(), ModelSettings.Z_SCALES);
+        Metric metric = choice("metric", m.metric(), Metric.values());
+        Weighting weights = choice("weights", m.weights(), Weighting.values());
+        Scaling method = choice("scaling.method", scaling.method(), Scaling.values());
+        Band band = choice("band", m.band(), Band.values());
+        FlagScale zScale = choice("flags.z_scale", flags.zScale(), FlagScale.offered());
         if (rows == 0) {
             throw new IllegalArgumentException("the model holds no usable reference rows (its manifest says \"rows\": 0)");
         }
@@ -213,19 +224,19 @@ public final class ModelFile {
                     + "; a flag threshold must be positive");
         }
         // Files written before the estimate existed have no field: they were fitted with the mean.
-        String estimate = m.estimate() != null ? oneOf("estimate", m.estimate(), ModelSettings.ESTIMATES)
-                : ModelSettings.ESTIMATES.get(0);
-        return new ModelSettings(metric, weights, method, k, band, threshold, zScale, estimate);
+        EstimateKind estimate = m.estimate() != null ? choice("estimate", m.estimate(), EstimateKind.values())
+                : EstimateKind.MEAN;
+        return new KnnSettings(k, metric, weights, method, band, estimate, threshold, zScale, 1);
     }
 
     /** Spreads positive and of normal size (a subnormal divisor overflows); "none" is centre 0, spread 1. */
-    private static void checkScaling(String method, double[] center, double[] spread) {
+    private static void checkScaling(Scaling method, double[] center, double[] spread) {
         for (int j = 0; j < spread.length; j++) {
             if (!(spread[j] >= Double.MIN_NORMAL)) {
                 throw ManifestDocument.bad("scaling.spread[" + j + "]", "is " + spelled(spread[j])
                         + "; a spread must be positive" + (spread[j] > 0 ? " and at least " + Double.MIN_NORMAL : ""));
             }
-            if ("none".equals(method) && (center[j] != 0 || spread[j] != 1)) {
+            if (method == Scaling.NONE && (center[j] != 0 || spread[j] != 1)) {
                 throw ManifestDocument.bad(center[j] != 0 ? "scaling.center[" + j + "]" : "scaling.spread[" + j + "]",
                         "must be " + (center[j] != 0 ? "0" : "1") + " when \"scaling.method\" is none");
             }
@@ -236,11 +247,11 @@ public final class ModelFile {
      * The whitening matrix: for the Mahalanobis metric d×d finite values, lower triangular with a
      * positive diagonal (the inverse of a Cholesky factor, as the fit computes it); else null.
      */
-    private static double[] whiteningOf(ManifestDocument.ScalingFields scaling, String metric, int d) {
-        boolean mahalanobis = "mahalanobis".equals(metric);
+    private static double[] whiteningOf(ManifestDocument.ScalingFields scaling, Metric metric, int d) {
+        boolean mahalanobis = metric == Metric.MAHALANOBIS;
         if (!mahalanobis) {
             if (scaling.whitening() != null) {
-                throw ManifestDocument.bad("scaling.whitening", "must be null for the " + metric + " metric");
+                throw ManifestDocument.bad("scaling.whitening", "must be null for the " + metric.word() + " metric");
             }
             return null;
         }

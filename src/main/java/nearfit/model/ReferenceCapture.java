@@ -87,7 +87,7 @@ public final class ReferenceCapture {
         ReferenceModel.ResidualScale residual = loo == null
                 ? new ReferenceModel.ResidualScale(Double.NaN, Double.NaN)
                 : new ReferenceModel.ResidualScale(loo.median(), loo.mad());
-        return new ReferenceModel(toolVersion, Instant.now(), source, columns, EngineSettings.words(engine.settings()),
+        return new ReferenceModel(toolVersion, Instant.now(), source, columns, engine.settings(),
                 t.center(), t.scale(), t.whitening(), residual,
                 tuning == null ? null : summary(tuning, sampled), rows);
     }

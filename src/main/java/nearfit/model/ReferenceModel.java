@@ -1,6 +1,10 @@
 package nearfit.model;
 
 import java.time.Instant;
+import java.util.Arrays;
+
+import nearfit.knn.FlagScale;
+import nearfit.knn.KnnSettings;
 
 /**
  * Everything a model file holds: where the reference came from, its columns and settings, the
@@ -14,7 +18,8 @@ import java.time.Instant;
  * @param created       when the model was fitted (written in ISO 8601, UTC)
  * @param source        the source file and the row condition
  * @param columns       input, response and group columns
- * @param settings      metric, weights, scaling, k, band and flag threshold
+ * @param settings      metric, weights, scaling, k, band, estimate, flag threshold and z scale (one of
+ *                      {@link FlagScale#offered}); the thread count is not stored (a model read back has 1)
  * @param scaleCenter   per input, the value subtracted before scaling (input units)
  * @param scaleSpread   per input, the divisor after centring (input units); 1 for no scaling
  * @param whitening     for the Mahalanobis metric, the d×d row-major lower-triangular matrix applied
@@ -24,7 +29,7 @@ import java.time.Instant;
  * @param rows          the reference rows
  */
 public record ReferenceModel(String toolVersion, Instant created, SourceInfo source, ModelColumns columns,
-                             ModelSettings settings, double[] scaleCenter, double[] scaleSpread,
+                             KnnSettings settings, double[] scaleCenter, double[] scaleSpread,
                              double[] whitening,
                              ResidualScale residualScale, TuningSummary tuning, ReferenceRows rows) {
     /** Checks that the parts agree with each other. */
@@ -42,6 +47,9 @@ public record ReferenceModel(String toolVersion, Instant created, SourceInfo sou
         }
         if ((columns.group() == null) != (rows.groupCodes() == null)) {
             throw new IllegalArgumentException("a group column needs group codes, and only then");
+        }
+        if (!Arrays.asList(FlagScale.offered()).contains(settings.flagScale())) {
+            throw new IllegalArgumentException("a model file cannot store the z scale " + settings.flagScale().word());
         }
         if (settings.k() > rows.size()) {
             throw new IllegalArgumentException("k = " + settings.k() + " is more than the "

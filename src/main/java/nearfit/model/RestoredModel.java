@@ -2,8 +2,8 @@ package nearfit.model;
 
 import nearfit.knn.InputTransform;
 import nearfit.knn.KnnModel;
+import nearfit.knn.KnnSettings;
 import nearfit.knn.ReferenceData;
-import nearfit.knn.Scaling;
 
 /**
  * A model file's contents with the engine model rebuilt from its stored rows, scaling and settings,
@@ -18,17 +18,18 @@ public record RestoredModel(ReferenceModel stored, KnnModel engine) {
      * As {@link #of(ReferenceModel, int)}, then with other settings: a change of k, weights, band or
      * z scale keeps the index; a change of metric or scaling refits them on the stored rows.
      */
-    public static RestoredModel of(ReferenceModel stored, ModelSettings settings, int threads) {
+    public static RestoredModel of(ReferenceModel stored, KnnSettings settings, int threads) {
         RestoredModel r = of(stored, threads);
-        if (settings.equals(stored.settings())) {
+        KnnSettings wanted = settings.withThreads(threads);
+        if (wanted.equals(r.engine().settings())) {
             return r;
         }
-        return new RestoredModel(stored, r.engine().withSettings(EngineSettings.of(settings, threads)));
+        return new RestoredModel(stored, r.engine().withSettings(wanted));
     }
 
-    /** The settings in effect, in words. */
-    public ModelSettings settings() {
-        return EngineSettings.words(engine.settings());
+    /** The settings in effect. */
+    public KnnSettings settings() {
+        return engine.settings();
     }
 
     /** Rebuilds the index from the stored rows, with the stored scaling (not refitted). */
@@ -43,10 +44,9 @@ public record RestoredModel(ReferenceModel stored, KnnModel engine) {
                 ? ReferenceData.numeric(names, rows.inputs(), stored.columns().response(), rows.response(), positions)
                 : ReferenceData.category(names, rows.inputs(), stored.columns().response(), rows.responseCodes(),
                         stored.columns().responseLabels().size(), positions);
-        InputTransform transform = new InputTransform(Scaling.valueOf(
-                EngineSettings.upper(stored.settings().scaling())), stored.scaleCenter(),
+        InputTransform transform = new InputTransform(stored.settings().scaling(), stored.scaleCenter(),
                 stored.scaleSpread(), stored.whitening());
-        KnnModel engine = KnnModel.restore(data, EngineSettings.of(stored.settings(), threads), transform);
+        KnnModel engine = KnnModel.restore(data, stored.settings().withThreads(threads), transform);
         return new RestoredModel(stored, engine);
     }
 }

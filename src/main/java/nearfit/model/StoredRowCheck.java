@@ -1,7 +1,7 @@
 package nearfit.model;
 
 import nearfit.knn.InputTransform;
-import nearfit.knn.Scaling;
+import nearfit.knn.KnnSettings;
 
 /**
  * The checks of a model file's stored rows against its manifest, made before the engine sees them:
@@ -15,7 +15,7 @@ final class StoredRowCheck {
     private StoredRowCheck() {
     }
 
-    static void check(ReferenceRows rows, ModelColumns columns, ModelSettings settings, double[] center,
+    static void check(ReferenceRows rows, ModelColumns columns, KnnSettings settings, double[] center,
                       double[] spread, double[] whitening) {
         int n = rows.size();
         double[][] inputs = rows.inputs();
@@ -60,12 +60,11 @@ final class StoredRowCheck {
     }
 
     /** Applies the stored transform row by row (no n×d copy) and names the parameter that overflows. */
-    private static void checkCoordinates(ReferenceRows rows, ModelColumns columns, ModelSettings settings,
+    private static void checkCoordinates(ReferenceRows rows, ModelColumns columns, KnnSettings settings,
                                          double[] center, double[] spread, double[] whitening) {
         int d = center.length;
         double[][] inputs = rows.inputs();
-        InputTransform scaledOnly = new InputTransform(Scaling.valueOf(EngineSettings.upper(settings.scaling())),
-                center, spread, null);
+        InputTransform scaledOnly = new InputTransform(settings.scaling(), center, spread, null);
         InputTransform full = whitening == null ? null : new InputTransform(scaledOnly.scaling(), center, spread,
                 whitening);
         double[] raw = new double[d];

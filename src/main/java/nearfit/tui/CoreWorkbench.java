@@ -189,7 +189,7 @@ public final class CoreWorkbench implements Workbench {
 
     @Override
     public TuningTable tune(FitKey m, JobControl control) {
-        KnnModel model = references.model(m.withK(1), null, -1).withSettings(KnnChoices.longSettings(m.withK(1)));
+        KnnModel model = references.model(m.withK(1), null, -1);
         int kmax = Math.min(TUNING_KMAX, model.data().size() - 1);
         if (kmax < 1) {
             throw new NearfitException("tuning needs at least two reference rows");
@@ -203,7 +203,7 @@ public final class CoreWorkbench implements Workbench {
 
     @Override
     public FlaggedRows flags(FitKey m, String groupColumn, String shownCondition, JobControl control) {
-        KnnModel model = references.model(m, null, -1).withSettings(KnnChoices.longSettings(m));
+        KnnModel model = references.model(m, null, -1);
         if (model.data().isCategory()) {
             return FlaggedRows.forCategory();
         }

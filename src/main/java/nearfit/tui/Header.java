@@ -92,12 +92,12 @@ final class Header {
                 ? new String[] {"  residuals", "  resid"} : new String[] {"  residuals over time", "  resid/time"});
         // The estimator's settings are never left out, since m, w, s and b change them and the results with
         // them; they use the batch commands' option names and values.
-        String metric = ChoiceNames.of(s.metric());
-        String weights = ChoiceNames.of(s.weighting());
-        String scale = ChoiceNames.of(s.scaling());
-        String band = ChoiceNames.of(s.band());
+        String metric = s.metric().word();
+        String weights = s.weighting().word();
+        String scale = s.scaling().word();
+        String band = s.band().word();
         // The mean is the default and is not named, so the line keeps its room; the median always is (c, --estimate).
-        String estimate = s.estimate() == EstimateKind.MEAN ? "" : " " + ChoiceNames.of(s.estimate());
+        String estimate = s.estimate() == EstimateKind.MEAN ? "" : " " + s.estimate().word();
         int settings = line.part(
                 "  metric " + metric + ", weights " + weights + ", scale " + scale + ", band " + band + estimate,
                 "  " + metric + ", " + weights + ", scale " + scale + ", band " + band + estimate,

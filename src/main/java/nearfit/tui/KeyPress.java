@@ -107,19 +107,19 @@ public final class KeyPress {
             case 'e': return Step.of(b.open(Overlay.EXPORT, Ask.NOTHING).build());
             case 'm': {
                 Metric m = cycle(Metric.values(), s.metric());
-                return Step.of(b.metric(m).message("metric " + ChoiceNames.of(m)).build());
+                return Step.of(b.metric(m).message("metric " + m.word()).build());
             }
             case 'w': {
                 Weighting w = cycle(Weighting.values(), s.weighting());
-                return Step.of(b.weighting(w).message("weights " + ChoiceNames.of(w)).build());
+                return Step.of(b.weighting(w).message("weights " + w.word()).build());
             }
             case 's': {
                 Scaling sc = cycle(Scaling.values(), s.scaling());
-                return Step.of(b.scaling(sc).message("scale " + ChoiceNames.of(sc)).build());
+                return Step.of(b.scaling(sc).message("scale " + sc.word()).build());
             }
             case 'b': {
                 Band band = cycle(Band.values(), s.band());
-                return Step.of(b.band(band).message("band " + ChoiceNames.of(band)).build());
+                return Step.of(b.band(band).message("band " + band.word()).build());
             }
             case 'R': {
                 boolean narrows = !s.conditionNarrowsReference();
@@ -129,7 +129,7 @@ public final class KeyPress {
             }
             case 'c': {
                 EstimateKind e = cycle(EstimateKind.values(), s.estimate());
-                return Step.of(b.estimate(e).message("estimate " + ChoiceNames.of(e)).build());
+                return Step.of(b.estimate(e).message("estimate " + e.word()).build());
             }
             case 'f': return Step.of(b.flagMarks(!s.flagMarks()).build());
             case 'r': return Step.of(b.mode(s.mode() == PlotMode.RESIDUALS ? PlotMode.RESPONSE : PlotMode.RESIDUALS)

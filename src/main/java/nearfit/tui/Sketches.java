@@ -19,8 +19,9 @@ final class Sketches {
         // k, weights and band reach the plot only through the curve and flags (compared by identity), so a
         // frame drawn right after a k change, still with the old curve, reuses the composed plot.
         FitKey m = scene.model();
-        FitKey shape = new FitKey(m.condition(), m.response(), m.inputs(), 1, m.metric(),
-                nearfit.knn.Weighting.UNIFORM, m.scaling(), nearfit.knn.Band.NONE);
+        FitKey shape = new FitKey(m.condition(), m.response(), m.inputs(), m.settings().withK(1)
+                .withWeighting(nearfit.knn.Weighting.UNIFORM).withBand(nearfit.knn.Band.NONE)
+                .withEstimate(nearfit.knn.EstimateKind.MEAN));
         Object key = java.util.Arrays.asList(shape, scene.request(), scene.curve(), scene.flags(), scene.mode(),
                 scene.flagMarks(), scene.crosshairX(), scene.heldQuantile(), scene.nearHeldOnly(), scene.markedRow(),
                 scene.ascii(), width, height);

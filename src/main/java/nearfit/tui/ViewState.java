@@ -5,6 +5,8 @@ import java.util.Map;
 
 import nearfit.knn.Band;
 import nearfit.knn.EstimateKind;
+import nearfit.knn.FlagScale;
+import nearfit.knn.KnnSettings;
 import nearfit.knn.Metric;
 import nearfit.knn.Scaling;
 import nearfit.knn.Weighting;
@@ -82,9 +84,14 @@ public record ViewState(String condition, String response, List<String> inputs, 
     /**
      * The settings a fit depends on. Its condition is the reference's: the row condition when it narrows the
      * reference, otherwise empty (all rows).
+     *
+     * <p>Flags divide each leave-one-out residual by the local spread of its neighbours, as {@code check}
+     * does by default: on logs where most rows sit below cut-in or at rated power the global MAD is
+     * tiny, and the global scale flagged about 10 % of the demo site's rows.
      */
     public FitKey model() {
-        return new FitKey(referenceCondition(), response, inputs, k, metric, weighting, scaling, band, estimate);
+        return new FitKey(referenceCondition(), response, inputs, new KnnSettings(k, metric, weighting, scaling, band,
+                estimate, KnnSettings.DEFAULT_FLAG_THRESHOLD, FlagScale.LOCAL_SD, KnnChoices.THREADS));
     }
 
     /** The condition that chooses the reference rows: the row condition, or empty for all rows. */

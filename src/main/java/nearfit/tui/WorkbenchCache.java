@@ -76,7 +76,8 @@ final class WorkbenchCache {
      * group column, the rows of group {@code group} are left out (the curve of the other groups).
      */
     KnnModel model(FitKey m, String groupColumn, int group) {
-        List<Object> key = Arrays.asList(m.condition(), m.response(), m.inputs(), m.metric(), m.scaling(),
+        List<Object> key = Arrays.asList(m.condition(), m.response(), m.inputs(), m.settings().metric(),
+                m.settings().scaling(),
                 groupColumn, groupColumn == null ? -1 : group);
         CompletableFuture<KnnModel> f;
         boolean mine = false;
@@ -90,7 +91,7 @@ final class WorkbenchCache {
         }
         if (mine) {
             try {
-                f.complete(KnnModel.fit(data(m, groupColumn, group), KnnChoices.settings(m)));
+                f.complete(KnnModel.fit(data(m, groupColumn, group), m.settings()));
             } catch (RuntimeException e) {
                 f.completeExceptionally(e);
                 synchronized (models) {
@@ -99,7 +100,7 @@ final class WorkbenchCache {
             }
         }
         try {
-            return f.get().withSettings(KnnChoices.settings(m));
+            return f.get().withSettings(m.settings());
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
             throw new java.util.concurrent.CancellationException("interrupted");

@@ -10,16 +10,23 @@ import java.time.Instant;
 import java.util.List;
 import java.util.Map;
 
+import nearfit.knn.Band;
 import nearfit.knn.Estimates;
+import nearfit.knn.FlagScale;
+import nearfit.knn.KnnSettings;
+import nearfit.knn.Metric;
+import nearfit.knn.Scaling;
 import nearfit.knn.ScoredBlock;
+import nearfit.knn.Weighting;
 import nearfit.model.JsonTrees;
 import org.junit.jupiter.api.Test;
 
 class CheckReportTest {
     private static final double NaN = Double.NaN;
 
-    static final CheckReport.About ABOUT = new CheckReport.About("spring.nfm", "ab12", "site.csv", null, 30,
-            "euclidean", "uniform", "z", "q05-q95", "given at fit, not tuned", "local", 0.5, 20.0, "dev",
+    static final CheckReport.About ABOUT = new CheckReport.About("spring.nfm", "ab12", "site.csv", null,
+            new KnnSettings(30, Metric.EUCLIDEAN, Weighting.UNIFORM, Scaling.Z, Band.Q05_Q95,
+                    KnnSettings.DEFAULT_FLAG_THRESHOLD, FlagScale.LOCAL_SD, 1), "given at fit, not tuned", 0.5, 20.0, "dev",
             Instant.parse("2026-12-02T12:00:00Z"), List.of("wind_ms"), "power_kw", "turbine", "time");
 
     private static CheckReport sample(double limit) {

@@ -6,7 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.ArrayList;
 import java.util.List;
 
-import nearfit.model.ModelSettings;
+import nearfit.knn.Band;
+import nearfit.knn.Metric;
 import org.junit.jupiter.api.Test;
 import picocli.CommandLine;
 
@@ -16,6 +17,8 @@ import picocli.CommandLine;
  * the option and the words allowed, for every command the same way.
  */
 class ChoiceOptionsTest {
+    private static final List<String> BANDS = List.of("q10-q90", "q05-q95", "sd2", "none");
+
     private static List<String> words(Iterable<String> candidates) {
         List<String> out = new ArrayList<>();
         candidates.forEach(out::add);
@@ -24,12 +27,13 @@ class ChoiceOptionsTest {
 
     @Test
     void theWordsAreTheModelFilesWords() {
-        assertEquals(ModelSettings.METRICS, words(new OptionChoices.MetricWords()));
-        assertEquals(ModelSettings.WEIGHTS, words(new OptionChoices.WeightsWords()));
-        assertEquals(ModelSettings.SCALINGS, words(new OptionChoices.ScaleWords()));
-        assertEquals(ModelSettings.BANDS, words(new OptionChoices.BandWords()));
-        assertEquals(ModelSettings.ESTIMATES, words(new OptionChoices.EstimateWords()));
-        assertEquals(ModelSettings.Z_SCALES, words(new OptionChoices.ZScaleWords()));
+        // The model file's words (its format; ReleasedModelFileTest reads a file of an earlier release).
+        assertEquals(List.of("euclidean", "manhattan", "chebyshev", "mahalanobis"), words(new OptionChoices.MetricWords()));
+        assertEquals(List.of("uniform", "inverse", "tricube"), words(new OptionChoices.WeightsWords()));
+        assertEquals(List.of("z", "robust", "range", "none"), words(new OptionChoices.ScaleWords()));
+        assertEquals(BANDS, words(new OptionChoices.BandWords()));
+        assertEquals(List.of("mean", "median"), words(new OptionChoices.EstimateWords()));
+        assertEquals(List.of("local", "reference"), words(new OptionChoices.ZScaleWords()));
         assertEquals(List.of("table", "json"), words(new OptionChoices.DescribeFormatWords()));
         assertEquals(List.of("table", "csv", "json"), words(new OptionChoices.TuneFormatWords()));
         assertEquals(List.of("text", "json"), words(new OptionChoices.CheckFormatWords()));
@@ -37,8 +41,8 @@ class ChoiceOptionsTest {
 
     @Test
     void wordsAreMatchedWithoutCaseOrSurroundingSpaces() throws Exception {
-        assertEquals(OptionChoices.BandChoice.Q05_Q95, new OptionChoices.BandWords().convert(" Q05-Q95 "));
-        assertEquals(OptionChoices.MetricChoice.MANHATTAN, new OptionChoices.MetricWords().convert("Manhattan"));
+        assertEquals(Band.Q05_Q95, new OptionChoices.BandWords().convert(" Q05-Q95 "));
+        assertEquals(Metric.MANHATTAN, new OptionChoices.MetricWords().convert("Manhattan"));
         assertEquals(0, new OptionChoices.FoldsWords().convert("LOO"));
         assertEquals(5, new OptionChoices.FoldsWords().convert("5"));
     }
@@ -75,7 +79,7 @@ class ChoiceOptionsTest {
     @Test
     void theShellCompletesTheWords() {
         CommandLine cli = Main.commandLine();
-        assertEquals(ModelSettings.BANDS, words(cli.getSubcommands().get("fit").getCommandSpec()
+        assertEquals(BANDS, words(cli.getSubcommands().get("fit").getCommandSpec()
                 .findOption("--band").completionCandidates()));
         assertEquals(List.of("text", "json"), words(cli.getSubcommands().get("check").getCommandSpec()
                 .findOption("--format").completionCandidates()));

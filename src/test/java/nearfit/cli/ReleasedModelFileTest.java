@@ -55,8 +55,8 @@ class ReleasedModelFileTest {
         nearfit.model.ReferenceModel m = nearfit.model.ModelFile.read(model);
 
         assertEquals(4, m.settings().k());
-        assertEquals("mahalanobis", m.settings().metric());
-        assertEquals("inverse", m.settings().weights());
+        assertEquals("mahalanobis", m.settings().metric().word());
+        assertEquals("inverse", m.settings().weighting().word());
         assertEquals(List.of("wind_ms", "air_temp_c"), m.columns().inputs());
         assertEquals(List.of("T01", "T02"), m.columns().groupLabels());
         assertEquals(10, m.tuning().k().length);

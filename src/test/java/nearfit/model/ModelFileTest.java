@@ -19,6 +19,12 @@ import java.util.zip.ZipEntry;
 import java.util.zip.ZipFile;
 import java.util.zip.ZipOutputStream;
 
+import nearfit.knn.Band;
+import nearfit.knn.FlagScale;
+import nearfit.knn.KnnSettings;
+import nearfit.knn.Metric;
+import nearfit.knn.Scaling;
+import nearfit.knn.Weighting;
 import nearfit.table.NearfitException;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -39,7 +45,8 @@ class ModelFileTest {
                 null, null, 2, 2, -1);
         return new ReferenceModel("0.1.0", Instant.parse("2026-03-01T10:15:30Z"),
                 new SourceInfo("site-log.csv.gz", 1234, "ab".repeat(32), "turbine != T03"), columns,
-                new ModelSettings("mahalanobis", "tricube", "robust", 2, "sd2", 3.0, "reference"),
+                new KnnSettings(2, Metric.MAHALANOBIS, Weighting.TRICUBE, Scaling.ROBUST, Band.SD2, 3.0,
+                        FlagScale.GLOBAL_MAD, 1),
                 new double[] {7.0, 10.5}, new double[] {2.0, 1.25}, new double[] {1, 0, 0.5, 2},
                 new ReferenceModel.ResidualScale(-0.5, 42.0), tuning, rows);
     }
@@ -83,7 +90,7 @@ class ModelFileTest {
     void aModelWithoutGroupOrTuningHasNeither() {
         ReferenceModel m = sample(false);
         // Without whitening, so with a metric other than Mahalanobis.
-        ModelSettings euclidean = new ModelSettings("euclidean", "tricube", "robust", 2, "sd2", 3.0, "reference");
+        KnnSettings euclidean = m.settings().withMetric(Metric.EUCLIDEAN);
         ReferenceModel plain = new ReferenceModel(m.toolVersion(), m.created(),
                 new SourceInfo("-", -1, null, null), m.columns(), euclidean, m.scaleCenter(),
                 m.scaleSpread(), null, m.residualScale(), null, m.rows());

@@ -27,7 +27,7 @@ class EstimateKeyTest {
         assertEquals(EstimateKind.MEAN, s.estimate());
         ViewState median = KeyPress.next(s, new KeyStroke('c', false, false), cx).state();
         assertEquals(EstimateKind.MEDIAN, median.estimate());
-        assertEquals(EstimateKind.MEDIAN, KnnChoices.settings(median.model()).estimate());
+        assertEquals(EstimateKind.MEDIAN, median.model().settings().estimate());
         assertEquals(EstimateKind.MEAN, KeyPress.next(median, new KeyStroke('c', false, false), cx).state().estimate());
     }
 

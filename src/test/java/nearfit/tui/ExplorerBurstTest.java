@@ -59,7 +59,7 @@ class ExplorerBurstTest {
             assertEquals(metric, s.metric());
             String header = v.text();
             assertTrue(header.contains("k=" + k + " ") || header.contains("k=" + k + "\n"), header);
-            assertTrue(header.contains(ChoiceNames.of(metric) + ", weights"), header);
+            assertTrue(header.contains(metric.word() + ", weights"), header);
             Results got = v.explorer.results();
             assertEquals("", got.failure(), "no job failed");
             // The shown curve and flags are those of the final settings, recomputed here from scratch.
@@ -71,7 +71,7 @@ class ExplorerBurstTest {
             FlaggedRows flags = again.flags(s.model(), s.groupColumn(), s.condition(), JobControl.NONE);
             assertArrayEquals(flags.result().z(), got.flags().result().z(), "flags of the last settings");
             assertEquals(flags.rows(), got.flags().rows());
-            assertEquals(s.model().k(), k);
+            assertEquals(s.model().settings().k(), k);
         }
     }
 

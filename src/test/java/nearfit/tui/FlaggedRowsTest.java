@@ -11,6 +11,8 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 import nearfit.knn.Band;
+import nearfit.knn.FlagScale;
+import nearfit.knn.KnnSettings;
 import nearfit.knn.Metric;
 import nearfit.knn.Scaling;
 import nearfit.knn.Weighting;
@@ -23,8 +25,8 @@ class FlaggedRowsTest {
         Path csv = dir.resolve("pump.csv");
         Files.writeString(csv, "flow_m3h,head_m\n0,1\n1,2\n3,5\n7,11\n", StandardCharsets.UTF_8);
         Workbench wb = CoreWorkbench.of(CsvLoader.load(csv, csv.toString(), LoadOptions.DEFAULT), "pump.csv");
-        FitKey m = new FitKey("", "head_m", List.of("flow_m3h"), 1, Metric.EUCLIDEAN, Weighting.UNIFORM,
-                Scaling.Z, Band.NONE);
+        FitKey m = new FitKey("", "head_m", List.of("flow_m3h"), new KnnSettings(1, Metric.EUCLIDEAN,
+                Weighting.UNIFORM, Scaling.Z, Band.NONE, KnnSettings.DEFAULT_FLAG_THRESHOLD, FlagScale.LOCAL_SD, 1));
         FlaggedRows f = wb.flags(m, null, "", JobControl.NONE);
         // Worked by hand, k = 1 with no ties: each row's nearest other row gives fits 2, 1, 2, 5, so the
         // residuals are -1, 1, 3, 6 and the RMSE is sqrt((1 + 1 + 9 + 36) / 4).

@@ -208,8 +208,8 @@ class ScreenTrustTest {
                 v.type(keys);
                 ViewState s = v.explorer.state();
                 String header = v.row(1);
-                assertTrue(header.contains(ChoiceNames.of(s.metric())) && header.contains(ChoiceNames.of(s.weighting()))
-                        && header.contains("scale " + ChoiceNames.of(s.scaling())), keys + ": " + header);
+                assertTrue(header.contains(s.metric().word()) && header.contains(s.weighting().word())
+                        && header.contains("scale " + s.scaling().word()), keys + ": " + header);
             }
             assertTrue(v.row(1).contains("manhattan") || v.row(1).contains("chebyshev"), v.row(1));
         }

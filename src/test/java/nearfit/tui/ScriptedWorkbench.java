@@ -79,7 +79,7 @@ class ScriptedWorkbench implements Workbench {
     @Override
     public CurveResult curve(FitKey model, CurveRequest request, JobControl control) {
         curveCalls.incrementAndGet();
-        if (model.k() == holdCurveForK) {
+        if (model.settings().k() == holdCurveForK) {
             try {
                 release.await(10, TimeUnit.SECONDS);
             } catch (InterruptedException e) {
@@ -95,11 +95,11 @@ class ScriptedWorkbench implements Workbench {
         int[] nb = new int[n];
         for (int i = 0; i < n; i++) {
             x[i] = request.at(i);
-            fit[i] = 100 + model.k();
+            fit[i] = 100 + model.settings().k();
             lo[i] = fit[i] - 10;
             hi[i] = fit[i] + 10;
-            w[i] = model.k() / 1000.0;
-            nb[i] = model.k();
+            w[i] = model.settings().k() / 1000.0;
+            nb[i] = model.settings().k();
         }
         return new CurveResult(x, fit, lo, hi, w, nb);
     }
