@@ -43,8 +43,65 @@ final class DescribeCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
+        return run(spec.commandLine().getOut(), spec.commandLine().getErr());
+    }
+
+    /**
+     * This command read from a plain command line without the option parser, or null for any other line.
+     * Building the parser's model of a command costs a fresh process about 0.3 s of CPU, more than the rest
+     * of {@code describe} on a small file (docs/bench-startup.md). A plain line is {@code describe}, one file
+     * and at most one each of {@code --format WORD} (or {@code --format=WORD}), {@code --quiet} and
+     * {@code --debug}; anything else (help, a misspelt option, a repeat, a word not allowed, an {@code @}file,
+     * {@code --}) goes to the parser, whose messages stay the only ones. QuickLaneTest runs both lanes on the
+     * same lines.
+     */
+    static DescribeCommand fromPlainLine(String[] args) {
+        if (args.length < 2 || !args[0].equals("describe")) {
+            return null;
+        }
+        DescribeCommand c = new DescribeCommand();
+        c.format = OptionChoices.DescribeFormat.TABLE;
+        boolean formatGiven = false;
+        boolean debug = false;
+        for (int i = 1; i < args.length; i++) {
+            String a = args[i];
+            String word = null;
+            if (a.equals("--format") && i + 1 < args.length && !args[i + 1].startsWith("-")) {
+                word = args[++i];
+            } else if (a.startsWith("--format=")) {
+                word = a.substring("--format=".length());
+            } else if (a.equals("--quiet") && !c.quiet) {
+                c.quiet = true;
+                continue;
+            } else if (a.equals("--debug") && !debug) {
+                debug = true;
+                continue;
+            } else if (c.file == null && !a.isEmpty() && (a.equals("-") || !a.startsWith("-")) && !a.startsWith("@")) {
+                c.file = a;
+                continue;
+            } else {
+                return null;
+            }
+            if (formatGiven) {
+                return null;
+            }
+            formatGiven = true;
+            String given = word.trim().toLowerCase(Locale.ROOT);
+            c.format = null;
+            for (OptionChoices.DescribeFormat f : OptionChoices.DescribeFormat.values()) {
+                if (OptionChoices.word(f).equals(given)) {
+                    c.format = f;
+                }
+            }
+            if (c.format == null) {
+                return null;
+            }
+        }
+        return c.file == null ? null : c;
+    }
+
+    /** Runs with output to {@code out} and warnings and progress to {@code err}; the exit status. */
+    int run(PrintWriter out, PrintWriter err) {
         boolean progress = !quiet && System.console() != null;
         LoadOptions options = LoadOptions.builder().progress(progress ? progressTo(err) : LoadProgress.NONE).build();
         Table table = SourceTable.loadTable(file, "-".equals(file) ? null : ArgumentPath.of(file), options);
@@ -109,10 +166,17 @@ final class DescribeCommand implements Callable<Integer> {
             }
         }
         StringBuilder out = new StringBuilder();
-        out.append(String.format(Locale.ROOT, "%s: %d rows kept, %d dropped, %d columns, %s%n",
-                shown(r.source()), r.rows(), r.droppedRows(), summaries.size(), r.delimiter() == LoadReport.PARQUET
-                        ? "Parquet" : "delimiter " + r.delimiterName() + ", " + (r.headerPresent() ? "header row"
-                        : "no header row") + (r.decimalComma() ? ", decimal comma" : "")));
+        // Concatenation, not String.format: see NumberText.
+        out.append(shown(r.source())).append(": ").append(r.rows()).append(" rows kept, ").append(r.droppedRows())
+                .append(" dropped, ").append(summaries.size()).append(" columns, ");
+        if (r.delimiter() == LoadReport.PARQUET) {
+            out.append("Parquet");
+        } else {
+            out.append("delimiter ").append(r.delimiterName()).append(", ")
+                    .append(r.headerPresent() ? "header row" : "no header row")
+                    .append(r.decimalComma() ? ", decimal comma" : "");
+        }
+        out.append('\n');
         out.append(align(rows));
         for (String c : categories) {
             out.append(c).append('\n');
@@ -122,18 +186,19 @@ final class DescribeCommand implements Callable<Integer> {
     }
 
     private static void appendReport(StringBuilder out, LoadReport r) {
-        out.append(String.format(Locale.ROOT, "ragged rows: %d dropped (%d short, %d long; none of their cells is used)%n",
-                r.raggedRows(), r.shortRows(), r.longRows()));
+        out.append("ragged rows: ").append(r.raggedRows()).append(" dropped (").append(r.shortRows()).append(" short, ")
+                .append(r.longRows()).append(" long; none of their cells is used)\n");
         for (BadCell c : r.raggedExamples()) {
-            out.append(String.format(Locale.ROOT, "  line %d: %s%n", c.line(), shown(c.text())));
+            out.append("  line ").append(c.line()).append(": ").append(shown(c.text())).append('\n');
         }
-        out.append(String.format(Locale.ROOT, "bad cells: %d (read as missing)%n", r.badCells()));
+        out.append("bad cells: ").append(r.badCells()).append(" (read as missing)\n");
         for (BadCell c : r.badExamples()) {
-            out.append(String.format(Locale.ROOT, "  line %d, column %s: \"%s\"%n", c.line(), shown(c.column()),
-                    shown(c.text())));
+            out.append("  line ").append(c.line()).append(", column ").append(shown(c.column())).append(": \"")
+                    .append(shown(c.text())).append("\"\n");
         }
-        out.append(String.format(Locale.ROOT, "loaded %.1f MB in %.2f s (%.0f MB/s)%n", r.bytes() / 1e6, r.seconds(),
-                r.megabytesPerSecond()));
+        out.append("loaded ").append(NumberText.fixed(r.bytes() / 1e6, 1)).append(" MB in ")
+                .append(NumberText.fixed(r.seconds(), 2)).append(" s (").append(NumberText.fixed(r.megabytesPerSecond(), 0))
+                .append(" MB/s)\n");
         for (String w : r.warnings()) {
             out.append("warning: ").append(shown(w)).append('\n');
         }
@@ -164,7 +229,7 @@ final class DescribeCommand implements Callable<Integer> {
         if (Double.isNaN(d)) {
             return "-";
         }
-        String s = String.format(Locale.ROOT, "%.6g", d);
+        String s = NumberText.significant6(d);
         int e = s.indexOf('e');
         String mantissa = e < 0 ? s : s.substring(0, e);
         String exponent = e < 0 ? "" : s.substring(e);
@@ -201,11 +266,22 @@ final class DescribeCommand implements Callable<Integer> {
         for (String[] r : rows) {
             for (int i = 0; i < r.length; i++) {
                 // Names and types to the left, numbers to the right.
-                String cell = i < 2 ? String.format("%-" + width[i] + "s", r[i]) : String.format("%" + width[i] + "s", r[i]);
-                sb.append(i == 0 ? "" : "  ").append(cell);
+                sb.append(i == 0 ? "" : "  ");
+                if (i >= 2) {
+                    sb.append(" ".repeat(width[i] - r[i].length()));
+                }
+                sb.append(r[i]);
+                if (i < 2) {
+                    sb.append(" ".repeat(width[i] - r[i].length()));
+                }
             }
+            int end = sb.length();
+            while (end > 0 && sb.charAt(end - 1) == ' ') { // no spaces at a line's end
+                end--;
+            }
+            sb.setLength(end);
             sb.append('\n');
         }
-        return sb.toString().replaceAll(" +\n", "\n");
+        return sb.toString();
     }
 }

@@ -28,9 +28,12 @@ public final class Main implements Runnable {
      * model of every command by reflection took about 200 ms of a cold start (two thirds of a small
      * {@code describe}), so a command line that names one command builds only that one ({@link #commandLine}).
      */
-    private static final List<Class<?>> COMMANDS = List.of(ViewCommand.class, DescribeCommand.class,
-            PlotCommand.class, TuneCommand.class, FitCommand.class, PredictCommand.class, CheckCommand.class,
-            CompletionCommand.class);
+    private static final class Commands {
+        /** In a holder of its own, so that the quick lane of {@link #run(String[], PrintWriter, PrintWriter)} loads none. */
+        static final List<Class<?>> ALL = List.of(ViewCommand.class, DescribeCommand.class,
+                PlotCommand.class, TuneCommand.class, FitCommand.class, PredictCommand.class, CheckCommand.class,
+                CompletionCommand.class);
+    }
 
     /** Exit status for a usage or input error. */
     public static final int EXIT_USAGE = 2;
@@ -73,10 +76,28 @@ public final class Main implements Runnable {
      * @return the exit status
      */
     public static int run(String[] args, PrintWriter out, PrintWriter err) {
-        return run(args, out, err, CommandLine.defaultFactory());
+        DescribeCommand plain = DescribeCommand.fromPlainLine(args);
+        if (plain == null) {
+            return run(args, out, err, CommandLine.defaultFactory());
+        }
+        // The quick lane: no parser is built (DescribeCommand#fromPlainLine); failures end as the parser's lane ends them.
+        boolean debug = java.util.Arrays.asList(args).contains("--debug");
+        int status;
+        try {
+            status = plain.run(out, err);
+        } catch (OutOfMemoryError ex) {
+            err.println(outOfMemory());
+            status = EXIT_USAGE;
+        } catch (RuntimeException ex) {
+            status = failed(ex, err, debug);
+        }
+        out.flush();
+        err.flush();
+        return status;
     }
 
-    /** As {@link #run(String[], PrintWriter, PrintWriter)}, with commands and mixins made by {@code factory}. */
+    /** As {@link #run(String[], PrintWriter, PrintWriter)} through the option parser always, with commands and
+     * mixins made by {@code factory}. */
     static int run(String[] args, PrintWriter out, PrintWriter err, CommandLine.IFactory factory) {
         CommandLine cli = commandLine(factory, args);
         cli.setOut(out);
@@ -88,22 +109,7 @@ public final class Main implements Runnable {
             err.flush();
             return EXIT_USAGE;
         });
-        cli.setExecutionExceptionHandler((ex, c, parsed) -> {
-            if (ex instanceof NearfitException) {
-                err.println(errorLine(ex));
-            } else if (rootCause(ex) instanceof OutOfMemoryError) {
-                err.println(outOfMemory()); // from a worker thread, wrapped
-            } else {
-                err.println("nearfit: internal error: " + nearfit.table.VisibleText.of(ex.toString()));
-            }
-            if (debug) {
-                StringWriter sw = new StringWriter();
-                ex.printStackTrace(new PrintWriter(sw));
-                err.print(sw);
-            }
-            err.flush();
-            return EXIT_USAGE;
-        });
+        cli.setExecutionExceptionHandler((ex, c, parsed) -> failed(ex, err, debug));
         int status;
         try {
             status = cli.execute(args);
@@ -115,6 +121,24 @@ public final class Main implements Runnable {
         out.flush();
         err.flush();
         return status;
+    }
+
+    /** A command's failure as one line (and its stack trace under {@code --debug}); the exit status. */
+    private static int failed(Exception ex, PrintWriter err, boolean debug) {
+        if (ex instanceof NearfitException) {
+            err.println(errorLine(ex));
+        } else if (rootCause(ex) instanceof OutOfMemoryError) {
+            err.println(outOfMemory()); // from a worker thread, wrapped
+        } else {
+            err.println("nearfit: internal error: " + nearfit.table.VisibleText.of(ex.toString()));
+        }
+        if (debug) {
+            StringWriter sw = new StringWriter();
+            ex.printStackTrace(new PrintWriter(sw));
+            err.print(sw);
+        }
+        err.flush();
+        return EXIT_USAGE;
     }
 
     /**
@@ -159,10 +183,10 @@ public final class Main implements Runnable {
             }
         }
         boolean known = false;
-        for (Class<?> c : COMMANDS) {
+        for (Class<?> c : Commands.ALL) {
             known |= c.getAnnotation(Command.class).name().equals(named);
         }
-        for (Class<?> c : COMMANDS) {
+        for (Class<?> c : Commands.ALL) {
             String name = c.getAnnotation(Command.class).name();
             if (!known || name.equals(named)) {
                 cli.addSubcommand(name, c);

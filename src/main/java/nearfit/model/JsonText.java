@@ -1,43 +1,44 @@
 package nearfit.model;
 
 import java.io.IOException;
+import java.io.StringWriter;
+import java.lang.annotation.ElementType;
+import java.lang.annotation.Retention;
+import java.lang.annotation.RetentionPolicy;
+import java.lang.annotation.Target;
 import java.lang.reflect.RecordComponent;
+import java.math.BigDecimal;
+import java.math.BigInteger;
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 
+import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.core.JsonLocation;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.JsonToken;
 import com.fasterxml.jackson.core.StreamReadConstraints;
-import com.fasterxml.jackson.core.json.JsonReadFeature;
-import com.fasterxml.jackson.databind.DeserializationFeature;
-import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.MapperFeature;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.PropertyNamingStrategies;
-import com.fasterxml.jackson.databind.SerializerProvider;
-import com.fasterxml.jackson.databind.cfg.CoercionAction;
-import com.fasterxml.jackson.databind.cfg.CoercionInputShape;
-import com.fasterxml.jackson.databind.json.JsonMapper;
-import com.fasterxml.jackson.databind.module.SimpleModule;
-import com.fasterxml.jackson.databind.ser.std.StdSerializer;
-import com.fasterxml.jackson.databind.type.LogicalType;
+import com.fasterxml.jackson.core.StreamReadFeature;
 
 /**
- * The tool's JSON, through the Jackson library: model manifests and the {@code --format json}
- * outputs. One configured mapper, never changed after this class is loaded.
+ * The tool's JSON, through the Jackson library's streaming parser and generator (jackson-core; no data
+ * binding: its set-up cost every model-reading command 110–200 ms, docs/bench-startup.md): model manifests
+ * and the {@code --format json} outputs.
  *
- * <p>Reading is strict: a key twice in one object is refused (which one counts would be a guess),
- * so is text after the document; no value is coerced into another type (a number is never read as
- * text, nor text as a number). Floating-point numbers are parsed to the nearest double, so every
- * double the writer wrote reads back bit for bit.
+ * <p>Reading gives plain values: objects as {@link LinkedHashMap} (key order kept; a JSON null is a key
+ * mapped to null), arrays as {@link ArrayList}, numbers as {@link BigDecimal} (exact as written, so
+ * {@code 4294967306} is never an int 10 and a double reads back to the nearest double, bit for bit),
+ * strings, booleans and null. It is strict: a key twice in one object is refused (which one counts would be
+ * a guess), so is text after the document and NaN or Infinity; nesting stops at 64 levels.
  *
  * <p>Writing is deterministic, so a manifest's bytes (and its SHA-256) depend on its values only:
- * compact, keys in the order given, a whole double below 10^15 written without a fraction
- * ({@code 4}, not {@code 4.0}), other doubles in Java's shortest round-trip form, and a non-finite
- * number as {@code null} (JSON has no form for it). These are the bytes model files of format 1.1
- * have always held.
+ * compact, keys in the order given, record components in order with snake_case names, a whole double below
+ * 10^15 written without a fraction ({@code 4}, not {@code 4.0}), other doubles in Java's shortest round-trip
+ * form, and a non-finite number as {@code null} (JSON has no form for it). These are the bytes model files
+ * of format 1.1 have always held.
  */
 public final class JsonText {
     /** The deepest nesting read; a manifest needs 3 levels. */
@@ -46,39 +47,92 @@ public final class JsonText {
     /** The library's wording of a duplicate key, reworded as the tool's other messages are. */
     private static final java.util.regex.Pattern DUPLICATE = java.util.regex.Pattern.compile("Duplicate field '(.*)'");
 
-    private static final ObjectMapper MAPPER = newMapper();
+    private static final JsonFactory FACTORY = JsonFactory.builder()
+            .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
+            .streamReadConstraints(StreamReadConstraints.builder().maxNestingDepth(MAX_DEPTH).build())
+            .build();
+
+    /** Marks a record component that is left out of the written object when null. */
+    @Retention(RetentionPolicy.RUNTIME)
+    @Target({ElementType.RECORD_COMPONENT, ElementType.METHOD})
+    @interface OmitWhenNull {
+    }
 
     private JsonText() {
     }
 
-    /** The mapper: strict reading, the deterministic number form, snake_case names for records. */
-    static ObjectMapper mapper() {
-        return MAPPER;
-    }
-
-    /** The compact JSON text of a value: maps, lists, arrays, records, strings, numbers, booleans, null. */
+    /**
+     * The compact JSON text of a value: maps, lists, double/int/long arrays, records, strings, numbers,
+     * booleans, enums (by name) and null.
+     */
     public static String write(Object value) {
-        try {
-            return MAPPER.writeValueAsString(value);
-        } catch (JsonProcessingException e) {
-            throw new IllegalArgumentException("no JSON form: " + e.getOriginalMessage(), e);
+        StringWriter text = new StringWriter();
+        try (JsonGenerator out = FACTORY.createGenerator(text)) {
+            writeValue(value, out);
+        } catch (IOException e) {
+            throw new IllegalStateException("cannot write JSON to a string", e); // a StringWriter does not fail
         }
+        return text.toString();
     }
 
     /**
-     * Parses one JSON document into the library's tree.
+     * Parses one JSON document into plain values (see the class).
      *
      * @throws IllegalArgumentException in one line, {@code not valid JSON at character N: ...}
      */
-    public static JsonNode parse(String text) {
-        try {
-            JsonNode node = MAPPER.readTree(text);
-            if (node == null || node.isMissingNode()) {
+    public static Object parse(String text) {
+        try (JsonParser p = FACTORY.createParser(text)) {
+            JsonToken first = p.nextToken();
+            if (first == null) {
                 throw new IllegalArgumentException("not valid JSON at character 0: no document");
             }
-            return node;
+            Object value = read(p, first);
+            if (p.nextToken() != null) {
+                throw new IllegalArgumentException("not valid JSON at character " + p.currentTokenLocation().getCharOffset()
+                        + ": text after the document");
+            }
+            return value;
         } catch (JsonProcessingException e) {
             throw new IllegalArgumentException(syntaxError(e), e);
+        } catch (IOException e) {
+            throw new IllegalStateException("cannot read JSON from a string", e); // a String does not fail
+        }
+    }
+
+    private static Object read(JsonParser p, JsonToken t) throws IOException {
+        switch (t) {
+            case START_OBJECT -> {
+                Map<String, Object> map = new LinkedHashMap<>();
+                for (JsonToken k = p.nextToken(); k != JsonToken.END_OBJECT; k = p.nextToken()) {
+                    String key = p.currentName();
+                    map.put(key, read(p, p.nextToken()));
+                }
+                return map;
+            }
+            case START_ARRAY -> {
+                List<Object> list = new ArrayList<>();
+                for (JsonToken e = p.nextToken(); e != JsonToken.END_ARRAY; e = p.nextToken()) {
+                    list.add(read(p, e));
+                }
+                return list;
+            }
+            case VALUE_STRING -> {
+                return p.getText();
+            }
+            case VALUE_NUMBER_INT, VALUE_NUMBER_FLOAT -> {
+                return new BigDecimal(p.getText());
+            }
+            case VALUE_TRUE -> {
+                return Boolean.TRUE;
+            }
+            case VALUE_FALSE -> {
+                return Boolean.FALSE;
+            }
+            case VALUE_NULL -> {
+                return null;
+            }
+            default -> throw new IllegalArgumentException("not valid JSON at character "
+                    + p.currentTokenLocation().getCharOffset() + ": unexpected " + t);
         }
     }
 
@@ -89,21 +143,55 @@ public final class JsonText {
     static Map<String, Object> fieldsOf(Object value) {
         Map<String, Object> fields = new LinkedHashMap<>();
         if (value instanceof Map<?, ?> map) {
-            map.forEach((k, v) -> fields.put(String.valueOf(k), v));
-        } else if (value instanceof Record) {
-            for (RecordComponent c : value.getClass().getRecordComponents()) {
-                try {
-                    c.getAccessor().setAccessible(true);
-                    fields.put(PropertyNamingStrategies.SnakeCaseStrategy.INSTANCE.translate(c.getName()),
-                            c.getAccessor().invoke(value));
-                } catch (ReflectiveOperationException e) {
-                    throw new IllegalStateException("cannot read " + c, e);
+            for (Map.Entry<?, ?> e : map.entrySet()) {
+                fields.put(String.valueOf(e.getKey()), e.getValue());
+            }
+        } else if (value instanceof Record record) {
+            for (RecordComponent c : record.getClass().getRecordComponents()) {
+                Object v = componentOf(record, c);
+                if (v != null || !c.isAnnotationPresent(OmitWhenNull.class)) {
+                    fields.put(snakeCase(c.getName()), v);
                 }
             }
         } else {
             throw new IllegalArgumentException("not an object: " + value);
         }
         return fields;
+    }
+
+    private static Object componentOf(Record value, RecordComponent c) {
+        try {
+            c.getAccessor().setAccessible(true);
+            return c.getAccessor().invoke(value);
+        } catch (ReflectiveOperationException e) {
+            throw new IllegalStateException("cannot read " + c, e);
+        }
+    }
+
+    /**
+     * A component's name as JSON names it: each capital letter lower-cased after an underscore, a run of
+     * capitals taken as one word ({@code rmseSe} is {@code rmse_se}, {@code r2Pred} is {@code r2_pred}).
+     */
+    static String snakeCase(String name) {
+        StringBuilder sb = new StringBuilder(name.length() + 4);
+        boolean previousUpper = false;
+        for (int i = 0; i < name.length(); i++) {
+            char c = name.charAt(i);
+            if (i == 0 && c == '_') {
+                continue;
+            }
+            if (Character.isUpperCase(c)) {
+                if (!previousUpper && sb.length() > 0 && sb.charAt(sb.length() - 1) != '_') {
+                    sb.append('_');
+                }
+                c = Character.toLowerCase(c);
+                previousUpper = true;
+            } else {
+                previousUpper = false;
+            }
+            sb.append(c);
+        }
+        return sb.toString();
     }
 
     /** The one-line message of a syntax error: the character offset and the library's reason. */
@@ -118,34 +206,51 @@ public final class JsonText {
         return "not valid JSON" + where + ": " + why;
     }
 
-    private static ObjectMapper newMapper() {
-        SimpleModule numbers = new SimpleModule("nearfit-numbers");
-        numbers.addSerializer(Double.class, new DoubleForm());
-        numbers.addSerializer(double.class, new DoubleForm());
-        numbers.addSerializer(double[].class, new DoubleArrayForm());
-        JsonMapper mapper = JsonMapper.builder()
-                .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
-                .disable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS)
-                .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
-                // Forward compatibility within a major version: fields a later minor adds are ignored.
-                .disable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
-                .disable(MapperFeature.ALLOW_COERCION_OF_SCALARS)
-                .disable(JsonGenerator.Feature.AUTO_CLOSE_TARGET)
-                .propertyNamingStrategy(PropertyNamingStrategies.SNAKE_CASE)
-                .addModule(numbers)
-                .build();
-        mapper.getFactory().setStreamReadConstraints(StreamReadConstraints.builder().maxNestingDepth(MAX_DEPTH).build());
-        mapper.coercionConfigFor(LogicalType.Textual)
-                .setCoercion(CoercionInputShape.Integer, CoercionAction.Fail)
-                .setCoercion(CoercionInputShape.Float, CoercionAction.Fail)
-                .setCoercion(CoercionInputShape.Boolean, CoercionAction.Fail);
-        mapper.coercionConfigFor(LogicalType.Float)
-                .setCoercion(CoercionInputShape.String, CoercionAction.Fail)
-                .setCoercion(CoercionInputShape.Boolean, CoercionAction.Fail);
-        mapper.coercionConfigFor(LogicalType.Integer)
-                .setCoercion(CoercionInputShape.String, CoercionAction.Fail)
-                .setCoercion(CoercionInputShape.Boolean, CoercionAction.Fail);
-        return mapper;
+    private static void writeValue(Object v, JsonGenerator out) throws IOException {
+        if (v == null) {
+            out.writeNull();
+        } else if (v instanceof String s) {
+            out.writeString(s);
+        } else if (v instanceof Double d) {
+            writeDouble(d, out);
+        } else if (v instanceof Float f) {
+            writeDouble(f, out);
+        } else if (v instanceof Integer || v instanceof Long || v instanceof Short || v instanceof Byte) {
+            out.writeNumber(((Number) v).longValue());
+        } else if (v instanceof BigDecimal d) {
+            out.writeNumber(d);
+        } else if (v instanceof BigInteger i) {
+            out.writeNumber(i);
+        } else if (v instanceof Boolean b) {
+            out.writeBoolean(b);
+        } else if (v instanceof Enum<?> e) {
+            out.writeString(e.name());
+        } else if (v instanceof double[] a) {
+            out.writeStartArray(a, a.length);
+            for (double d : a) {
+                writeDouble(d, out);
+            }
+            out.writeEndArray();
+        } else if (v instanceof int[] a) {
+            out.writeArray(a, 0, a.length);
+        } else if (v instanceof long[] a) {
+            out.writeArray(a, 0, a.length);
+        } else if (v instanceof Map<?, ?> || v instanceof Record) {
+            out.writeStartObject();
+            for (Map.Entry<String, Object> e : fieldsOf(v).entrySet()) {
+                out.writeFieldName(e.getKey());
+                writeValue(e.getValue(), out);
+            }
+            out.writeEndObject();
+        } else if (v instanceof Iterable<?> list) {
+            out.writeStartArray();
+            for (Object e : list) {
+                writeValue(e, out);
+            }
+            out.writeEndArray();
+        } else {
+            throw new IllegalArgumentException("no JSON form for " + v.getClass().getName());
+        }
     }
 
     /** Writes one double in the deterministic form described on the class. */
@@ -156,32 +261,6 @@ public final class JsonText {
             out.writeNumber((long) d);
         } else {
             out.writeNumber(Double.toString(d));
-        }
-    }
-
-    private static final class DoubleForm extends StdSerializer<Double> {
-        DoubleForm() {
-            super(Double.class);
-        }
-
-        @Override
-        public void serialize(Double value, JsonGenerator out, SerializerProvider provider) throws IOException {
-            writeDouble(value, out);
-        }
-    }
-
-    private static final class DoubleArrayForm extends StdSerializer<double[]> {
-        DoubleArrayForm() {
-            super(double[].class);
-        }
-
-        @Override
-        public void serialize(double[] values, JsonGenerator out, SerializerProvider provider) throws IOException {
-            out.writeStartArray(values, values.length);
-            for (double v : values) {
-                writeDouble(v, out);
-            }
-            out.writeEndArray();
         }
     }
 }

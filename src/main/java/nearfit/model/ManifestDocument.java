@@ -1,7 +1,5 @@
 package nearfit.model;
 
-import static com.fasterxml.jackson.annotation.JsonInclude.Include.NON_NULL;
-
 import java.lang.annotation.ElementType;
 import java.lang.annotation.Retention;
 import java.lang.annotation.RetentionPolicy;
@@ -12,16 +10,12 @@ import java.lang.reflect.Type;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 
-import com.fasterxml.jackson.annotation.JsonInclude;
-
-import com.fasterxml.jackson.databind.JsonMappingException;
-import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.PropertyNamingStrategies;
-import com.fasterxml.jackson.databind.exc.MismatchedInputException;
+import nearfit.model.JsonText.OmitWhenNull;
 
 /**
- * A model manifest's fields as the JSON library writes and binds them; on reading, before any value
+ * A model manifest's fields as {@link JsonText} writes them and {@link #of} binds them; on reading, before any value
  * is checked ({@link ModelFile} checks each and names the field of the first that is wrong). The JSON names are
  * the components' names in snake_case ({@code toolVersion} is {@code "tool_version"}).
  *
@@ -59,15 +53,15 @@ record ManifestDocument(String toolVersion, String created, SourceFields source,
     }
 
     /** {@code "tuning"}: the tune table; one family of figures (rmse... or error_rate...) is present. */
-    record TuningFields(BigDecimal rows, List<BigDecimal> k, @MayBeAbsent @JsonInclude(NON_NULL) List<Double> rmse,
-                        @MayBeAbsent @JsonInclude(NON_NULL) List<Double> rmseSe,
-                        @MayBeAbsent @JsonInclude(NON_NULL) List<Double> mae,
-                        @MayBeAbsent @JsonInclude(NON_NULL) List<Double> press,
-                        @MayBeAbsent @JsonInclude(NON_NULL) List<Double> r2Pred,
-                        @MayBeAbsent @JsonInclude(NON_NULL) List<Double> errorRate,
-                        @MayBeAbsent @JsonInclude(NON_NULL) List<Double> errorRateSe, BigDecimal bestK,
+    record TuningFields(BigDecimal rows, List<BigDecimal> k, @MayBeAbsent @OmitWhenNull List<Double> rmse,
+                        @MayBeAbsent @OmitWhenNull List<Double> rmseSe,
+                        @MayBeAbsent @OmitWhenNull List<Double> mae,
+                        @MayBeAbsent @OmitWhenNull List<Double> press,
+                        @MayBeAbsent @OmitWhenNull List<Double> r2Pred,
+                        @MayBeAbsent @OmitWhenNull List<Double> errorRate,
+                        @MayBeAbsent @OmitWhenNull List<Double> errorRateSe, BigDecimal bestK,
                         BigDecimal oneSeK, @MayBeAbsent BigDecimal sampled,
-                        @MayBeAbsent @JsonInclude(NON_NULL) String scheme) {
+                        @MayBeAbsent @OmitWhenNull String scheme) {
     }
 
     /** The doubles as the writer writes them (NaN as null); null for no array. */
@@ -83,24 +77,15 @@ record ManifestDocument(String toolVersion, String created, SourceFields source,
     }
 
     /**
-     * Binds a parsed manifest.
+     * Binds a parsed manifest ({@link JsonText#parse}: maps, lists, numbers as BigDecimal, text). No value is
+     * coerced into another type: a number is never read as text, nor text as a number.
      *
      * @throws IllegalArgumentException naming the field, e.g. {@code manifest field "k" is missing} or
      *                                  {@code manifest field "scaling.center[1]" is not a number}
      */
-    static ManifestDocument of(JsonNode manifest) {
+    static ManifestDocument of(Object manifest) {
         requirePresent(manifest, ManifestDocument.class, "");
-        try {
-            return JsonText.mapper().treeToValue(manifest, ManifestDocument.class);
-        } catch (MismatchedInputException e) {
-            throw new IllegalArgumentException("manifest field \"" + pathOf(e) + "\" " + wrongType(e.getTargetType()),
-                    e);
-        } catch (JsonMappingException e) {
-            throw new IllegalArgumentException("manifest field \"" + pathOf(e) + "\" cannot be read: "
-                    + e.getOriginalMessage().lines().findFirst().orElse(""), e);
-        } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
-            throw new IllegalArgumentException(JsonText.syntaxError(e), e);
-        }
+        return (ManifestDocument) bind(manifest, ManifestDocument.class, "");
     }
 
     /** The error for a field: {@code manifest field "a.b" } followed by what is wrong. */
@@ -110,46 +95,68 @@ record ManifestDocument(String toolVersion, String created, SourceFields source,
 
     /**
      * Checks that every field of {@code type} not marked {@link MayBeAbsent} is present in
-     * {@code node}, recursing into the nested records; the binding cannot tell absent from null.
+     * {@code node}, recursing into the nested records, before any type is checked.
      */
-    private static void requirePresent(JsonNode node, Class<?> type, String path) {
-        if (!node.isObject()) {
+    private static void requirePresent(Object node, Class<?> type, String path) {
+        if (!(node instanceof Map<?, ?> map)) {
             return; // the binding reports the wrong type
         }
         for (RecordComponent c : type.getRecordComponents()) {
-            String key = PropertyNamingStrategies.SnakeCaseStrategy.INSTANCE.translate(c.getName());
+            String key = JsonText.snakeCase(c.getName());
             String name = path.isEmpty() ? key : path + "." + key;
-            JsonNode value = node.get(key);
-            if (value == null) {
+            if (!map.containsKey(key)) {
                 if (c.isAnnotationPresent(MayBeAbsent.class)) {
                     continue;
                 }
                 throw bad(name, "is missing");
             }
+            Object value = map.get(key);
             if (c.getType().isRecord()) {
                 requirePresent(value, c.getType(), name);
             }
         }
     }
 
-    private static String pathOf(JsonMappingException e) {
-        StringBuilder path = new StringBuilder();
-        for (JsonMappingException.Reference r : e.getPath()) {
-            if (r.getFieldName() != null) {
-                if (path.length() > 0) {
-                    path.append('.');
-                }
-                path.append(r.getFieldName());
-            } else if (r.getIndex() >= 0) {
-                path.append('[').append(r.getIndex()).append(']');
+    /** {@code node} as a value of {@code type}: text, BigDecimal, Double, a list of them, or a record; null stays null. */
+    private static Object bind(Object node, Type type, String path) {
+        if (node == null) {
+            return null;
+        }
+        Class<?> raw = type instanceof Class<?> c ? c : (Class<?>) ((ParameterizedType) type).getRawType();
+        if (raw == String.class && node instanceof String) {
+            return node;
+        } else if (raw == BigDecimal.class && node instanceof BigDecimal) {
+            return node;
+        } else if (raw == Double.class && node instanceof BigDecimal d) {
+            return Double.parseDouble(d.toString()); // the nearest double to the digits written
+        } else if (raw == List.class && node instanceof List<?> list) {
+            Type element = ((ParameterizedType) type).getActualTypeArguments()[0];
+            List<Object> out = new ArrayList<>(list.size());
+            for (int i = 0; i < list.size(); i++) {
+                out.add(bind(list.get(i), element, path + "[" + i + "]"));
+            }
+            return out;
+        } else if (raw.isRecord() && node instanceof Map<?, ?> map) {
+            RecordComponent[] components = raw.getRecordComponents();
+            Object[] values = new Object[components.length];
+            Class<?>[] types = new Class<?>[components.length];
+            for (int i = 0; i < components.length; i++) {
+                String key = JsonText.snakeCase(components[i].getName());
+                values[i] = bind(map.get(key), components[i].getGenericType(), path.isEmpty() ? key : path + "." + key);
+                types[i] = components[i].getType();
+            }
+            try {
+                var constructor = raw.getDeclaredConstructor(types);
+                constructor.setAccessible(true);
+                return constructor.newInstance(values);
+            } catch (ReflectiveOperationException e) {
+                throw new IllegalStateException("cannot make " + raw.getSimpleName(), e);
             }
         }
-        return path.toString();
+        throw bad(path, wrongType(raw));
     }
 
-    private static String wrongType(Type target) {
-        Class<?> raw = target instanceof Class<?> c ? c
-                : target instanceof ParameterizedType p ? (Class<?>) p.getRawType() : Object.class;
+    private static String wrongType(Class<?> raw) {
         if (raw == String.class) {
             return "is not text";
         } else if (Number.class.isAssignableFrom(raw)) {

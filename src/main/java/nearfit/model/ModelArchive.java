@@ -20,7 +20,6 @@ import java.util.zip.ZipException;
 import java.util.zip.ZipFile;
 import java.util.zip.ZipOutputStream;
 
-import com.fasterxml.jackson.databind.JsonNode;
 
 import nearfit.table.NearfitException;
 
@@ -107,7 +106,7 @@ public final class ModelArchive {
     }
 
     /** What a model file holds: the manifest and the arrays by name (double[], int[] or long[]). */
-    public record Contents(JsonNode manifest, Map<String, Object> arrays) {
+    public record Contents(Map<String, Object> manifest, Map<String, Object> arrays) {
         /** The double array stored under {@code name}. */
         public double[] doubles(String name) {
             return (double[]) require(name, double[].class);
@@ -256,7 +255,7 @@ public final class ModelArchive {
         private final String name;
         private final ZipFile zip;
         private final long fileSize;
-        private JsonNode manifest;
+        private Map<String, Object> manifest;
         private final Map<String, Listed> listed = new LinkedHashMap<>();
 
         private Opened(String name, ZipFile zip, long fileSize) {
@@ -270,8 +269,8 @@ public final class ModelArchive {
             return name;
         }
 
-        /** The parsed manifest (format, format_version and entries included). */
-        public JsonNode manifest() {
+        /** The parsed manifest (format, format_version and entries included), as {@link JsonText#parse} gives it. */
+        public Map<String, Object> manifest() {
             return manifest;
         }
 
@@ -330,22 +329,24 @@ public final class ModelArchive {
                             + MANIFEST_DIGEST);
                 }
             }
-            JsonNode m;
+            Object parsed;
             try {
-                m = JsonText.parse(new String(b, StandardCharsets.UTF_8));
+                parsed = JsonText.parse(new String(b, StandardCharsets.UTF_8));
             } catch (IllegalArgumentException e) {
                 throw NearfitException.inFile(name, "damaged manifest: " + e.getMessage());
             }
-            if (!m.isObject() || !FORMAT_NAME.equals(m.path("format").textValue())) {
+            if (!(parsed instanceof Map<?, ?> object) || !FORMAT_NAME.equals(object.get("format"))) {
                 throw NearfitException.inFile(name, "is not a nearfit model (its manifest names another format)");
             }
+            @SuppressWarnings("unchecked")
+            Map<String, Object> m = (Map<String, Object>) object;
             int minor = checkVersion(m.get("format_version"), name);
             boolean digests = minor >= 1;
             if (digests && digestEntry == null) {
                 throw NearfitException.inFile(name, "is damaged: " + MANIFEST_DIGEST + " is missing (a model file of "
                         + "format " + FORMAT_MAJOR + ".1 or later has one)");
             }
-            for (JsonNode o : listOf(m.get("entries"), name)) {
+            for (Object o : listOf(m.get("entries"), name)) {
                 Listed l = listedOf(o, digests);
                 if (listed.put(l.name(), l) != null) {
                     throw NearfitException.inFile(name, "damaged manifest: entry " + l.name() + " is listed twice");
@@ -354,35 +355,35 @@ public final class ModelArchive {
             manifest = m;
         }
 
-        private Listed listedOf(JsonNode m, boolean digests) {
-            if (!m.isObject()) {
+        private Listed listedOf(Object entry, boolean digests) {
+            if (!(entry instanceof Map<?, ?> m)) {
                 throw NearfitException.inFile(name, "damaged manifest: an entry is not an object");
             }
-            String arrayName = m.path("name").textValue();
+            String arrayName = m.get("name") instanceof String s ? s : null;
             if (arrayName == null || !ARRAY_NAME.matcher(arrayName).matches()) {
                 throw NearfitException.inFile(name, "damaged manifest: an entry has no valid name");
             }
-            String code = m.path("type").textValue();
+            String code = m.get("type") instanceof String s ? s : null;
             ElementType type = code != null ? ElementType.ofCode(code) : null;
             if (type == null) {
                 throw bad(arrayName, "type", "is not f64, i32 or i64");
             }
             long count = wholeIn(m.get("count"), MAX_ENTRY_BYTES / type.width(), arrayName, "count");
             long crc = wholeIn(m.get("crc32"), 0xFFFF_FFFFL, arrayName, "crc32");
-            JsonNode sha = m.get("sha256");
-            boolean given = sha != null && !sha.isNull();
-            if ((given || digests) && !(given && sha.isTextual() && SHA256_HEX.matcher(sha.textValue()).matches())) {
+            Object sha = m.get("sha256");
+            boolean given = sha != null;
+            if ((given || digests) && !(sha instanceof String hex && SHA256_HEX.matcher(hex).matches())) {
                 throw bad(arrayName, "sha256", "is not 64 lower-case hex digits");
             }
-            return new Listed(arrayName, type, count, crc, given ? sha.textValue() : null);
+            return new Listed(arrayName, type, count, crc, given ? (String) sha : null);
         }
 
-        private long wholeIn(JsonNode v, long max, String arrayName, String field) {
-            if (v == null || !v.isNumber() || v.decimalValue().signum() != 0 && v.decimalValue().stripTrailingZeros().scale() > 0
-                    || v.decimalValue().signum() < 0 || v.decimalValue().compareTo(java.math.BigDecimal.valueOf(max)) > 0) {
+        private long wholeIn(Object v, long max, String arrayName, String field) {
+            if (!(v instanceof java.math.BigDecimal d) || d.signum() != 0 && d.stripTrailingZeros().scale() > 0
+                    || d.signum() < 0 || d.compareTo(java.math.BigDecimal.valueOf(max)) > 0) {
                 throw bad(arrayName, field, "is not a whole number from 0 to " + max);
             }
-            return v.decimalValue().longValueExact();
+            return d.longValueExact();
         }
 
         private NearfitException bad(String arrayName, String field, String what) {
@@ -482,10 +483,10 @@ public final class ModelArchive {
     }
 
     /** The major.minor version as "1" or "1.1"; returns the minor (0 when absent). */
-    private static int checkVersion(JsonNode version, String name) {
-        String v = version == null ? "null" : version.isTextual() ? version.textValue() : version.toString();
+    private static int checkVersion(Object version, String name) {
+        String v = version instanceof String s ? s : JsonText.write(version);
         java.util.regex.Matcher m = java.util.regex.Pattern.compile("(\\d{1,6})(?:\\.(\\d{1,6}))?").matcher(v);
-        if (version == null || !version.isTextual() || !m.matches()) {
+        if (!(version instanceof String) || !m.matches()) {
             throw NearfitException.inFile(name, "damaged manifest: format_version \"" + v + "\"");
         }
         if (Integer.parseInt(m.group(1)) != FORMAT_MAJOR) {
@@ -507,11 +508,11 @@ public final class ModelArchive {
         }
     }
 
-    private static JsonNode listOf(JsonNode o, String name) {
-        if (o == null || !o.isArray()) {
+    private static List<?> listOf(Object o, String name) {
+        if (!(o instanceof List<?> list)) {
             throw NearfitException.inFile(name, "damaged manifest: no entries list");
         }
-        return o;
+        return list;
     }
 
     private static void putStored(ZipOutputStream zip, String entryName, byte[] b) throws IOException {

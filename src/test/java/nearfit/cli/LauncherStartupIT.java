@@ -43,7 +43,8 @@ class LauncherStartupIT {
             return null;
         }
         try (Stream<Path> files = Files.list(dir)) {
-            return files.filter(p -> p.getFileName().toString().endsWith(".aot")).findFirst().orElse(null);
+            return files.filter(p -> p.getFileName().toString().endsWith(".aot")
+                    && !p.getFileName().toString().endsWith("-describe.aot")).findFirst().orElse(null);
         }
     }
 

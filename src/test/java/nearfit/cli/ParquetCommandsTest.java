@@ -9,10 +9,8 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 
-import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -28,7 +26,6 @@ import nearfit.table.Table;
  * is in {@link ViewCommandTest} through the bad-input corpus.
  */
 class ParquetCommandsTest {
-    private static final ObjectMapper JSON = new ObjectMapper();
     private static final String[] MODEL = {"-x", "wind_ms,temp_c", "-y", "power_kw", "--group", "unit", "--quiet",
             "--threads", "2"};
 
@@ -56,10 +53,15 @@ class ParquetCommandsTest {
         return a.toArray(new String[0]);
     }
 
+    /** A JSON document as plain maps and lists (numbers as Double), through the tool's own strict reader. */
+    private static Map<?, ?> json(String text) {
+        return (Map<?, ?>) nearfit.model.JsonTrees.parse(text);
+    }
+
     @Test
     void describeGivesTheCsvTwinsColumns() throws IOException {
-        JsonNode csv = JSON.readTree(ok("describe", "--quiet", "--format", "json", fixture("site.csv")).out());
-        JsonNode parquet = JSON.readTree(ok("describe", "--quiet", "--format", "json", fixture("site.parquet")).out());
+        Map<?, ?> csv = json(ok("describe", "--quiet", "--format", "json", fixture("site.csv")).out());
+        Map<?, ?> parquet = json(ok("describe", "--quiet", "--format", "json", fixture("site.parquet")).out());
         assertEquals(csv.get("columns"), parquet.get("columns"));
         assertEquals(csv.get("rows"), parquet.get("rows"));
     }
@@ -98,22 +100,22 @@ class ParquetCommandsTest {
             assertEquals(Integer.toString(i - 1), b.get(i).substring(0, b.get(i).indexOf(',')));
             assertEquals(a.get(i).substring(a.get(i).indexOf(',')), b.get(i).substring(b.get(i).indexOf(',')));
         }
-        JsonNode checkCsv = JSON.readTree(ok("check", modelCsv.toString(), fixture("site.csv"), "--format", "json",
+        Map<?, ?> checkCsv = json(ok("check", modelCsv.toString(), fixture("site.csv"), "--format", "json",
                 "--quiet", "--limit", "100").out());
-        JsonNode checkParquet = JSON.readTree(ok("check", modelCsv.toString(), fixture("site.parquet"), "--format", "json",
+        Map<?, ?> checkParquet = json(ok("check", modelCsv.toString(), fixture("site.parquet"), "--format", "json",
                 "--quiet", "--limit", "100").out());
         for (String field : List.of("rows", "scored", "flagged", "by_group")) {
             assertEquals(checkCsv.get(field), checkParquet.get(field), field);
         }
-        JsonNode worstCsv = checkCsv.get("worst");
-        JsonNode worstParquet = checkParquet.get("worst");
+        List<?> worstCsv = (List<?>) checkCsv.get("worst");
+        List<?> worstParquet = (List<?>) checkParquet.get("worst");
         assertEquals(worstCsv.size(), worstParquet.size());
         assertTrue(worstCsv.size() > 0, "the fixture has rows far from the curve");
         for (int i = 0; i < worstCsv.size(); i++) {
-            ObjectNode c = (ObjectNode) worstCsv.get(i).deepCopy();
-            ObjectNode p = (ObjectNode) worstParquet.get(i).deepCopy();
-            assertEquals(c.remove("line").asLong(), p.remove("row").asLong() + 2);
-            assertEquals(fixture("site.parquet"), p.remove("file").asText());
+            Map<Object, Object> c = new java.util.LinkedHashMap<>((Map<?, ?>) worstCsv.get(i));
+            Map<Object, Object> p = new java.util.LinkedHashMap<>((Map<?, ?>) worstParquet.get(i));
+            assertEquals(((Number) c.remove("line")).longValue(), ((Number) p.remove("row")).longValue() + 2);
+            assertEquals(fixture("site.parquet"), p.remove("file"));
             assertEquals(c, p);
         }
     }

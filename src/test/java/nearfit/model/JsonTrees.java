@@ -5,8 +5,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
-import com.fasterxml.jackson.databind.JsonNode;
-
 /**
  * JSON documents as plain, mutable Java values for tests that read outputs or edit manifests:
  * objects as {@link LinkedHashMap} (key order kept), arrays as {@link List}, every number as a
@@ -16,7 +14,7 @@ public final class JsonTrees {
     private JsonTrees() {
     }
 
-    /** Parses one document strictly (see {@link JsonText#parse}). */
+    /** Parses one document strictly (see {@link JsonText#parse}); numbers as Double. */
     public static Object parse(String text) {
         return plain(JsonText.parse(text));
     }
@@ -26,22 +24,18 @@ public final class JsonTrees {
         return JsonText.write(value);
     }
 
-    private static Object plain(JsonNode node) {
-        if (node.isObject()) {
+    private static Object plain(Object node) {
+        if (node instanceof Map<?, ?> object) {
             Map<String, Object> map = new LinkedHashMap<>();
-            node.fields().forEachRemaining(e -> map.put(e.getKey(), plain(e.getValue())));
+            object.forEach((k, v) -> map.put((String) k, plain(v)));
             return map;
-        } else if (node.isArray()) {
+        } else if (node instanceof List<?> array) {
             List<Object> list = new ArrayList<>();
-            node.forEach(e -> list.add(plain(e)));
+            array.forEach(e -> list.add(plain(e)));
             return list;
-        } else if (node.isNumber()) {
-            return node.doubleValue();
-        } else if (node.isTextual()) {
-            return node.textValue();
-        } else if (node.isBoolean()) {
-            return node.booleanValue();
+        } else if (node instanceof java.math.BigDecimal number) {
+            return Double.parseDouble(number.toString());
         }
-        return null;
+        return node;
     }
 }
