@@ -10,6 +10,7 @@ import java.util.Map;
 
 import nearfit.knn.ReferenceReach;
 import nearfit.model.JsonText;
+import nearfit.model.TuningSummary;
 import nearfit.table.VisibleText;
 
 /**
@@ -27,7 +28,7 @@ import nearfit.table.VisibleText;
  * @param groups    per-group counts in dictionary order, empty without a group column
  * @param worst     the rows of largest |z|, largest first
  */
-record CheckReport(About about, long rows, long scored, long flagged, double limit, double threshold,
+public record CheckReport(About about, long rows, long scored, long flagged, double limit, double threshold,
                    Beyond beyond, List<GroupCount> groups, List<WorstRow> worst) {
 
     /**
@@ -53,14 +54,14 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
      * @param group          the group column, or {@code null}
      * @param timeColumn     the data file's time column shown beside each row, or {@code null}
      */
-    record About(String modelFile, String modelSha256, String dataFile, String rowCondition, int k, String metric,
+    public record About(String modelFile, String modelSha256, String dataFile, String rowCondition, int k, String metric,
                  String weights, String scaling, String band, String scheme, String zScale, double residualMedian,
                  double residualScale, String toolVersion, Instant ranAt, List<String> inputs, String response,
                  String group, String timeColumn) {
     }
 
     /** Counts for one group; {@code beyond} of its scored rows lie beyond the reference. */
-    record GroupCount(String group, long rows, long scored, long flagged, long beyond) {
+    public record GroupCount(String group, long rows, long scored, long flagged, long beyond) {
         double share() {
             return scored == 0 ? 0.0 : (double) flagged / scored;
         }
@@ -73,9 +74,11 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
     /**
      * One of the worst rows, with what traces it: line, time (epoch ms, NaN without a time column or when
      * missing), group, the inputs' values (times in epoch ms), then response, fit, band, residual and z.
+     * {@code source} is {@code null} for a row of the one data file, {@code line} its line; a fleet job
+     * names the row's file there, and {@code line} is then the row's index in that file (0 for its first row).
      */
-    record WorstRow(long line, double time, String group, double[] inputs, double response, double fit,
-                    double bandLow, double bandHigh, double z, boolean beyond) {
+    public record WorstRow(long line, double time, String group, double[] inputs, double response, double fit,
+                           double bandLow, double bandHigh, double z, boolean beyond, String source) {
         double residual() {
             return response - fit;
         }
@@ -94,7 +97,7 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
      * @param rows          scored rows beyond the reference by any rule
      * @param maxOutside    the allowed share of such rows, a fraction; NaN for no limit
      */
-    record Beyond(double[] min, double[] max, long[] below, long[] above, long far, double farWidth, long rows,
+    public record Beyond(double[] min, double[] max, long[] below, long[] above, long far, double farWidth, long rows,
                   double maxOutside) {
         boolean limited() {
             return !Double.isNaN(maxOutside);
@@ -122,7 +125,7 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
     }
 
     /** Whether the check passed: flags within the limit and rows beyond the reference within theirs. */
-    boolean passed() {
+    public boolean passed() {
         return flagsWithinLimit() && beyondWithinLimit();
     }
 
@@ -236,7 +239,7 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
             }
             return new WorstRow(b.lines()[i], b.times() == null ? Double.NaN : b.times()[i],
                     group < 0 ? null : groupLabels.get(group), inputs, b.response()[i],
-                    b.estimates().fit()[i], b.estimates().bandLow()[i], b.estimates().bandHigh()[i], b.z()[i], out);
+                    b.estimates().fit()[i], b.estimates().bandLow()[i], b.estimates().bandHigh()[i], b.z()[i], out, null);
         }
 
         /** Rows scored so far. */
@@ -289,7 +292,7 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
     }
 
     /** The JSON document of {@code check --format json}. */
-    String toJson() {
+    public String toJson() {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("checked", aboutJson());
         m.put("rows", rows);
@@ -315,7 +318,12 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
         List<Object> worstRows = new ArrayList<>();
         for (WorstRow w : worst) {
             Map<String, Object> one = new LinkedHashMap<>();
-            one.put("line", w.line());
+            if (w.source() == null) {
+                one.put("line", w.line());
+            } else {
+                one.put("file", w.source());
+                one.put("row_index", w.line());
+            }
             if (about.timeColumn() != null) {
                 one.put("time", Double.isNaN(w.time()) ? null : Instant.ofEpochMilli((long) w.time()).toString());
             }
@@ -386,7 +394,7 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
     }
 
     /** The text report: what was checked, the verdict, rows beyond the reference, groups, worst rows, cautions. */
-    void writeText(PrintWriter out) {
+    public void writeText(PrintWriter out) {
         writeHeader(out);
         out.println();
         out.printf(Locale.ROOT, "rows %d, scored %d, flagged %d (%s %%, |z| > %s), limit %s %%: %s%n",
@@ -447,7 +455,8 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
 
     private void writeWorst(PrintWriter out, String groupName) {
         boolean time = about.timeColumn() != null && !about.inputs().contains(about.timeColumn());
-        StringBuilder head = new StringBuilder(String.format(Locale.ROOT, "%10s", "line"));
+        boolean sources = !worst.isEmpty() && worst.get(0).source() != null;
+        StringBuilder head = new StringBuilder(String.format(Locale.ROOT, "%10s", sources ? "row_index" : "line"));
         if (time) {
             head.append(String.format(Locale.ROOT, " %-20s", VisibleText.of(about.timeColumn())));
         }
@@ -474,8 +483,25 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
                     TuneReport.significant(w.bandLow()), TuneReport.significant(w.bandHigh()),
                     TuneReport.significant(w.residual()), String.format(Locale.ROOT, "%.2f", w.z()),
                     w.beyond() ? " *" : ""));
+            if (w.source() != null) {
+                row.append("  ").append(VisibleText.of(w.source()));
+            }
             out.println(row);
         }
+    }
+
+    /** How the model's k was chosen, in words; what the model file records and nothing more. */
+    public static String scheme(TuningSummary tuning) {
+        if (tuning == null) {
+            return "given at fit, not tuned";
+        }
+        if (tuning.scheme() != null) {
+            return "one-SE k by " + tuning.scheme();
+        }
+        if (tuning.sampled() >= 0) {
+            return "one-SE k by leave-one-out on " + tuning.sampled() + " sampled rows";
+        }
+        return "one-SE k by cross-validation; this model file does not record the scheme";
     }
 
     private static String timeText(double ms) {
