@@ -105,7 +105,8 @@ final class FleetRun {
                 scored.write().mode(force ? SaveMode.Overwrite : SaveMode.ErrorIfExists).parquet(outDir);
                 return null;
             });
-        } catch (RuntimeException e) {
+        } catch (Exception e) {
+            // Spark's task failures are checked exceptions Scala throws unchecked: catch them all here.
             try {
                 if (fs.exists(out)) {
                     fs.delete(out, true);
