@@ -13,7 +13,6 @@ import nearfit.model.ModelColumns;
 import nearfit.model.ModelFile;
 import nearfit.model.ReferenceModel;
 import nearfit.model.RestoredModel;
-import nearfit.model.TuningSummary;
 import nearfit.table.CategoryColumn;
 import nearfit.table.NearfitException;
 import nearfit.table.VisibleText;
@@ -146,24 +145,10 @@ final class CheckCommand implements Callable<Integer> {
         String where = model.where == null || model.where.isBlank() ? null : model.where.trim();
         ModelColumns c = stored.columns();
         return new CheckReport.About(modelFile.toString(), modelSha, file, where, restored.settings(),
-                scheme(stored.tuning()), stored.residualScale().median(),
+                CheckReport.scheme(stored.tuning()), stored.residualScale().median(),
                 stored.residualScale().scale(), ToolVersion.get(), Instant.now().truncatedTo(ChronoUnit.SECONDS),
                 c.inputs(), c.response(), scored.group() == null ? null : scored.group().name(),
                 scored.time() == null ? null : scored.time().name(), scored.rowSource());
-    }
-
-    /** How the model's k was chosen, in words; what the model file records and nothing more. */
-    static String scheme(TuningSummary tuning) {
-        if (tuning == null) {
-            return "given at fit, not tuned";
-        }
-        if (tuning.scheme() != null) {
-            return "one-SE k by " + tuning.scheme();
-        }
-        if (tuning.sampled() >= 0) {
-            return "one-SE k by leave-one-out on " + tuning.sampled() + " sampled rows";
-        }
-        return "one-SE k by cross-validation; this model file does not record the scheme";
     }
 
     /**

@@ -12,6 +12,7 @@ import nearfit.knn.KnnSettings;
 import nearfit.knn.ReferenceReach;
 import nearfit.model.JsonText;
 import nearfit.table.RowSource;
+import nearfit.model.TuningSummary;
 import nearfit.table.VisibleText;
 
 /**
@@ -29,7 +30,7 @@ import nearfit.table.VisibleText;
  * @param groups    per-group counts in dictionary order, empty without a group column
  * @param worst     the rows of largest |z|, largest first
  */
-record CheckReport(About about, long rows, long scored, long flagged, double limit, double threshold,
+public record CheckReport(About about, long rows, long scored, long flagged, double limit, double threshold,
                    Beyond beyond, List<GroupCount> groups, List<WorstRow> worst) {
 
     /**
@@ -52,7 +53,7 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
      * @param timeColumn     the data file's time column shown beside each row, or {@code null}
      * @param rowSource      what a worst row's source-row value means (CSV line, or Parquet file and row)
      */
-    record About(String modelFile, String modelSha256, String dataFile, String rowCondition, KnnSettings settings,
+    public record About(String modelFile, String modelSha256, String dataFile, String rowCondition, KnnSettings settings,
                  String scheme, double residualMedian,
                  double residualScale, String toolVersion, Instant ranAt, List<String> inputs, String response,
                  String group, String timeColumn, RowSource rowSource) {
@@ -66,7 +67,7 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
     }
 
     /** Counts for one group; {@code beyond} of its scored rows lie beyond the reference. */
-    record GroupCount(String group, long rows, long scored, long flagged, long beyond) {
+    public record GroupCount(String group, long rows, long scored, long flagged, long beyond) {
         double share() {
             return scored == 0 ? 0.0 : (double) flagged / scored;
         }
@@ -79,9 +80,11 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
     /**
      * One of the worst rows, with what traces it: line, time (epoch ms, NaN without a time column or when
      * missing), group, the inputs' values (times in epoch ms), then response, fit, band, residual and z.
+     * {@code source} is {@code null} for a row of the one data file, {@code line} its line; a fleet job
+     * names the row's file there, and {@code line} is then the row's index in that file (0 for its first row).
      */
-    record WorstRow(long line, double time, String group, double[] inputs, double response, double fit,
-                    double bandLow, double bandHigh, double z, boolean beyond) {
+    public record WorstRow(long line, double time, String group, double[] inputs, double response, double fit,
+                           double bandLow, double bandHigh, double z, boolean beyond, String source) {
         double residual() {
             return response - fit;
         }
@@ -100,7 +103,7 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
      * @param rows          scored rows beyond the reference by any rule
      * @param maxOutside    the allowed share of such rows, a fraction; NaN for no limit
      */
-    record Beyond(double[] min, double[] max, long[] below, long[] above, long far, double farWidth, long rows,
+    public record Beyond(double[] min, double[] max, long[] below, long[] above, long far, double farWidth, long rows,
                   double maxOutside) {
         boolean limited() {
             return !Double.isNaN(maxOutside);
@@ -128,7 +131,7 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
     }
 
     /** Whether the check passed: flags within the limit and rows beyond the reference within theirs. */
-    boolean passed() {
+    public boolean passed() {
         return flagsWithinLimit() && beyondWithinLimit();
     }
 
@@ -242,7 +245,7 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
             }
             return new WorstRow(b.lines()[i], b.times() == null ? Double.NaN : b.times()[i],
                     group < 0 ? null : groupLabels.get(group), inputs, b.response()[i],
-                    b.estimates().fit()[i], b.estimates().bandLow()[i], b.estimates().bandHigh()[i], b.z()[i], out);
+                    b.estimates().fit()[i], b.estimates().bandLow()[i], b.estimates().bandHigh()[i], b.z()[i], out, null);
         }
 
         /** Rows scored so far. */
@@ -295,7 +298,7 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
     }
 
     /** The JSON document of {@code check --format json}. */
-    String toJson() {
+    public String toJson() {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("checked", aboutJson());
         m.put("rows", rows);
@@ -322,7 +325,11 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
         for (WorstRow w : worst) {
             Map<String, Object> one = new LinkedHashMap<>();
             RowSource src = about.rowSource();
-            if (!src.isParquet()) {
+            if (w.source() != null) {
+                // A row a fleet job read: its file and 0-based row index there.
+                one.put("file", w.source());
+                one.put("row", w.line());
+            } else if (!src.isParquet()) {
                 one.put("line", w.line());
             } else {
                 // A Parquet row: its file (the data set's file, or the one file) and 0-based row index.
@@ -400,7 +407,7 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
     }
 
     /** The text report: what was checked, the verdict, rows beyond the reference, groups, worst rows, cautions. */
-    void writeText(PrintWriter out) {
+    public void writeText(PrintWriter out) {
         writeHeader(out);
         out.println();
         out.printf(Locale.ROOT, "rows %d, scored %d, flagged %d (%s %%, |z| > %s), limit %s %%: %s%n",
@@ -463,9 +470,10 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
     private void writeWorst(PrintWriter out, String groupName) {
         boolean time = about.timeColumn() != null && !about.inputs().contains(about.timeColumn());
         RowSource src = about.rowSource();
-        String origin = src.isParquet() && src.files().size() > 1 ? "%-40s" : "%10s";
-        StringBuilder head = new StringBuilder(String.format(Locale.ROOT, origin,
-                src.isParquet() && src.files().size() > 1 ? "file:row" : src.heading()));
+        boolean sources = !worst.isEmpty() && worst.get(0).source() != null;
+        boolean wide = sources || src.isParquet() && src.files().size() > 1;
+        String origin = wide ? "%-40s" : "%10s";
+        StringBuilder head = new StringBuilder(String.format(Locale.ROOT, origin, wide ? "file:row" : src.heading()));
         if (time) {
             head.append(String.format(Locale.ROOT, " %-20s", VisibleText.of(about.timeColumn())));
         }
@@ -477,7 +485,9 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
                 "fit", "band_lo", "band_hi", "resid", "z"));
         out.println(head);
         for (WorstRow w : worst) {
-            StringBuilder row = new StringBuilder(String.format(Locale.ROOT, origin, VisibleText.of(src.label(w.line()))));
+            // A fleet job's row names its own file; the tool's rows go through the table's row source.
+            String place = w.source() != null ? w.source() + ":" + w.line() : src.label(w.line());
+            StringBuilder row = new StringBuilder(String.format(Locale.ROOT, origin, VisibleText.of(place)));
             if (time) {
                 row.append(String.format(Locale.ROOT, " %-20s", timeText(w.time())));
             }
@@ -494,6 +504,20 @@ record CheckReport(About about, long rows, long scored, long flagged, double lim
                     w.beyond() ? " *" : ""));
             out.println(row);
         }
+    }
+
+    /** How the model's k was chosen, in words; what the model file records and nothing more. */
+    public static String scheme(TuningSummary tuning) {
+        if (tuning == null) {
+            return "given at fit, not tuned";
+        }
+        if (tuning.scheme() != null) {
+            return "one-SE k by " + tuning.scheme();
+        }
+        if (tuning.sampled() >= 0) {
+            return "one-SE k by leave-one-out on " + tuning.sampled() + " sampled rows";
+        }
+        return "one-SE k by cross-validation; this model file does not record the scheme";
     }
 
     private static String timeText(double ms) {

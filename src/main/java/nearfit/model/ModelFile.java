@@ -1,6 +1,7 @@
 package nearfit.model;
 
 import java.math.BigDecimal;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.time.format.DateTimeParseException;
@@ -124,6 +125,32 @@ public final class ModelFile {
             throw NearfitException.inFile(name, e.getMessage(), e);
         } catch (NearfitException e) {
             throw e.file() != null ? e : NearfitException.inFile(name, e.detail(), e);
+        }
+    }
+
+    /**
+     * As {@link #read(Path)}, from a model file's bytes (as a fleet job's workers receive them): the ZIP
+     * reader needs random access, so the bytes go to a private temporary file that is removed once read.
+     * Errors name {@code name}, the file the bytes came from.
+     */
+    public static ReferenceModel read(byte[] bytes, String name) {
+        Path copy = null;
+        try {
+            copy = Files.createTempFile("nearfit-model-", ".nfm");
+            Files.write(copy, bytes);
+            return read(copy);
+        } catch (java.io.IOException e) {
+            throw NearfitException.inFile(name, "cannot be copied to a temporary file: " + e.getMessage(), e);
+        } catch (NearfitException e) {
+            throw NearfitException.inFile(name, e.detail(), e);
+        } finally {
+            if (copy != null) {
+                try {
+                    Files.deleteIfExists(copy);
+                } catch (java.io.IOException ignored) {
+                    // a leftover temporary file is harmless; the model was read or its error is on its way
+                }
+            }
         }
     }
 

@@ -99,6 +99,22 @@ public final class RowCondition {
         return names;
     }
 
+    /**
+     * The clauses of a condition as written, checking only its syntax, for a reader that evaluates them
+     * elsewhere (a fleet job translates them to its own column expressions). Fails as {@link #parse} does
+     * on a malformed condition.
+     */
+    public static List<Clause> clausesOf(String text) {
+        ConditionLexer lex = new ConditionLexer(text);
+        List<Clause> clauses = new ArrayList<>();
+        do {
+            String column = lex.name("a column name");
+            Op op = lex.op();
+            clauses.add(new Clause(column, op, lex.value()));
+        } while (lex.and());
+        return clauses;
+    }
+
     /** The clauses in order. */
     public List<Clause> clauses() {
         return clauses;

@@ -161,6 +161,21 @@ class ModelFileTest {
     }
 
     @Test
+    void aModelReadFromItsBytesEqualsTheFileAndErrorsNameTheGivenFile() throws IOException {
+        Path p = saved(sample(true));
+        byte[] b = Files.readAllBytes(p);
+        ReferenceModel fromFile = ModelFile.read(p);
+        ReferenceModel fromBytes = ModelFile.read(b, "lake/spring.nfm");
+        assertEquals(fromFile.columns(), fromBytes.columns());
+        assertEquals(fromFile.settings(), fromBytes.settings());
+        assertArrayEquals(fromFile.rows().response(), fromBytes.rows().response());
+        NearfitException e = assertThrows(NearfitException.class,
+                () -> ModelFile.read(java.util.Arrays.copyOf(b, b.length - 40), "lake/spring.nfm"));
+        assertTrue(e.getMessage().startsWith("lake/spring.nfm: ") && e.getMessage().contains("damaged or truncated"),
+                e.getMessage());
+    }
+
+    @Test
     void aTruncatedFileIsReportedAsTruncatedOrDamaged() throws IOException {
         Path p = saved(sample(false));
         byte[] b = Files.readAllBytes(p);

@@ -75,6 +75,14 @@ class RowConditionTest {
     }
 
     @Test
+    void theClausesAreGivenAsWrittenWithoutATableForAnotherReaderToEvaluate() {
+        assertEquals(java.util.List.of(new RowCondition.Clause("turbine", RowCondition.Op.NE, "T 01"),
+                        new RowCondition.Clause("wind_ms", RowCondition.Op.GE, "3.5")),
+                RowCondition.clausesOf("turbine != 'T 01' and wind_ms >= 3.5"));
+        assertThrows(NearfitException.class, () -> RowCondition.clausesOf("wind_ms ~ 3"));
+    }
+
+    @Test
     void listingTheColumnsNamedChecksTheSyntaxAsParsingDoes() {
         assertEquals("row condition, position 9: expected one of = != < <= > >= in \"wind_ms ~ 3\"",
                 assertThrows(NearfitException.class, () -> RowCondition.columnsNamed("wind_ms ~ 3")).getMessage());

@@ -1,0 +1,237 @@
+package nearfit.spark;
+
+import java.sql.Timestamp;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Iterator;
+import java.util.List;
+import java.util.NoSuchElementException;
+
+import nearfit.knn.Progress;
+import nearfit.knn.ScoredBlock;
+import nearfit.knn.Scoring;
+import org.apache.hadoop.fs.Path;
+import org.apache.spark.api.java.function.MapPartitionsFunction;
+import org.apache.spark.sql.Row;
+import org.apache.spark.sql.RowFactory;
+
+/**
+ * Scores a partition's typed rows ({@link FleetInput}) in blocks through the core's one scoring call
+ * ({@link Scoring#score}), tallies them, and hands on the rows the job writes. Each row's result depends only
+ * on that row, so neither the block size nor the partitioning changes a result.
+ */
+final class BlockScorer implements MapPartitionsFunction<Row, Row> {
+    private static final long serialVersionUID = 1L;
+    /** Rows scored at a time: 64 Ki rows hold a few MB per task (inputs, estimates, z and labels). */
+    static final int BLOCK_ROWS = 1 << 16;
+
+    private final ScoringPlan plan;
+    private final TallyAccumulator accumulator;
+
+    BlockScorer(ScoringPlan plan, TallyAccumulator accumulator) {
+        this.plan = plan;
+        this.accumulator = accumulator;
+    }
+
+    @Override
+    public Iterator<Row> call(Iterator<Row> rows) {
+        return new Scored(rows);
+    }
+
+    /** Pulls a block, scores it, yields its rows to write; adds the tally once, when the partition is done. */
+    private final class Scored implements Iterator<Row> {
+        private final Iterator<Row> in;
+        private final WorkerModel model;
+        private final FleetTally tally;
+        private final int d = plan.inputs();
+        private final int capacity = plan.blockRows();
+        private final String[] files = new String[capacity];
+        private final long[] indexes = new long[capacity];
+        private final double[] times = new double[capacity];
+        private final String[] groups = new String[capacity];
+        private final double[][] x = new double[d][capacity];
+        private final double[] y = new double[capacity];
+        private final List<Row> out = new ArrayList<>();
+        private int next;
+        private boolean done;
+        /** CSV: the file being read and the index of its next row (each CSV file is one partition, read whole). */
+        private String rawFile;
+        private String file;
+        private long counter;
+
+        Scored(Iterator<Row> in) {
+            this.in = in;
+            this.model = WorkerModel.of(plan);
+            this.tally = new FleetTally(d, plan.worstCount());
+        }
+
+        @Override
+        public boolean hasNext() {
+            while (next >= out.size() && !done) {
+                out.clear();
+                next = 0;
+                int n = fill();
+                if (n > 0) {
+                    score(n);
+                }
+                if (!in.hasNext()) {
+                    done = true;
+                    accumulator.add(tally);
+                }
+            }
+            return next < out.size();
+        }
+
+        @Override
+        public Row next() {
+            if (!hasNext()) {
+                throw new NoSuchElementException();
+            }
+            return out.get(next++);
+        }
+
+        private int fill() {
+            int n = 0;
+            while (n < capacity && in.hasNext()) {
+                Row r = in.next();
+                String f = r.getString(FleetInput.FILE);
+                if (!f.equals(rawFile)) {
+                    rawFile = f;
+                    file = plainPath(f);
+                    counter = 0;
+                }
+                long index = r.isNullAt(FleetInput.ROW) ? counter : r.getLong(FleetInput.ROW);
+                counter++;
+                int keep = r.getInt(FleetInput.KEEP);
+                if (keep < 0) {
+                    tally.malformed++;
+                    continue;
+                }
+                if (keep == 0) {
+                    continue;
+                }
+                tally.badCells += r.getInt(FleetInput.BAD);
+                files[n] = file;
+                indexes[n] = index;
+                times[n] = number(r, FleetInput.TIME);
+                groups[n] = r.isNullAt(FleetInput.GROUP) ? null : r.getString(FleetInput.GROUP);
+                for (int j = 0; j < d; j++) {
+                    x[j][n] = number(r, FleetInput.FIRST_INPUT + j);
+                }
+                y[n] = number(r, FleetInput.FIRST_INPUT + d);
+                n++;
+            }
+            return n;
+        }
+
+        private void score(int n) {
+            double[][] xs = new double[d][];
+            for (int j = 0; j < d; j++) {
+                xs[j] = n == capacity ? x[j] : Arrays.copyOf(x[j], n);
+            }
+            double[] ys = plan.hasResponse() ? (n == capacity ? y : Arrays.copyOf(y, n)) : null;
+            ScoredBlock s = Scoring.score(model.engine, xs, ys, model.basis, plan.threshold(), Progress.NONE);
+            double[] width = s.estimates().windowWidth();
+            for (int i = 0; i < n; i++) {
+                boolean out = count(s, width[i], xs, i);
+                ScoringPlan.Emit emit = plan.emit();
+                if (emit == ScoringPlan.Emit.ALL || emit == ScoringPlan.Emit.FLAGGED && s.flagged()[i]) {
+                    this.out.add(row(s, xs, i));
+                    tally.written++;
+                }
+                if (!Double.isNaN(s.z()[i]) && tally.admits(Math.abs(s.z()[i]))) {
+                    double[] inputs = new double[d];
+                    for (int j = 0; j < d; j++) {
+                        inputs[j] = xs[j][i];
+                    }
+                    tally.offer(new FleetTally.Worst(files[i], indexes[i], times[i], groups[i], inputs, y[i],
+                            s.fit()[i], s.bandLow()[i], s.bandHigh()[i], s.z()[i], out));
+                }
+            }
+        }
+
+        /** Counts row i as the single-machine check does; whether it lies beyond the reference. */
+        private boolean count(ScoredBlock s, double windowWidth, double[][] xs, int i) {
+            tally.rows++;
+            long[] g = groups[i] == null ? null : tally.group(groups[i]);
+            if (g != null) {
+                g[0]++;
+            }
+            if (Double.isNaN(s.z()[i])) {
+                for (int j = 0; j < d; j++) {
+                    tally.missing[j] += Double.isNaN(xs[j][i]) ? 1 : 0;
+                }
+                tally.missing[d] += Double.isNaN(y[i]) ? 1 : 0;
+                return false;
+            }
+            tally.scored++;
+            boolean flag = s.flagged()[i];
+            boolean beyond = false;
+            for (int j = 0; j < d; j++) {
+                if (model.reach.below(j, xs[j][i])) {
+                    tally.below[j]++;
+                    beyond = true;
+                } else if (model.reach.above(j, xs[j][i])) {
+                    tally.above[j]++;
+                    beyond = true;
+                }
+            }
+            if (model.reach.far(windowWidth)) {
+                tally.far++;
+                beyond = true;
+            }
+            tally.flagged += flag ? 1 : 0;
+            tally.beyond += beyond ? 1 : 0;
+            if (g != null) {
+                g[1]++;
+                g[2] += flag ? 1 : 0;
+                g[3] += beyond ? 1 : 0;
+            }
+            return beyond;
+        }
+
+        /** An output row: file, row index, [time], [group], inputs, [response], fit, band, [resid, z]. */
+        private Row row(ScoredBlock s, double[][] xs, int i) {
+            List<Object> v = new ArrayList<>(8 + d);
+            v.add(files[i]);
+            v.add(indexes[i]);
+            if (plan.writeTime()) {
+                v.add(Double.isNaN(times[i]) ? null : new Timestamp((long) times[i]));
+            }
+            if (plan.writeGroup()) {
+                v.add(groups[i]);
+            }
+            for (int j = 0; j < d; j++) {
+                v.add(boxed(xs[j][i]));
+            }
+            if (plan.hasResponse()) {
+                v.add(boxed(y[i]));
+            }
+            v.add(boxed(s.fit()[i]));
+            v.add(boxed(s.bandLow()[i]));
+            v.add(boxed(s.bandHigh()[i]));
+            if (plan.hasResponse()) {
+                v.add(boxed(s.residual()[i]));
+                v.add(boxed(s.z()[i]));
+            }
+            return RowFactory.create(v.toArray());
+        }
+    }
+
+    /** A missing number (null) as NaN, as the core takes it. */
+    private static double number(Row r, int i) {
+        return r.isNullAt(i) ? Double.NaN : r.getDouble(i);
+    }
+
+    /** NaN (missing) as null in the output, a cell Parquet marks as absent. */
+    private static Double boxed(double v) {
+        return Double.isNaN(v) ? null : v;
+    }
+
+    /** A local file's path as a plain path; other file systems' as their URI. */
+    static String plainPath(String uri) {
+        Path p = new Path(uri);
+        String scheme = p.toUri().getScheme();
+        return scheme == null || "file".equals(scheme) ? p.toUri().getPath() : uri;
+    }
+}
