@@ -67,7 +67,12 @@ record ManifestDocument(String toolVersion, String created, SourceFields source,
                         @MayBeAbsent @JsonInclude(NON_NULL) List<Double> errorRate,
                         @MayBeAbsent @JsonInclude(NON_NULL) List<Double> errorRateSe, BigDecimal bestK,
                         BigDecimal oneSeK, @MayBeAbsent BigDecimal sampled,
-                        @MayBeAbsent @JsonInclude(NON_NULL) String scheme) {
+                        @MayBeAbsent @JsonInclude(NON_NULL) String scheme,
+                        @MayBeAbsent @JsonInclude(NON_NULL) String cv,
+                        @MayBeAbsent @JsonInclude(NON_NULL) BigDecimal blocks,
+                        @MayBeAbsent @JsonInclude(NON_NULL) String seBasis,
+                        @MayBeAbsent @JsonInclude(NON_NULL) Boolean bestAtEdge,
+                        @MayBeAbsent @JsonInclude(NON_NULL) Boolean oneSeAtEdge) {
     }
 
     /** The doubles as the writer writes them (NaN as null); null for no array. */
