@@ -16,58 +16,6 @@ import org.junit.jupiter.api.Test;
 /** Held-out schemes (folds, groups, spans of time): exact against a brute-force form of the rule, and common practice. */
 class HeldOutTuningTest {
 
-    /** The tie-rule fit of row {@code row} from the rows outside its block, written out from a brute-force list. */
-    static double naiveFitOutside(KnnModel m, int row, int[] blockOf, int k, Weighting w) {
-        int d = m.data().dimensions();
-        int n = m.data().size();
-        double[] q = java.util.Arrays.copyOfRange(m.coords(), row * d, row * d + d);
-        Metric base = m.settings().metric().base();
-        double[] key = new double[n];
-        for (int i = 0; i < n; i++) {
-            key[i] = blockOf[i] == blockOf[row] ? Double.POSITIVE_INFINITY : Metric.key(base, m.coords(), i, q, d);
-        }
-        double[] sorted = key.clone();
-        java.util.Arrays.sort(sorted);
-        double kth = sorted[k - 1];
-        double beyond = Double.NaN;
-        for (double v : sorted) {
-            if (v > kth && v != Double.POSITIVE_INFINITY) {
-                beyond = v;
-                break;
-            }
-        }
-        int closer = 0;
-        int tied = 0;
-        boolean zero = false;
-        for (int i = 0; i < n; i++) {
-            closer += key[i] < kth ? 1 : 0;
-            tied += key[i] == kth ? 1 : 0;
-            zero |= key[i] == 0;
-        }
-        double num = 0;
-        double den = 0;
-        for (int i = 0; i < n; i++) {
-            if (key[i] > kth) {
-                continue;
-            }
-            double share = key[i] < kth ? 1 : (double) (k - closer) / tied;
-            double dist = m.settings().metric().distanceOfKey(key[i]);
-            double wt;
-            if (w == Weighting.UNIFORM) {
-                wt = 1;
-            } else if (w == Weighting.INVERSE) {
-                wt = zero ? (key[i] == 0 ? 1 : 0) : 1 / dist;
-            } else {
-                double h = m.settings().metric().distanceOfKey(beyond);
-                boolean degenerate = Double.isNaN(beyond) || !(h > m.settings().metric().distanceOfKey(kth));
-                wt = degenerate ? 1 : Math.pow(1 - Math.pow(dist / h, 3), 3);
-            }
-            num += share * wt * m.data().response()[i];
-            den += share * wt;
-        }
-        return num / den;
-    }
-
     static long[] times(int n, long step) {
         long[] t = new long[n];
         for (int i = 0; i < n; i++) {
@@ -102,7 +50,7 @@ class HeldOutTuningTest {
             for (int k = 1; k <= kmax; k++) {
                 double ss = 0;
                 for (int i = 0; i < n; i++) {
-                    double e = m.data().response()[i] - naiveFitOutside(m, i, blocks.blockOf(), k, w);
+                    double e = m.data().response()[i] - TuningTest.naiveFitOutside(m, i, blocks.blockOf(), k, w);
                     ss += e * e;
                 }
                 assertEquals(Math.sqrt(ss / n), t.rmse()[k - 1], 1e-9, w + " rmse k=" + k + " blocks " + blocks.count());
