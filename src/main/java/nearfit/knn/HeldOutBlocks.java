@@ -62,7 +62,7 @@ public record HeldOutBlocks(HeldOutScheme scheme, int[] blockOf, int count, int 
                 alone[i] |= groups[i] < 0;
                 g = groups[i];
             }
-            // group code in the low 20 bits would not be enough for 65 536 labels plus spans; keep a pair
+            // one key per (span, group): span * 2^17 + group code (a category holds at most 65 536 labels)
             key[i] = alone[i] ? Long.MAX_VALUE : span * 131_072L + g;
         }
         return numbered(scheme, key, alone);
