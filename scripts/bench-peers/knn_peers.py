@@ -4,6 +4,12 @@ from OMP_NUM_THREADS).
 
   run SIDE DIR REPS N Q LOO_N KMAX   times the in-process cases on the raw little-endian files
                                      KnnBench writes; prints "case seconds" then the check figures.
+  blocked DIR REPS N LOO_N KMAX BLOCK
+                                     scikit-learn GroupKFold over blocks of BLOCK consecutive rows of the
+                                     first LOO_N rows (one fold a block), the fast way: per fold one KDTree
+                                     on the other folds, one query(k=KMAX), cumulative sums; prints its
+                                     median and check figures, then the usual way (cross_val_score with
+                                     KNeighborsRegressor) timed once at k = 10, to be multiplied by KMAX.
   tune SIDE CSV KMAX                 whole process: pandas.read_csv, z scaling, leave-one-out RMSE for
                                      every k in 1..KMAX; prints rows, best_k, rmse_k10.
 
@@ -85,6 +91,40 @@ def run(side, d, reps, n, nq, nl, kmax):
     print("check_query_3d_kdist %.9f" % np.asarray(dist)[:, 9].mean())
 
 
+def blocked_rmse(x, y, groups, kmax):
+    """GroupKFold, one fold per block: per fold a KDTree on the other rows, one query, cumulative sums."""
+    from sklearn.model_selection import GroupKFold
+    from sklearn.neighbors import KDTree
+    nblocks = len(np.unique(groups))
+    se = np.zeros(kmax)
+    for train, test in GroupKFold(n_splits=nblocks).split(x, y, groups):
+        _, ind = KDTree(x[train]).query(x[test], k=kmax)
+        pred = np.cumsum(y[train][ind], axis=1) / np.arange(1, kmax + 1)
+        se += ((y[test][:, None] - pred) ** 2).sum(axis=0)
+    return np.sqrt(se / len(y))
+
+
+def blocked(d, reps, n, nl, kmax, block):
+    from sklearn.model_selection import GroupKFold, cross_val_score
+    from sklearn.neighbors import KNeighborsRegressor
+    x3 = np.fromfile(d + "/x3.bin", dtype="<f8").reshape(n, 3)
+    y = np.fromfile(d + "/y.bin", dtype="<f8")[:nl].copy()
+    x = zscale(x3[:nl], x3[:nl])
+    groups = np.arange(nl) // block
+    t = []
+    for _ in range(reps):
+        t0 = time.perf_counter()
+        r = blocked_rmse(x, y, groups, kmax)
+        t.append(time.perf_counter() - t0)
+    print("blocked_allk_3d %.4f" % sorted(t)[len(t) // 2], flush=True)
+    print("check_blocked_rmse_k10 %.9f" % r[9])
+    print("check_blocked_best_k %d" % (int(np.argmin(r)) + 1))
+    t0 = time.perf_counter()
+    cross_val_score(KNeighborsRegressor(n_neighbors=10, algorithm="kd_tree"), x, y, groups=groups,
+                    cv=GroupKFold(n_splits=len(np.unique(groups))), scoring="neg_mean_squared_error")
+    print("usual_one_k %.4f" % (time.perf_counter() - t0), flush=True)
+
+
 def tune(side, path, kmax):
     import pandas as pd
     build, query = make_side(side)
@@ -96,7 +136,9 @@ def tune(side, path, kmax):
 
 if __name__ == "__main__":
     a = sys.argv
-    if a[1] == "run":
+    if a[1] == "blocked":
+        blocked(a[2], int(a[3]), int(a[4]), int(a[5]), int(a[6]), int(a[7]))
+    elif a[1] == "run":
         run(a[2], a[3], int(a[4]), int(a[5]), int(a[6]), int(a[7]), int(a[8]))
     else:
         tune(a[2], a[3], int(a[4]))

@@ -5,11 +5,12 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
 
-import nearfit.knn.FlagResult;
-import nearfit.knn.Flags;
+import nearfit.knn.HeldOutBlocks;
 import nearfit.knn.KnnModel;
 import nearfit.knn.ReferenceData;
+import nearfit.knn.Tuning;
 import nearfit.knn.TuningTable;
+import nearfit.knn.ZBasis;
 import nearfit.model.ModelFile;
 import nearfit.model.ReferenceCapture;
 import nearfit.model.ReferenceModel;
@@ -60,28 +61,31 @@ final class FitCommand implements Callable<Integer> {
         }
         SafeOutput.checkTarget(output, model.force, inputs);
         PrintWriter err = model.err();
-        ReferenceInput input = ReferenceInput.load(file, columns, model, err);
+        ReferenceInput input = ReferenceInput.load(file, columns, model, err, tuning.timeColumn(),
+                tuning.wantsFirstTime());
         Source source = new Source(input, model.where);
+        HeldOutBlocks blocks = tuning.blocks(source.data, input.source().table(), input.group());
         input = null; // the table goes: at 10M rows it holds more than the fit still needs
-        TuningOptions.Fitted fitted = tuning.fit(source.data, model.settings(1, z), chosenK, err, model.quiet);
+        TuningOptions.Fitted fitted = tuning.fit(source.data, blocks, model.settings(1, z), chosenK, err, model.quiet);
         KnnModel engine = fitted.engine();
         TuningOptions.Result tuned = fitted.tuned();
-        FlagResult loo = null;
+        ZBasis.ReferenceResiduals residual = null;
         if (!source.data.isCategory()) {
-            TerminalProgress progress = TerminalProgress.of(err, "leave-one-out", model.quiet);
-            loo = Flags.leaveOneOut(engine, progress);
+            // the reference residual scale from the held-out scheme's residuals at the fitted k (not leave-one-out's,
+            // which near-copies in time make too small)
+            TerminalProgress progress = TerminalProgress.of(err, "held-out residuals", model.quiet);
+            residual = Tuning.residualScale(engine, blocks, progress);
             progress.done();
         }
         TuningTable table = tuned == null ? null : tuned.table();
-        ReferenceModel saved = ReferenceCapture.capture(ToolVersion.get(), source.info, engine, loo, table,
+        ReferenceModel saved = ReferenceCapture.captureHeldOut(ToolVersion.get(), source.info, engine, residual, table,
                 tuned == null ? -1 : tuned.sampled(), source.responseLabels, source.groupName, source.groupLabels,
                 source.facts);
-        if (tuned != null) {
-            saved = saved.withTuning(saved.tuning().withScheme(tuned.scheme()));
-        }
         ModelFile.write(saved, output, model.force, inputs);
         model.out().printf("fitted k = %d on %s; wrote %s%n", saved.settings().k(),
                 nearfit.table.VisibleText.of(source.described), nearfit.table.VisibleText.of(output.toString()));
+        model.out().printf("held out: %s (%d blocks)%s; scaling fitted once on all reference rows%n",
+                blocks.scheme().describe(), blocks.count(), tuning.cv.auto() ? " (--cv auto)" : "");
         String edge = saved.tuning() == null ? null : TuneReport.edgeNote(saved.tuning());
         if (edge != null) {
             model.err().println("nearfit: " + edge); // about the choice, not the output: beside warnings

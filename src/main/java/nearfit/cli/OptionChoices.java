@@ -137,32 +137,4 @@ final class OptionChoices {
             super(CheckFormat.values(), OptionChoices::word);
         }
     }
-
-    /**
-     * {@code --cv}: {@code loo} (leave-one-out, 0 folds) or a number of folds of at least 2; the
-     * candidates are {@code loo} and a few fold counts.
-     */
-    static final class FoldsWords implements CommandLine.ITypeConverter<Integer>, Iterable<String> {
-        @Override
-        public Integer convert(String text) {
-            String t = text.trim();
-            if (t.equalsIgnoreCase("loo")) {
-                return 0;
-            }
-            try {
-                int folds = Integer.parseInt(t);
-                if (folds >= 2) {
-                    return folds;
-                }
-            } catch (NumberFormatException e) {
-                // Reported below.
-            }
-            throw new CommandLine.TypeConversionException("\"" + text + "\" is not loo or a number of folds of at least 2");
-        }
-
-        @Override
-        public Iterator<String> iterator() {
-            return List.of("loo", "5", "10").iterator();
-        }
-    }
 }

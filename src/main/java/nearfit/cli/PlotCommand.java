@@ -81,9 +81,13 @@ final class PlotCommand implements Callable<Integer> {
         List<Path> inputs = "-".equals(file) ? List.of() : List.of(ArgumentPath.of(file));
         CommandOutput.check(png, model.force, inputs);
         PrintWriter err = model.err();
-        ReferenceInput input = ReferenceInput.load(file, columns, model, err);
-        Scene scene = scene(input, tuning.fit(input.data(),
-                model.settings(1, KnnSettings.DEFAULT_FLAG_THRESHOLD), chosenK, err, model.quiet).engine());
+        boolean auto = chosenK == OptionNumbers.K_AUTO;
+        ReferenceInput input = ReferenceInput.load(file, columns, model, err, auto ? tuning.timeColumn() : null,
+                auto && tuning.wantsFirstTime());
+        nearfit.knn.HeldOutBlocks blocks = auto ? tuning.blocks(input.data(), input.source().table(), input.group())
+                : null;
+        Scene scene = scene(input, tuning.fit(input.data(), blocks, model.settings(1,
+                KnnSettings.DEFAULT_FLAG_THRESHOLD), chosenK, err, model.quiet).engine());
         if (png != null) {
             byte[] picture = pngBytes(scene, dims);
             CommandOutput.bytes(png, model.force, inputs, model.out(), out -> out.write(picture));

@@ -22,11 +22,24 @@ import nearfit.table.RowSet;
 record ReferenceInput(SourceTable source, ReferenceData data, List<String> responseLabels, CategoryColumn group) {
     /** Loads the file and builds the reference rows for the command's options. */
     static ReferenceInput load(String file, ColumnOptions columns, ModelOptions model, PrintWriter err) {
+        return load(file, columns, model, err, null, false);
+    }
+
+    /**
+     * As {@link #load(String, ColumnOptions, ModelOptions, PrintWriter)}, also keeping the time column a held-out
+     * scheme needs: {@code timeColumn} (the {@code --time} column, or null) or, with {@code firstTime}, the
+     * file's first time column.
+     */
+    static ReferenceInput load(String file, ColumnOptions columns, ModelOptions model, PrintWriter err,
+                               String timeColumn, boolean firstTime) {
         List<String> inputs = columns.inputs();
         model.validate();
         ColumnRequest request = ColumnRequest.NONE.require("-x", inputs).require("-y", columns.response())
                 .require("--group", model.group).where(model.where);
-        SourceTable source = SourceTable.load(file, request, model.threads(), model.quiet, err);
+        if (timeColumn != null) {
+            request = request.require("--time", timeColumn);
+        }
+        SourceTable source = SourceTable.load(file, request, firstTime, model.threads(), model.quiet, err);
         RowSet rows = source.rows(model.where);
         double[][] x = new double[inputs.size()][];
         for (int j = 0; j < x.length; j++) {

@@ -3,6 +3,7 @@ package nearfit.cli;
 import java.io.PrintWriter;
 import java.util.concurrent.Callable;
 
+import nearfit.knn.HeldOutBlocks;
 import nearfit.knn.KnnModel;
 import nearfit.knn.KnnSettings;
 import nearfit.model.ReferenceCapture;
@@ -38,9 +39,12 @@ final class TuneCommand implements Callable<Integer> {
     public Integer call() {
         tuning.validate();
         PrintWriter err = model.err();
-        ReferenceInput input = ReferenceInput.load(file, columns, model, err);
+        ReferenceInput input = ReferenceInput.load(file, columns, model, err, tuning.timeColumn(),
+                tuning.wantsFirstTime());
+        HeldOutBlocks blocks = tuning.blocks(input.data(), input.source().table(), input.group());
         KnnModel engine = KnnModel.fit(input.data(), model.settings(1, KnnSettings.DEFAULT_FLAG_THRESHOLD));
-        TuningOptions.Result r = tuning.run(engine, TerminalProgress.of(err, "tuning", model.quiet));
+        TuningOptions.Result r = tuning.run(engine, blocks, tuning.largestK(),
+                TerminalProgress.of(err, "tuning", model.quiet));
         TuningSummary summary = ReferenceCapture.summary(r.table(), r.sampled());
         TuneReport.write(summary, format, model.out());
         return 0;

@@ -67,12 +67,31 @@ final class TuneReport {
             out.println(line + mark);
         }
         out.printf(Locale.ROOT, "rows %d%s; lowest %s at k = %d; one-SE k = %d%n", t.rows(),
-                t.sampled() < 0 ? "" : " (leave-one-out on a sample of " + t.sampled() + ")",
+                t.sampled() < 0 ? "" : " (" + t.sampled() + " sampled rows evaluated)",
                 t.forCategories() ? "error rate" : "RMSE", t.bestK(), t.oneSeK());
+        String held = heldOutLine(t);
+        if (held != null) {
+            out.println(held);
+        }
         String edge = edgeNote(t);
         if (edge != null) {
             out.println(edge);
         }
+    }
+
+    /**
+     * How rows were held out, with the blocks, the rows evaluated and the SE basis, and that the scaling was fitted
+     * once on all reference rows; null when the table does not record it.
+     */
+    static String heldOutLine(TuningSummary t) {
+        if (t.seBasis() == null) {
+            return null;
+        }
+        long evaluated = t.sampled() < 0 ? t.rows() : t.sampled();
+        String rule = "blocks".equals(t.seBasis()) ? " (one-SE k: each k against the best on the same blocks)" : "";
+        return String.format(Locale.ROOT, "held out: %s (--cv %s); %d blocks, %d rows evaluated; SEs over %s%s; "
+                + "scaling fitted once on all reference rows", t.scheme(), t.cv(), t.blocks(), evaluated, t.seBasis(),
+                rule);
     }
 
     /**

@@ -1,74 +1,151 @@
 package nearfit.cli;
 
+import java.io.PrintWriter;
+
+import nearfit.knn.HeldOutBlocks;
+import nearfit.knn.HeldOutScheme;
 import nearfit.knn.KnnModel;
 import nearfit.knn.KnnSettings;
+import nearfit.knn.ReferenceData;
 import nearfit.knn.Tuning;
 import nearfit.knn.TuningTable;
+import nearfit.table.CategoryColumn;
+import nearfit.table.Column;
 import nearfit.table.NearfitException;
+import nearfit.table.Table;
+import nearfit.table.TimeColumn;
 import picocli.CommandLine.Option;
 
-/** How k is tuned: {@code --kmax}, {@code --cv loo|FOLDS}, {@code --sample M} (a picocli mixin). */
+/** How k is tuned: {@code --kmax}, {@code --cv SCHEME}, {@code --time COL}, {@code --sample M} (a picocli mixin). */
 final class TuningOptions {
     /** The largest k tried by default (fewer when the reference has fewer rows). */
     static final int DEFAULT_KMAX = 50;
+    /** {@code fit --k auto} doubles kmax while the one-SE k is the largest k tried, up to this k. */
+    static final int WIDEN_CAP = 800;
 
     @Option(names = "--kmax", paramLabel = "N", converter = OptionNumbers.Count.class, description = "Largest k tried (default: 50, at most rows - 1).")
     Integer kmax;
 
-    @Option(names = "--cv", paramLabel = "loo|FOLDS", defaultValue = "loo",
-            converter = OptionChoices.FoldsWords.class, completionCandidates = OptionChoices.FoldsWords.class,
-            description = "Cross-validation: loo (leave-one-out) or a number of folds (default: loo).")
-    int cv;
+    @Option(names = "--cv", paramLabel = "SCHEME", defaultValue = "auto",
+            converter = HeldOutWords.class, completionCandidates = HeldOutWords.class,
+            description = "Held-out scheme: loo, folds:N (or N), group (one --group value at a time), block:PERIOD "
+                    + "(spans of time such as 1d, 12h, 7d or PT12H, over --time), group+block:PERIOD, or auto: "
+                    + "block:1d when the rows' times span at least 10 days, else loo (default: auto).")
+    HeldOutWords.Choice cv;
+
+    @Option(names = "--time", paramLabel = "COL",
+            description = "Time column for block schemes (default: the file's first time column).")
+    String time;
 
     @Option(names = "--sample", paramLabel = "M", converter = OptionNumbers.Count.class,
-            description = "Leave-one-out on M rows chosen at random (seeded); by default "
-                    + Tuning.DEFAULT_SAMPLE + " rows above " + Tuning.SAMPLE_ABOVE + ".")
+            description = "Evaluate M rows chosen at random (seeded; neighbours from all rows outside the row's "
+                    + "block); by default " + Tuning.DEFAULT_SAMPLE + " rows above " + Tuning.SAMPLE_ABOVE + ".")
     Integer sample;
-
-    /** The folds of k-fold cross-validation, or 0 for leave-one-out. */
-    int folds() {
-        return cv;
-    }
 
     /** Checks the values before any file is read. */
     void validate() {
-        folds();
-        if (sample != null) {
-            if (folds() > 0) {
-                throw new NearfitException("--sample: applies to leave-one-out, not to --cv " + cv);
-            }
+        if (time != null && time.isBlank()) {
+            throw new NearfitException("--time: name a time column");
         }
     }
 
-    /** The tuning table over the model's reference rows, and the rows sampled (or -1). */
-    Result run(KnnModel model, TerminalProgress progress) {
+    /** Whether the load must keep the file's first time column (auto or a block scheme, no --time). */
+    boolean wantsFirstTime() {
+        return time == null && (cv.auto() || cv.scheme().period() != null);
+    }
+
+    /** The --time column name, or null. */
+    String timeColumn() {
+        return time == null ? null : time.trim();
+    }
+
+    /**
+     * The blocks of the scheme over the reference rows: {@code auto} resolved (blocks of a day when the rows'
+     * times span at least ten days, else leave-one-out), groups and times looked up by each row's table id.
+     */
+    HeldOutBlocks blocks(ReferenceData data, Table table, CategoryColumn group) {
+        TimeColumn times = timeColumnOf(table);
+        int n = data.size();
+        int[] ids = data.rowIds();
+        long[] t = null;
+        long min = Long.MAX_VALUE;
+        long max = Long.MIN_VALUE;
+        if (times != null) {
+            t = new long[n];
+            for (int i = 0; i < n; i++) {
+                long v = times.epochMillis(ids[i]);
+                t[i] = v == TimeColumn.MISSING ? HeldOutBlocks.NO_TIME : v;
+                if (v != TimeColumn.MISSING) {
+                    min = Math.min(min, v);
+                    max = Math.max(max, v);
+                }
+            }
+        }
+        HeldOutScheme scheme = cv.auto() ? HeldOutScheme.auto(min <= max, min, max) : cv.scheme();
+        int[] g = null;
+        if (group != null) {
+            g = new int[n];
+            for (int i = 0; i < n; i++) {
+                g[i] = group.code(ids[i]);
+            }
+        }
+        if (scheme.needsGroups() && g == null) {
+            throw new NearfitException("--cv " + scheme.word() + ": name the group column with --group COL");
+        }
+        if (scheme.period() != null && times == null) {
+            throw new NearfitException("--cv " + scheme.word() + ": the file has no time column; name one with --time COL");
+        }
+        return HeldOutBlocks.of(scheme, n, g, t);
+    }
+
+    private TimeColumn timeColumnOf(Table table) {
+        if (time != null) {
+            Column c = table.column(time.trim());
+            if (c instanceof TimeColumn tc) {
+                return tc;
+            }
+            throw new NearfitException("--time: column " + time.trim() + " is " + c.type().toString().toLowerCase(
+                    java.util.Locale.ROOT) + ", not a time");
+        }
+        for (Column c : table.columns()) {
+            if (c instanceof TimeColumn tc) {
+                return tc;
+            }
+        }
+        return null;
+    }
+
+    /** The tuning table over the model's reference rows under the blocks' scheme. */
+    Result run(KnnModel model, HeldOutBlocks blocks, int largestK, TerminalProgress progress) {
         int n = model.data().size();
         if (n < 2) {
             throw new NearfitException("tuning needs at least 2 reference rows, not " + n);
         }
-        int max = Math.min(kmax == null ? DEFAULT_KMAX : kmax, n - 1);
-        int folds = folds();
-        TuningTable t;
-        if (folds > 0) {
-            t = Tuning.kFold(model, max, folds, Tuning.DEFAULT_SEED, progress);
-        } else if (sample != null) {
-            int m = sample;
-            t = Tuning.leaveOneOut(model, max, m, Tuning.DEFAULT_SEED, progress);
-        } else {
-            t = Tuning.leaveOneOut(model, max, progress);
+        boolean loo = blocks.scheme() instanceof HeldOutScheme.LeaveOneOut;
+        int usable = n - (loo ? 1 : blocks.largest());
+        if (usable < 1) {
+            throw new NearfitException("--cv " + blocks.scheme().word() + ": one block holds all " + n
+                    + " reference rows, so no row can be predicted from the others");
         }
+        int max = Math.min(largestK, usable);
+        TuningTable t = Tuning.heldOut(model, max, blocks, sample == null ? -1 : sample, Tuning.DEFAULT_SEED, progress);
         progress.done();
         long sampled = t.evaluatedRows() < t.referenceRows() ? t.evaluatedRows() : -1;
-        String scheme = folds > 0 ? folds + "-fold cross-validation"
-                : sampled >= 0 ? "leave-one-out on " + sampled + " sampled rows" : "leave-one-out";
-        return new Result(t, sampled, scheme);
+        return new Result(t, sampled, t.method(), usable);
+    }
+
+    /** The largest k asked for: --kmax or {@link #DEFAULT_KMAX}. */
+    int largestK() {
+        return kmax == null ? DEFAULT_KMAX : kmax;
     }
 
     /**
      * Fits the engine with the given k, or with {@code k = auto} ({@link OptionNumbers#K_AUTO}) tunes
-     * and refits with the one-SE k; {@code given} carries every other setting and the thread count.
+     * and refits with the one-SE k; {@code given} carries every other setting and the thread count. While the one-SE k is the
+     * largest k tried and more rows are usable, kmax is doubled (up to {@link #WIDEN_CAP}) and k tuned again;
+     * each widening is said on {@code err}.
      */
-    Fitted fit(nearfit.knn.ReferenceData data, KnnSettings given, int chosenK, java.io.PrintWriter err,
+    Fitted fit(ReferenceData data, HeldOutBlocks blocks, KnnSettings given, int chosenK, PrintWriter err,
                boolean quiet) {
         boolean auto = chosenK == OptionNumbers.K_AUTO;
         KnnSettings settings = given.withK(auto ? 1 : chosenK);
@@ -76,7 +153,15 @@ final class TuningOptions {
         if (!auto) {
             return new Fitted(engine, null);
         }
-        Result tuned = run(engine, TerminalProgress.of(err, "tuning", quiet));
+        int largest = largestK();
+        Result tuned = run(engine, blocks, largest, TerminalProgress.of(err, "tuning", quiet));
+        while (tuned.table().oneSeK() == tuned.table().kmax() && tuned.table().kmax() < tuned.usable()
+                && tuned.table().kmax() < WIDEN_CAP) {
+            int wider = Math.min(WIDEN_CAP, 2 * tuned.table().kmax());
+            err.printf("nearfit: the one-SE k is the largest k tried (%d); tuning again up to k = %d%n",
+                    tuned.table().kmax(), Math.min(wider, tuned.usable()));
+            tuned = run(engine, blocks, wider, TerminalProgress.of(err, "tuning", quiet));
+        }
         return new Fitted(engine.withSettings(settings.withK(tuned.table().oneSeK())), tuned);
     }
 
@@ -84,7 +169,10 @@ final class TuningOptions {
     record Fitted(KnnModel engine, Result tuned) {
     }
 
-    /** A tuning table, the sample size (-1 when every row was evaluated) and how rows were held out. */
-    record Result(TuningTable table, long sampled, String scheme) {
+    /**
+     * A tuning table, the sample size (-1 when every row was evaluated), how rows were held out, and the
+     * largest k the scheme allows (rows outside the largest block).
+     */
+    record Result(TuningTable table, long sampled, String scheme, int usable) {
     }
 }

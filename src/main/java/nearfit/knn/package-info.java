@@ -26,6 +26,8 @@
  * // a category response: model.vote(point) (ClassVote), model.voteAll(columns, progress) (ClassVotes)
  *
  * TuningTable t = Tuning.leaveOneOut(model, 100, progress);   // all k in 1..100, one pass
+ * HeldOutBlocks days = HeldOutBlocks.of(new HeldOutScheme.ByBlock(Duration.ofDays(1)), n, groupCodes, epochMillis);
+ * TuningTable d = Tuning.heldOut(model, 100, days, -1, 1, progress);  // rows predicted from other days only
  * KnnModel tuned = model.withSettings(settings.withK(t.oneSeK()));  // keeps the index
  *
  * FlagResult flags = Flags.leaveOneOut(tuned, progress);      // per row: fit, residual, z, flagged
@@ -76,6 +78,9 @@
  * <li><b>Errors.</b> k above the usable rows, a constant input, a zero MAD under robust scaling and
  *     a singular covariance under Mahalanobis throw {@link nearfit.table.NearfitException} naming
  *     the columns.</li>
+ * <li><b>Held-out schemes.</b> {@link nearfit.knn.Tuning#heldOut} predicts each row from the rows outside
+ *     its block ({@link nearfit.knn.HeldOutScheme}: leave-one-out, folds, groups, spans of time, both); the
+ *     scaling stays the one fitted on all rows; SEs over blocks for groups and spans.</li>
  * <li><b>Tuning size.</b> {@link nearfit.knn.Tuning#leaveOneOut(KnnModel, int, Progress)} samples
  *     100,000 seeded rows above 200,000 reference rows (neighbours still searched among all rows).</li>
  * </ul>

@@ -61,7 +61,12 @@ record ManifestDocument(String toolVersion, String created, SourceFields source,
                         @MayBeAbsent @OmitWhenNull List<Double> errorRate,
                         @MayBeAbsent @OmitWhenNull List<Double> errorRateSe, BigDecimal bestK,
                         BigDecimal oneSeK, @MayBeAbsent BigDecimal sampled,
-                        @MayBeAbsent @OmitWhenNull String scheme) {
+                        @MayBeAbsent @OmitWhenNull String scheme,
+                        @MayBeAbsent @OmitWhenNull String cv,
+                        @MayBeAbsent @OmitWhenNull BigDecimal blocks,
+                        @MayBeAbsent @OmitWhenNull String seBasis,
+                        @MayBeAbsent @OmitWhenNull Boolean bestAtEdge,
+                        @MayBeAbsent @OmitWhenNull Boolean oneSeAtEdge) {
     }
 
     /** The doubles as the writer writes them (NaN as null); null for no array. */
@@ -117,7 +122,7 @@ record ManifestDocument(String toolVersion, String created, SourceFields source,
         }
     }
 
-    /** {@code node} as a value of {@code type}: text, BigDecimal, Double, a list of them, or a record; null stays null. */
+    /** {@code node} as a value of {@code type}: text, BigDecimal, Double, Boolean, a list of them, or a record; null stays null. */
     private static Object bind(Object node, Type type, String path) {
         if (node == null) {
             return null;
@@ -126,6 +131,8 @@ record ManifestDocument(String toolVersion, String created, SourceFields source,
         if (raw == String.class && node instanceof String) {
             return node;
         } else if (raw == BigDecimal.class && node instanceof BigDecimal) {
+            return node;
+        } else if (raw == Boolean.class && node instanceof Boolean) {
             return node;
         } else if (raw == Double.class && node instanceof BigDecimal d) {
             return Double.parseDouble(d.toString()); // the nearest double to the digits written
@@ -159,6 +166,8 @@ record ManifestDocument(String toolVersion, String created, SourceFields source,
     private static String wrongType(Class<?> raw) {
         if (raw == String.class) {
             return "is not text";
+        } else if (raw == Boolean.class) {
+            return "is not true or false";
         } else if (Number.class.isAssignableFrom(raw)) {
             return "is not a number";
         } else if (List.class.isAssignableFrom(raw)) {

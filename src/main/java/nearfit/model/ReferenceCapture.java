@@ -10,6 +10,7 @@ import nearfit.knn.InputTransform;
 import nearfit.knn.KnnModel;
 import nearfit.knn.ReferenceData;
 import nearfit.knn.TuningTable;
+import nearfit.knn.ZBasis;
 
 /**
  * Turns a fitted engine model into the {@link ReferenceModel} a model file stores: the engine's kept
@@ -72,6 +73,20 @@ public final class ReferenceCapture {
     public static ReferenceModel capture(String toolVersion, SourceInfo source, KnnModel engine, FlagResult loo,
                                          TuningTable tuning, long sampled, List<String> responseLabels,
                                          String group, List<String> groupLabels, RowFacts facts) {
+        return captureHeldOut(toolVersion, source, engine,
+                loo == null ? null : new ZBasis.ReferenceResiduals(loo.median(), loo.mad()), tuning, sampled,
+                responseLabels, group, groupLabels, facts);
+    }
+
+    /**
+     * As {@link #capture(String, SourceInfo, KnnModel, FlagResult, TuningTable, long, List, String, List, RowFacts)},
+     * with the residual scale given ({@code Tuning.residualScale} under the held-out scheme; null for a category
+     * response); a tuning table's held-out scheme is recorded with it.
+     */
+    public static ReferenceModel captureHeldOut(String toolVersion, SourceInfo source, KnnModel engine,
+                                                ZBasis.ReferenceResiduals scale, TuningTable tuning, long sampled,
+                                                List<String> responseLabels, String group, List<String> groupLabels,
+                                                RowFacts facts) {
         ReferenceData data = engine.data();
         long[] lines = facts.lines();
         int[] groups = group == null ? null : facts.groups();
@@ -84,15 +99,18 @@ public final class ReferenceCapture {
         ModelColumns columns = new ModelColumns(List.of(data.inputNames()), data.responseName(), responseLabels,
                 group, groupLabels);
         InputTransform t = engine.transform();
-        ReferenceModel.ResidualScale residual = loo == null
+        ReferenceModel.ResidualScale residual = scale == null
                 ? new ReferenceModel.ResidualScale(Double.NaN, Double.NaN)
-                : new ReferenceModel.ResidualScale(loo.median(), loo.mad());
+                : new ReferenceModel.ResidualScale(scale.median(), scale.scale());
         return new ReferenceModel(toolVersion, Instant.now(), source, columns, engine.settings(),
                 t.center(), t.scale(), t.whitening(), residual,
                 tuning == null ? null : summary(tuning, sampled), rows);
     }
 
-    /** The tune command's table of an engine tuning result; k runs from 1 to kmax. */
+    /**
+     * The tune command's table of an engine tuning result, with its held-out scheme (words, {@code --cv}
+     * words, blocks, SE basis); k runs from 1 to kmax.
+     */
     public static TuningSummary summary(TuningTable t, long sampled) {
         int[] k = new int[t.kmax()];
         for (int i = 0; i < k.length; i++) {
@@ -103,6 +121,6 @@ public final class ReferenceCapture {
                 categories ? null : t.rmse(), categories ? null : t.rmseSe(), categories ? null : t.mae(),
                 categories ? null : t.press(), categories ? null : t.predictedR2(),
                 categories ? t.errorRate() : null, categories ? t.errorRateSe() : null,
-                t.bestK(), t.oneSeK(), sampled);
+                t.bestK(), t.oneSeK(), sampled).withHeldOut(t.method(), t.scheme().word(), t.blocks(), t.seBasis());
     }
 }

@@ -16,21 +16,34 @@ import java.util.List;
  * @param k       the candidate k values, ascending
  * @param sampled rows in the leave-one-out sample, or -1 when every row was used
  * @param scheme  how rows were held out, e.g. {@code leave-one-out} or {@code 5-fold cross-validation}; {@code null}
- *                when not recorded (model files written before it was, and the tune command's own table)
+ *                when not recorded (model files written before it was)
+ * @param cv      the scheme as {@code --cv} words ({@code loo}, {@code folds:5}, {@code group}, {@code block:1d},
+ *                {@code group+block:1d}); {@code null} in files written before it was recorded
+ * @param blocks  blocks holding evaluated rows (the evaluated rows under leave-one-out); -1 when not recorded
+ * @param seBasis what the standard errors were taken over, {@code blocks} or {@code rows}; {@code null} when not
+ *                recorded
  */
 public record TuningSummary(long rows, int[] k, double[] rmse, double[] rmseSe, double[] mae,
                             double[] press, double[] r2Pred, double[] errorRate, double[] errorRateSe,
-                            int bestK, int oneSeK, long sampled, String scheme) {
+                            int bestK, int oneSeK, long sampled, String scheme, String cv, long blocks,
+                            String seBasis) {
     /** A table without its held-out scheme recorded. */
     public TuningSummary(long rows, int[] k, double[] rmse, double[] rmseSe, double[] mae, double[] press,
                          double[] r2Pred, double[] errorRate, double[] errorRateSe, int bestK, int oneSeK, long sampled) {
-        this(rows, k, rmse, rmseSe, mae, press, r2Pred, errorRate, errorRateSe, bestK, oneSeK, sampled, null);
+        this(rows, k, rmse, rmseSe, mae, press, r2Pred, errorRate, errorRateSe, bestK, oneSeK, sampled, null, null,
+                -1, null);
     }
 
-    /** This table with its held-out scheme recorded. */
+    /** This table with its held-out scheme recorded in words. */
     public TuningSummary withScheme(String heldOut) {
         return new TuningSummary(rows, k, rmse, rmseSe, mae, press, r2Pred, errorRate, errorRateSe, bestK, oneSeK,
-                sampled, heldOut);
+                sampled, heldOut, cv, blocks, seBasis);
+    }
+
+    /** This table with its scheme's words, blocks and SE basis recorded. */
+    public TuningSummary withHeldOut(String heldOut, String cvWords, long blockCount, String basis) {
+        return new TuningSummary(rows, k, rmse, rmseSe, mae, press, r2Pred, errorRate, errorRateSe, bestK, oneSeK,
+                sampled, heldOut, cvWords, blockCount, basis);
     }
 
     /** Checks that exactly one family of figures is present and every array matches {@code k}. */
@@ -75,7 +88,8 @@ public record TuningSummary(long rows, int[] k, double[] rmse, double[] rmseSe, 
      * The JSON object of the {@code tune --format json} output and of a manifest's {@code tuning}, a
      * record the JSON library writes, keys in this order: rows, k, then rmse, rmse_se, mae, press,
      * r2_pred (or error_rate, error_rate_se), best_k, one_se_k, sampled (null when every row was
-     * used), and scheme when recorded.
+     * used), and scheme when recorded; then, when recorded (tables of this version), cv, blocks, se_basis,
+     * best_at_edge and one_se_at_edge. A file of an older version written again keeps its bytes.
      */
     public Object toJson() {
         List<BigDecimal> ks = new ArrayList<>(k.length);
@@ -86,7 +100,9 @@ public record TuningSummary(long rows, int[] k, double[] rmse, double[] rmseSe, 
                 ManifestDocument.listOf(rmseSe), ManifestDocument.listOf(mae), ManifestDocument.listOf(press),
                 ManifestDocument.listOf(r2Pred), ManifestDocument.listOf(errorRate),
                 ManifestDocument.listOf(errorRateSe), BigDecimal.valueOf(bestK), BigDecimal.valueOf(oneSeK),
-                sampled < 0 ? null : BigDecimal.valueOf(sampled), scheme);
+                sampled < 0 ? null : BigDecimal.valueOf(sampled), scheme, cv,
+                blocks < 0 ? null : BigDecimal.valueOf(blocks), seBasis,
+                seBasis == null ? null : bestAtEdge(), seBasis == null ? null : oneSeAtEdge());
     }
 
     /**
@@ -109,7 +125,9 @@ public record TuningSummary(long rows, int[] k, double[] rmse, double[] rmseSe, 
                     categories ? ManifestValues.doubles(path + ".error_rate_se", t.errorRateSe()) : null,
                     ManifestValues.integer(path + ".best_k", t.bestK(), 1, Integer.MAX_VALUE),
                     ManifestValues.integer(path + ".one_se_k", t.oneSeK(), 1, Integer.MAX_VALUE),
-                    sampled, t.scheme());
+                    sampled, t.scheme(), t.cv(),
+                    t.blocks() == null ? -1 : ManifestValues.whole(path + ".blocks", t.blocks(), 0, Integer.MAX_VALUE),
+                    t.seBasis());
         } catch (IllegalArgumentException e) {
             if (e.getMessage().startsWith("manifest field")) {
                 throw e;

@@ -137,7 +137,12 @@ class BatchCommandsTest {
         assertEquals(0, r.status(), r.toString());
         Map<?, ?> json = (Map<?, ?>) JsonTrees.parse(r.out().strip());
         assertEquals(List.of("rows", "k", "rmse", "rmse_se", "mae", "press", "r2_pred", "best_k", "one_se_k",
-                "sampled"), List.copyOf(json.keySet()));
+                "sampled", "scheme", "cv", "blocks", "se_basis", "best_at_edge", "one_se_at_edge"),
+                List.copyOf(json.keySet()));
+        // the healthy log's times span less than ten days: auto is leave-one-out, SEs over rows
+        assertEquals("loo", json.get("cv"));
+        assertEquals("rows", json.get("se_basis"));
+        assertEquals(900.0, json.get("blocks"));
         assertEquals(900.0, json.get("rows"));
         assertEquals(30, ((List<?>) json.get("k")).size());
         assertEquals(null, json.get("sampled"));
@@ -154,11 +159,13 @@ class BatchCommandsTest {
         assertEquals(0, edge.status(), edge.toString());
         assertTrue(edge.out().contains("note: the lowest RMSE and the one-SE k are at the largest k tried (2); "
                 + "a larger k may do better: try --kmax 4"), edge.out());
+        // fit --k auto widens the range by doubling kmax until the one-SE k lies inside it
         CliRun.Result fit = CliRun.inProcess("fit", healthy.toString(), "-x", "wind_ms", "-y", "power_kw",
                 "--kmax", "2", "-o", dir.resolve("edge.nfm").toString(), "--quiet");
         assertEquals(0, fit.status(), fit.toString());
-        assertTrue(fit.err().contains("nearfit: note: the lowest RMSE and the one-SE k are at the largest k tried (2)"),
+        assertTrue(fit.err().contains("nearfit: the one-SE k is the largest k tried (2); tuning again up to k = 4"),
                 fit.err());
+        assertFalse(fit.err().contains("note: the lowest RMSE and the one-SE k are at"), fit.err());
         // With the default range the note appears exactly when a choice is the largest k tried.
         CliRun.Result table = CliRun.inProcess("tune", healthy.toString(), "-x", "wind_ms", "-y", "power_kw", "--quiet");
         CliRun.Result json = CliRun.inProcess("tune", healthy.toString(), "-x", "wind_ms", "-y", "power_kw",
@@ -166,16 +173,25 @@ class BatchCommandsTest {
         Map<?, ?> j = (Map<?, ?>) JsonTrees.parse(json.out().strip());
         boolean atEdge = (Double) j.get("best_k") == 50 || (Double) j.get("one_se_k") == 50;
         assertEquals(atEdge, table.out().contains("at the largest k tried"), table.out());
+        assertEquals((Double) j.get("one_se_k") == 50, j.get("one_se_at_edge"));
+        assertEquals((Double) j.get("best_k") == 50, j.get("best_at_edge"));
     }
 
     @Test
     void fitWithKAutoTakesTheOneSeKOfTune() {
-        CliRun.Result tune = CliRun.inProcess("tune", healthy.toString(), "-x", "wind_ms", "-y", "power_kw",
-                "--format", "json", "--quiet");
-        long oneSe = Math.round((Double) ((Map<?, ?>) JsonTrees.parse(tune.out().strip())).get("one_se_k"));
         CliRun.Result fit = CliRun.inProcess("fit", healthy.toString(), "-x", "wind_ms", "-y", "power_kw",
                 "-o", dir.resolve("auto.nfm").toString(), "--quiet");
         assertEquals(0, fit.status(), fit.toString());
+        // the range fit tuned over last: 50, or the last widening it reported
+        java.util.regex.Matcher widened = java.util.regex.Pattern.compile("tuning again up to k = (\\d+)")
+                .matcher(fit.err());
+        String kmax = "50";
+        while (widened.find()) {
+            kmax = widened.group(1);
+        }
+        CliRun.Result tune = CliRun.inProcess("tune", healthy.toString(), "-x", "wind_ms", "-y", "power_kw",
+                "--kmax", kmax, "--format", "json", "--quiet");
+        long oneSe = Math.round((Double) ((Map<?, ?>) JsonTrees.parse(tune.out().strip())).get("one_se_k"));
         assertTrue(fit.out().contains("k = " + oneSe + " "), fit.out() + " vs one-SE " + oneSe);
     }
 

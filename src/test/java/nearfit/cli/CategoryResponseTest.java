@@ -55,8 +55,8 @@ class CategoryResponseTest {
                 "--kmax", "9", "--format", "json", "--quiet");
         assertEquals(0, r.status(), r.toString());
         Map<?, ?> json = (Map<?, ?>) JsonTrees.parse(r.out().strip());
-        assertEquals(List.of("rows", "k", "error_rate", "error_rate_se", "best_k", "one_se_k", "sampled"),
-                List.copyOf(json.keySet()));
+        assertEquals(List.of("rows", "k", "error_rate", "error_rate_se", "best_k", "one_se_k", "sampled", "scheme",
+                "cv", "blocks", "se_basis", "best_at_edge", "one_se_at_edge"), List.copyOf(json.keySet()));
         assertTrue((Double) ((List<?>) json.get("error_rate")).get(0) < 0.05, r.out());
     }
 

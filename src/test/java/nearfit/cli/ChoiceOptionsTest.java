@@ -43,8 +43,6 @@ class ChoiceOptionsTest {
     void wordsAreMatchedWithoutCaseOrSurroundingSpaces() throws Exception {
         assertEquals(Band.Q05_Q95, new OptionChoices.BandWords().convert(" Q05-Q95 "));
         assertEquals(Metric.MANHATTAN, new OptionChoices.MetricWords().convert("Manhattan"));
-        assertEquals(0, new OptionChoices.FoldsWords().convert("LOO"));
-        assertEquals(5, new OptionChoices.FoldsWords().convert("5"));
     }
 
     @Test
@@ -66,7 +64,8 @@ class ChoiceOptionsTest {
             "nearfit: Invalid value for option '--format': \"csv\" is not one of table, json",
             "nearfit: Invalid value for option '--format': \"html\" is not one of text, json",
             "nearfit: Invalid value for option '--z-scale': \"global\" is not one of local, reference",
-            "nearfit: Invalid value for option '--cv': \"1\" is not loo or a number of folds of at least 2",
+            "nearfit: Invalid value for option '--cv': \"1\" is not auto, loo, folds:N (N at least 2), group, block:PERIOD "
+                + "or group+block:PERIOD",
             "nearfit: Invalid value for option '--estimate': \"mode\" is not one of mean, median",
         };
         for (int i = 0; i < lines.length; i++) {

@@ -35,13 +35,26 @@ class TuningTest {
 
     /** The tie-rule fit written out directly from a brute-force neighbour list (independent of LocalEstimator). */
     static double naiveFit(KnnModel m, int row, int k, Weighting w) {
+        return naiveFitOutside(m, row, allRows(m.data().size()), k, w); // each row its own block
+    }
+
+    private static int[] allRows(int n) {
+        int[] r = new int[n];
+        for (int i = 0; i < n; i++) {
+            r[i] = i;
+        }
+        return r;
+    }
+
+    /** The tie-rule fit of row {@code row} from the rows outside its block, written out from a brute-force list. */
+    static double naiveFitOutside(KnnModel m, int row, int[] blockOf, int k, Weighting w) {
         int d = m.data().dimensions();
         int n = m.data().size();
         double[] q = java.util.Arrays.copyOfRange(m.coords(), row * d, row * d + d);
         Metric base = m.settings().metric().base();
         double[] key = new double[n];
         for (int i = 0; i < n; i++) {
-            key[i] = i == row ? Double.POSITIVE_INFINITY : Metric.key(base, m.coords(), i, q, d);
+            key[i] = blockOf[i] == blockOf[row] ? Double.POSITIVE_INFINITY : Metric.key(base, m.coords(), i, q, d);
         }
         double[] sorted = key.clone();
         java.util.Arrays.sort(sorted);

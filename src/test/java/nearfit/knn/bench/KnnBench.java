@@ -8,6 +8,8 @@ import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
 import java.util.Arrays;
 import java.util.SplittableRandom;
+import nearfit.knn.HeldOutBlocks;
+import nearfit.knn.HeldOutScheme;
 import nearfit.knn.KnnModel;
 import nearfit.knn.KnnSettings;
 import nearfit.knn.NeighborIndex;
@@ -38,6 +40,8 @@ public final class KnnBench {
         switch (args[0]) {
             case "generate" -> generate(dir, intArg(args, 2, 1_000_000), intArg(args, 3, 200_000));
             case "csv" -> csv(dir, Integer.parseInt(args[2]), Path.of(args[3]));
+            case "blocked" -> blocked(dir, Integer.parseInt(args[2]), Integer.parseInt(args[3]),
+                    Integer.parseInt(args[4]), Integer.parseInt(args[5]));
             default -> run(dir, Integer.parseInt(args[2]), intArg(args, 3, 1_000_000), intArg(args, 4, 200_000),
                     intArg(args, 5, 200_000));
         }
@@ -187,6 +191,46 @@ public final class KnnBench {
             kdist += q.distances()[i * K + K - 1];
         }
         System.out.printf("check_query_3d_kdist %.9f%n", kdist / queryCount);
+    }
+
+    /**
+     * Blocked cross-validation against leave-one-out in the same process: the first {@code looRows} rows of
+     * x3.bin, blocks of {@code block} consecutive rows (by row index, as the peers split them), every k up to
+     * KMAX; prints both medians and the blocked check figures (RMSE at k = 10, best k).
+     */
+    static void blocked(Path dir, int reps, int rows, int looRows, int block) throws Exception {
+        double[] x3 = read(dir.resolve("x3.bin"));
+        double[] y = read(dir.resolve("y.bin"));
+        double[][] c3 = columns(x3, 3, rows);
+        double[][] l3 = new double[3][];
+        for (int j = 0; j < 3; j++) {
+            l3[j] = Arrays.copyOf(c3[j], looRows);
+        }
+        int threads = Runtime.getRuntime().availableProcessors();
+        KnnSettings s = KnnSettings.defaults().withK(K).withScaling(Scaling.Z).withThreads(threads);
+        KnnModel m = KnnModel.fit(ReferenceData.numeric(new String[] {"wind_speed", "air_density", "yaw_error"}, l3,
+                "power_kw", Arrays.copyOf(y, looRows), null), s);
+        int[] ids = m.data().rowIds();
+        int[] g = new int[looRows];
+        for (int i = 0; i < looRows; i++) {
+            g[i] = ids[i] / block;
+        }
+        HeldOutBlocks blocks = HeldOutBlocks.of(new HeldOutScheme.ByGroup(), looRows, g, null);
+        for (int round = 0; round < 2; round++) { // alternate the two cases so both see the same load
+            time("loo_allk_3d", reps, () -> Tuning.leaveOneOut(m, KMAX, looRows, 1, Progress.NONE).rmse()[KMAX - 1]);
+            time("blocked_allk_3d", reps,
+                    () -> Tuning.heldOut(m, KMAX, blocks, looRows, 1, Progress.NONE).rmse()[KMAX - 1]);
+        }
+        TuningTable t = Tuning.heldOut(m, KMAX, blocks, looRows, 1, Progress.NONE);
+        int best = 0;
+        for (int k = 1; k < KMAX; k++) {
+            if (t.rmse()[k] < t.rmse()[best]) {
+                best = k;
+            }
+        }
+        System.out.printf("check_blocked_rmse_k10 %.9f%n", t.rmse()[9]);
+        System.out.printf("check_blocked_best_k %d%n", best + 1);
+        System.out.printf("blocks %d%n", t.blocks());
     }
 
     /** The scaled coordinates of the model, packed (through the public transform). */
