@@ -57,8 +57,8 @@ public record CheckReport(About about, long rows, long scored, long flagged, dou
                  String scheme, double residualMedian,
                  double residualScale, String toolVersion, Instant ranAt, List<String> inputs, String response,
                  String group, String timeColumn, RowSource rowSource) {
-        /** Rows of a CSV file, traced by line. */
-        About(String modelFile, String modelSha256, String dataFile, String rowCondition, KnnSettings settings,
+        /** Rows of a CSV file, traced by line (a fleet job traces its rows itself, in {@link WorstRow#source}). */
+        public About(String modelFile, String modelSha256, String dataFile, String rowCondition, KnnSettings settings,
               String scheme, double residualMedian, double residualScale, String toolVersion, Instant ranAt,
               List<String> inputs, String response, String group, String timeColumn) {
             this(modelFile, modelSha256, dataFile, rowCondition, settings, scheme, residualMedian, residualScale,

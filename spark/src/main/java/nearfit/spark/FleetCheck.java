@@ -11,7 +11,7 @@ import java.util.concurrent.Callable;
 import nearfit.cli.CheckReport;
 import nearfit.knn.ReferenceReach;
 import nearfit.model.ModelColumns;
-import nearfit.model.ModelSettings;
+import nearfit.knn.KnnSettings;
 import nearfit.table.NearfitException;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -113,11 +113,11 @@ final class FleetCheck implements Callable<Integer> {
 
     private CheckReport report(FleetRun run, FleetTally t) {
         ModelColumns c = run.stored.columns();
-        ModelSettings s = WorkerModel.withZScale(run.stored.settings(), run.zScale);
+        KnnSettings s = WorkerModel.withZScale(run.stored.settings(), WorkerModel.flagScale(run.zScale));
         String where = options.where == null || options.where.isBlank() ? null : options.where.trim();
         CheckReport.About about = new CheckReport.About(options.modelFile, run.modelSha256,
-                String.join(" ", options.inputs), where, s.k(), s.metric(), s.weights(), s.scaling(), s.band(),
-                CheckReport.scheme(run.stored.tuning()), s.zScale(), run.stored.residualScale().median(),
+                String.join(" ", options.inputs), where, s, CheckReport.scheme(run.stored.tuning()),
+                run.stored.residualScale().median(),
                 run.stored.residualScale().scale(), FleetMain.toolVersion(),
                 Instant.now().truncatedTo(ChronoUnit.SECONDS), c.inputs(), c.response(), run.input.groupColumn,
                 run.input.timeColumn);

@@ -48,7 +48,7 @@ final class FleetOptions {
         if (threshold != null && !(threshold > 0)) {
             throw new nearfit.table.NearfitException("--threshold: must be greater than 0, not " + threshold);
         }
-        if (zScale != null && !nearfit.model.ModelSettings.Z_SCALES.contains(zScale)) {
+        if (zScale != null && WorkerModel.flagScale(zScale) == null) {
             throw new nearfit.table.NearfitException("--z-scale: must be local or reference, not \"" + zScale + "\"");
         }
     }

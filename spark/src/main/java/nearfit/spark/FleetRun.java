@@ -60,7 +60,7 @@ final class FleetRun {
             throw new NearfitException(job + ": needs a model of a number response; " + columns.response()
                     + " is a category (fleet jobs do not vote classes)");
         }
-        String zScale = o.zScale != null ? o.zScale : stored.settings().zScale();
+        String zScale = o.zScale != null ? o.zScale : stored.settings().flagScale().word();
         double threshold = o.threshold != null ? o.threshold : stored.settings().flagThreshold();
         WorkerModel driverModel = WorkerModel.restore(stored, zScale, Runtime.getRuntime().availableProcessors());
         FleetInput input = FleetInput.open(spark, o.inputs, columns, o.group, o.where, needResponse);

@@ -7,7 +7,9 @@ import nearfit.knn.KnnModel;
 import nearfit.knn.ReferenceReach;
 import nearfit.knn.ZBasis;
 import nearfit.model.ModelFile;
-import nearfit.model.ModelSettings;
+import nearfit.knn.ChoiceWord;
+import nearfit.knn.FlagScale;
+import nearfit.knn.KnnSettings;
 import nearfit.model.ReferenceModel;
 import nearfit.model.RestoredModel;
 
@@ -52,15 +54,20 @@ final class WorkerModel {
 
     /** The model with the z scale in effect, on {@code threads} threads. */
     static WorkerModel restore(ReferenceModel stored, String zScale, int threads) {
-        RestoredModel r = RestoredModel.of(stored, withZScale(stored.settings(), zScale), threads);
+        FlagScale flagScale = flagScale(zScale);
+        RestoredModel r = RestoredModel.of(stored, withZScale(stored.settings(), flagScale), threads);
         ReferenceModel.ResidualScale scale = stored.residualScale();
-        ZBasis basis = "local".equals(zScale) ? new ZBasis.LocalSpread()
+        ZBasis basis = flagScale == FlagScale.LOCAL_SD ? new ZBasis.LocalSpread()
                 : new ZBasis.ReferenceResiduals(scale.median(), scale.scale());
         return new WorkerModel(r.engine(), ReferenceReach.of(r.engine()), basis);
     }
 
-    static ModelSettings withZScale(ModelSettings s, String zScale) {
-        return new ModelSettings(s.metric(), s.weights(), s.scaling(), s.k(), s.band(), s.flagThreshold(), zScale,
-                s.estimate());
+    static KnnSettings withZScale(KnnSettings s, FlagScale zScale) {
+        return s.withFlags(s.flagThreshold(), zScale);
+    }
+
+    /** The z scale a word names (local or reference, the words the model file and the tool use), or null. */
+    static FlagScale flagScale(String word) {
+        return word == null ? null : ChoiceWord.find(FlagScale.offered(), word);
     }
 }
