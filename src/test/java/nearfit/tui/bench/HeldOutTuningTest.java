@@ -34,12 +34,12 @@ class HeldOutTuningTest {
     private static final int PER_DAY = 8;
 
     @Test
-    void daysHeldOutGiveTheCoresTableForBlocksOfOneDay(@TempDir Path dir) throws Exception {
+    void daysAndGroupsHeldOutGiveTheCoresTablesForTheirBlocks(@TempDir Path dir) throws Exception {
         int n = DAYS * PER_DAY;
         double[] wind = new double[n];
         double[] power = new double[n];
         long[] millis = new long[n];
-        StringBuilder csv = new StringBuilder("time,wind,power\n");
+        StringBuilder csv = new StringBuilder("time,unit,wind,power\n");
         // File order interleaves the days (row i is on day i mod 4), so a table row is not its day's
         // position. Each day has its own wind range (5 per day, 0.25 between rows) and power 30 above the
         // previous day's, so a row's nearest rows are of its own day unless the day is held out.
@@ -50,7 +50,8 @@ class HeldOutTuningTest {
             wind[i] = 5 * day + hour / 12.0;
             power[i] = 10 * wind[i] + 30 * day;
             millis[i] = start + day * 86_400_000L + hour * 3_600_000L;
-            csv.append(java.time.Instant.ofEpochMilli(millis[i])).append(',').append(wind[i]).append(',')
+            csv.append(java.time.Instant.ofEpochMilli(millis[i])).append(",U").append(i % 3).append(',')
+                    .append(wind[i]).append(',')
                     .append(power[i]).append('\n');
         }
         Path file = Files.writeString(dir.resolve("days.csv"), csv, StandardCharsets.UTF_8);
@@ -89,9 +90,25 @@ class HeldOutTuningTest {
         assertFalse(loo.seOverBlocks());
         assertTrue(loo.rmse()[0] < days.rmse()[0], loo.rmse()[0] + " vs " + days.rmse()[0]);
 
+        // By group: the units U0, U1, U2 (row i is unit i mod 3), codes from the test's own rows.
+        TuningTable byUnit = wb.tune(m, HeldOutChoice.GROUP, "unit", JobControl.NONE);
+        int[] units = new int[n];
+        for (int i = 0; i < n; i++) {
+            units[i] = canonical[i] % 3;
+        }
+        HeldOutBlocks unitBlocks = HeldOutBlocks.of(new HeldOutScheme.ByGroup(), n, units, null);
+        assertEquals(3, unitBlocks.count());
+        TuningTable expectedByUnit = Tuning.heldOut(model, n - unitBlocks.largest(), unitBlocks, -1,
+                Tuning.DEFAULT_SEED, nearfit.knn.Progress.NONE);
+        assertArrayEquals(expectedByUnit.rmse(), byUnit.rmse(), 1e-9);
+        assertArrayEquals(expectedByUnit.rmseSe(), byUnit.rmseSe(), 1e-9);
+        assertEquals(3, byUnit.blocks());
+        assertEquals(new HeldOutScheme.ByGroup(), byUnit.scheme());
+
         // The panel's figures say where k came from.
         TuningFigures figures = TuningCriterion.figures(days);
         assertEquals("k by days held out", figures.scheme().words());
         assertEquals("k by leave-one-out", TuningCriterion.figures(loo).scheme().words());
+        assertEquals("k by group", TuningCriterion.figures(byUnit).scheme().words());
     }
 }
