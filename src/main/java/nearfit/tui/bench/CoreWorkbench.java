@@ -17,6 +17,7 @@ import nearfit.knn.Estimates;
 import nearfit.knn.FlagResult;
 import nearfit.knn.Flags;
 import nearfit.knn.KnnModel;
+import nearfit.knn.HeldOutBlocks;
 import nearfit.knn.Tuning;
 import nearfit.knn.TuningTable;
 import nearfit.plot.CanvasKind;
@@ -35,7 +36,9 @@ import nearfit.table.LoadNotes;
 import nearfit.table.LoadOptions;
 import nearfit.table.NearfitException;
 import nearfit.table.Table;
+import nearfit.table.TimeColumn;
 import nearfit.tui.keys.FitKey;
+import nearfit.tui.results.HeldOutChoice;
 import nearfit.tui.keys.PlotMode;
 import nearfit.tui.results.Cells;
 import nearfit.tui.results.ColumnInfo;
@@ -204,17 +207,53 @@ public final class CoreWorkbench implements Workbench {
     }
 
     @Override
-    public TuningTable tune(FitKey m, JobControl control) {
+    public TuningTable tune(FitKey m, HeldOutChoice choice, String groupColumn, JobControl control) {
         KnnModel model = references.model(m.withK(1), null, -1);
-        int kmax = Math.min(TUNING_KMAX, model.data().size() - 1);
+        HeldOutBlocks blocks = blocks(model, choice, groupColumn);
+        boolean loo = choice == HeldOutChoice.LEAVE_ONE_OUT;
+        int kmax = Math.min(TUNING_KMAX, model.data().size() - (loo ? 1 : blocks.largest()));
         if (kmax < 1) {
-            throw new NearfitException("tuning needs at least two reference rows");
+            throw new NearfitException(loo ? "tuning needs at least two reference rows"
+                    : "tuning " + choice.words() + ": one block holds all " + model.data().size() + " reference rows");
         }
         try {
-            return Tuning.leaveOneOut(model, kmax, JobProgress.progress(control));
+            return Tuning.heldOut(model, kmax, blocks, -1, Tuning.DEFAULT_SEED, JobProgress.progress(control));
         } catch (CancelledException e) {
             throw new CancellationException("tuning superseded");
         }
+    }
+
+    /**
+     * The blocks of a choice over the model's reference rows, with each row's time and group looked up by its
+     * table row (the model's canonical order is not the table's).
+     */
+    private HeldOutBlocks blocks(KnnModel model, HeldOutChoice choice, String groupColumn) {
+        int n = model.data().size();
+        int[] ids = model.data().rowIds();
+        long[] times = null;
+        int[] groups = null;
+        if (choice == HeldOutChoice.DAYS) {
+            if (timeColumn == null) {
+                throw new NearfitException("tuning by days: the file has no time column");
+            }
+            TimeColumn tc = (TimeColumn) table.column(timeColumn);
+            times = new long[n];
+            for (int i = 0; i < n; i++) {
+                long v = tc.epochMillis(ids[i]);
+                times[i] = v == TimeColumn.MISSING ? HeldOutBlocks.NO_TIME : v;
+            }
+        }
+        if (choice == HeldOutChoice.GROUP) {
+            if (groupColumn == null) {
+                throw new NearfitException("tuning by group: choose a group column with g");
+            }
+            CategoryColumn g = (CategoryColumn) table.column(groupColumn);
+            groups = new int[n];
+            for (int i = 0; i < n; i++) {
+                groups[i] = g.code(ids[i]);
+            }
+        }
+        return HeldOutBlocks.of(TuningCriterion.schemeOf(choice), n, groups, times);
     }
 
     @Override

@@ -1,6 +1,8 @@
 package nearfit.tui.bench;
 
+import nearfit.knn.HeldOutScheme;
 import nearfit.knn.TuningTable;
+import nearfit.tui.results.HeldOutChoice;
 import nearfit.tui.results.TuningFigures;
 
 /**
@@ -19,6 +21,23 @@ public final class TuningCriterion {
     public static TuningFigures figures(TuningTable t) {
         boolean category = isCategory(t);
         return new TuningFigures(category ? t.errorRate() : t.rmse(), category ? t.errorRateSe() : t.rmseSe(),
-                t.bestK(), t.oneSeK(), t.evaluatedRows(), t.referenceRows());
+                t.bestK(), t.oneSeK(), t.evaluatedRows(), t.referenceRows(), choiceOf(t.scheme()));
+    }
+
+    /** The explorer's choice a core scheme came from: the table says what ran, whatever was asked for. */
+    static HeldOutChoice choiceOf(HeldOutScheme scheme) {
+        if (scheme instanceof HeldOutScheme.ByBlock) {
+            return HeldOutChoice.DAYS;
+        }
+        return scheme instanceof HeldOutScheme.ByGroup ? HeldOutChoice.GROUP : HeldOutChoice.LEAVE_ONE_OUT;
+    }
+
+    /** The core scheme of a choice: days are UTC calendar days. */
+    static HeldOutScheme schemeOf(HeldOutChoice choice) {
+        return switch (choice) {
+            case LEAVE_ONE_OUT -> new HeldOutScheme.LeaveOneOut();
+            case DAYS -> new HeldOutScheme.ByBlock(java.time.Duration.ofDays(1));
+            case GROUP -> new HeldOutScheme.ByGroup();
+        };
     }
 }

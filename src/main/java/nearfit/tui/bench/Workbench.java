@@ -7,6 +7,7 @@ import java.util.List;
 import nearfit.knn.TuningTable;
 import nearfit.table.LoadNotes;
 import nearfit.tui.keys.FitKey;
+import nearfit.tui.results.HeldOutChoice;
 import nearfit.tui.results.Cells;
 import nearfit.tui.results.ColumnInfo;
 import nearfit.tui.results.CurveRequest;
@@ -55,8 +56,11 @@ public interface Workbench {
     /** The curve along the display input. */
     CurveResult curve(FitKey model, CurveRequest request, JobControl control);
 
-    /** Leave-one-out tuning over the k ladder; does not depend on {@code model.k()}. */
-    TuningTable tune(FitKey model, JobControl control);
+    /**
+     * Tuning over the k ladder with rows held out as {@code choice} says (days: UTC days of the time column;
+     * group: the groups of {@code groupColumn}); does not depend on {@code model.k()}.
+     */
+    TuningTable tune(FitKey model, HeldOutChoice choice, String groupColumn, JobControl control);
 
     /**
      * Leave-one-out residuals at {@code model.k()} over the model's reference rows, and the flagged ones among

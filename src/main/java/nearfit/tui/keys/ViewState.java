@@ -10,6 +10,7 @@ import nearfit.knn.KnnSettings;
 import nearfit.knn.Metric;
 import nearfit.knn.Scaling;
 import nearfit.knn.Weighting;
+import nearfit.tui.results.HeldOutChoice;
 
 /**
  * Everything the explorer shows, as one immutable value: a key press makes a new state
@@ -49,6 +50,7 @@ import nearfit.knn.Weighting;
  * @param warning       whether {@code message} is a warning (drawn in the warning ink) rather than a note
  * @param conditionNarrowsReference whether the row condition also narrows the reference rows the model is
  *                      fitted on; when false it narrows only what is shown (points, flagged rows)
+ * @param heldOut       which rows tuning holds out to choose k
  */
 public record ViewState(String condition, String response, List<String> inputs, String displayInput, int k,
         Metric metric, Weighting weighting, Scaling scaling, Band band, EstimateKind estimate, boolean flagMarks,
@@ -56,7 +58,7 @@ public record ViewState(String condition, String response, List<String> inputs, 
         String groupColumn, int group, boolean compare, int responseClass, double zoomFrom, double zoomTo,
         double crosshair, Map<String, Double> heldQuantile, String heldInput, boolean nearHeldOnly, int markedRow,
         Overlay overlay, Ask ask, int cursor, String typed, ExportKind export, String message, boolean quit,
-        int caretBack, boolean warning, boolean conditionNarrowsReference) {
+        int caretBack, boolean warning, boolean conditionNarrowsReference, HeldOutChoice heldOut) {
 
     /** Copies the collections so that the record stays immutable. */
     public ViewState {
@@ -78,7 +80,7 @@ public record ViewState(String condition, String response, List<String> inputs, 
         return new ViewState("", response, inputs, inputs.get(0), k, Metric.EUCLIDEAN, Weighting.UNIFORM,
                 Scaling.Z, Band.Q10_Q90, estimate, true, PlotMode.RESPONSE, null, -1, false, 0,
                 Double.NaN, Double.NaN, 0.5, held, inputs.size() > 1 ? inputs.get(1) : null, false, -1,
-                Overlay.NONE, Ask.NOTHING, 0, "", null, "", false, 0, false, false);
+                Overlay.NONE, Ask.NOTHING, 0, "", null, "", false, 0, false, false, HeldOutChoice.LEAVE_ONE_OUT);
     }
 
     /**
@@ -102,6 +104,14 @@ public record ViewState(String condition, String response, List<String> inputs, 
     /** The condition that chooses the reference rows: the row condition, or empty for all rows. */
     public String referenceCondition() {
         return conditionNarrowsReference ? condition : "";
+    }
+
+    /**
+     * The held-out choice tuning runs with: the chosen one while it applies, else leave-one-out (a group choice
+     * once the group column is gone).
+     */
+    public HeldOutChoice tuningChoice(boolean hasTime) {
+        return heldOut.appliesWith(hasTime, groupColumn != null) ? heldOut : HeldOutChoice.LEAVE_ONE_OUT;
     }
 
     /** Whether the view shows the whole range of the display input. */
@@ -149,6 +159,7 @@ public record ViewState(String condition, String response, List<String> inputs, 
         private int caretBack;
         private boolean warning;
         private boolean conditionNarrowsReference;
+        private HeldOutChoice heldOut;
 
         private Builder(ViewState s) {
             condition = s.condition;
@@ -184,6 +195,7 @@ public record ViewState(String condition, String response, List<String> inputs, 
             caretBack = s.caretBack;
             warning = s.warning;
             conditionNarrowsReference = s.conditionNarrowsReference;
+            heldOut = s.heldOut;
         }
 
         public Builder condition(String v) { condition = v; return this; }
@@ -220,6 +232,7 @@ public record ViewState(String condition, String response, List<String> inputs, 
         public Builder caretBack(int v) { caretBack = v; return this; }
         public Builder conditionNarrowsReference(boolean v) { conditionNarrowsReference = v; return this; }
         public Builder quit(boolean v) { quit = v; return this; }
+        public Builder heldOut(HeldOutChoice v) { heldOut = v; return this; }
 
         /** Opens a panel with its cursor on the first line. */
         public Builder open(Overlay o, Ask a) {
@@ -239,7 +252,7 @@ public record ViewState(String condition, String response, List<String> inputs, 
             return new ViewState(condition, response, inputs, displayInput, k, metric, weighting, scaling, band,
                     estimate, flagMarks, mode, groupColumn, group, compare, responseClass, zoomFrom, zoomTo, crosshair,
                     heldQuantile, heldInput, nearHeldOnly, markedRow, overlay, ask, cursor, typed, export,
-                    message, quit, caretBack, warning, conditionNarrowsReference);
+                    message, quit, caretBack, warning, conditionNarrowsReference, heldOut);
         }
     }
 }

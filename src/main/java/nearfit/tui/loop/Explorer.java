@@ -20,6 +20,7 @@ import nearfit.tui.bench.Workbench;
 import nearfit.tui.export.Exporter;
 import nearfit.tui.keys.Effect;
 import nearfit.tui.keys.FitKey;
+import nearfit.tui.results.HeldOutChoice;
 import nearfit.tui.keys.KeyContext;
 import nearfit.tui.keys.KeyPress;
 import nearfit.tui.keys.Step;
@@ -70,7 +71,7 @@ public final class Explorer implements AutoCloseable {
     private long generation;
     private CurveKey curveKey;
     /** The settings of the latest tuning job, with k 1: tuning does not depend on k. */
-    private FitKey tuningKey;
+    private TuningKey tuningKey;
     private FlagsKey flagsKey;
     /**
      * The curve key whose job last finished. New tuning or flags wait until the current curve is in, so the
@@ -330,14 +331,16 @@ public final class Explorer implements AutoCloseable {
             jobs.start(Jobs.Kind.FLAGS, generation, c -> workbench.flags(model, group, shown, c),
                     (r, flags) -> r.withFlags(flags, Double.NaN));
         }
-        FitKey anyK = model.withK(1);
-        if (!anyK.equals(tuningKey)) {
-            tuningKey = anyK;
+        HeldOutChoice choice = state.tuningChoice(workbench.timeColumn() != null);
+        String byGroup = choice == HeldOutChoice.GROUP ? state.groupColumn() : null;
+        TuningKey tk = new TuningKey(model.withK(1), choice, byGroup);
+        if (!tk.equals(tuningKey)) {
+            tuningKey = tk;
             generation++;
             results = results.withTuning(null, 0);
             forgetFailureOf(Jobs.Kind.TUNING);
             // The figures are taken from the core's table in the job, so the frame only reads them.
-            jobs.start(Jobs.Kind.TUNING, generation, c -> TuningCriterion.figures(workbench.tune(model, c)),
+            jobs.start(Jobs.Kind.TUNING, generation, c -> TuningCriterion.figures(workbench.tune(model, choice, byGroup, c)),
                     (r, tuning) -> r.withTuning(tuning, Double.NaN));
         }
     }
@@ -440,6 +443,10 @@ public final class Explorer implements AutoCloseable {
     }
 
     /** What a curve job depends on: the model settings and where the curve is evaluated. */
+    /** What a tuning job depends on: the settings with k 1, the held-out choice and its group column. */
+    private record TuningKey(FitKey anyK, HeldOutChoice choice, String groupColumn) {
+    }
+
     private record CurveKey(FitKey model, CurveRequest request) {
     }
 

@@ -44,7 +44,8 @@ final class Header {
         int notes = line.part(n == 0 ? new String[] {""} : new String[] {
             "  (" + n + (n == 1 ? " load note, L)" : " load notes, L)"), "  (" + n + " notes, L)", "  (" + n + " notes)",
             ""});
-        line.part("  |  " + ScreenPainter.tuningState(r));
+        // Where the best and one-SE k come from stays, in shorter words before the reference gives way.
+        int tuning = line.part(ScreenPainter.tuningSpellings(r));
         if (!Double.isNaN(r.flagsProgress())) {
             line.part("  |  flags " + Math.round(100 * r.flagsProgress()) + " %");
         }
@@ -52,7 +53,7 @@ final class Header {
             line.part("  loading " + Math.round(100 * in.loading()) + " %");
         }
         // The condition and whether it narrows the reference are kept longest after k and the job states.
-        line.thenShorten(source).thenShorten(name).thenShorten(notes).thenShorten(notes).thenShorten(reference)
+        line.thenShorten(source).thenShorten(name).thenShorten(tuning).thenShorten(notes).thenShorten(notes).thenShorten(reference)
                 .thenShorten(rows).thenShorten(reference);
         // The condition gives way a whole clause at a time, so a date or a number in it is never cut; the file
         // name, the notes and the row counts go before its first clause does.

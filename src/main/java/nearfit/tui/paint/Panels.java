@@ -140,7 +140,7 @@ final class Panels {
         int w = layout.width() - 4;
         TuningFigures t = r.tuning();
         String title = t == null ? "tuning: " + ScreenPainter.tuningState(r)
-                : "tuning: " + rmseSource(t) + " RMSE against log k (Enter adopts, * lowest, 1 one-SE, Esc)";
+                : "tuning, " + t.scheme().words() + ": " + rmseSource(t) + " RMSE against log k (Enter adopts, * lowest, 1 one-SE, H scheme, Esc)";
         pen.box(2, row, w, h, title);
         if (t == null) {
             return;
@@ -183,7 +183,7 @@ final class Panels {
     /** Where the panel's RMSE comes from, said beside it: a sample's differs from the status line's. */
     private static String rmseSource(TuningFigures t) {
         return t.sampled() ? "sampled (" + Figures.count(t.evaluatedRows()) + " of " + Figures.count(t.referenceRows())
-                + " rows)" : "leave-one-out";
+                + " rows)" : "held-out";
     }
 
     private static void prompt(Pen pen, ScreenRegions layout, ViewState s) {

@@ -125,12 +125,22 @@ public final class ScreenPainter {
         pen.text(0, 1, Header.second(s, in, layout.width(), ascii), Ink.TEXT);
     }
 
+    /** The header's tuning part, full and with the held-out scheme in shorter words. */
+    static String[] tuningSpellings(Results r) {
+        String full = "  |  " + tuningState(r);
+        if (!Double.isNaN(r.tuningProgress()) || r.tuning() == null) {
+            return new String[] {full};
+        }
+        return new String[] {full, "  |  best k " + r.tuning().bestK() + ", one-SE k " + r.tuning().oneSeK() + ", "
+                + r.tuning().scheme().shortWords()};
+    }
+
     static String tuningState(Results r) {
         if (!Double.isNaN(r.tuningProgress())) {
             return "tuning " + Math.round(100 * r.tuningProgress()) + " %";
         }
         if (r.tuning() != null) {
-            return "best k " + r.tuning().bestK() + ", one-SE k " + r.tuning().oneSeK();
+            return "best k " + r.tuning().bestK() + ", one-SE k " + r.tuning().oneSeK() + " (" + r.tuning().scheme().words() + ")";
         }
         return "tuning not run";
     }

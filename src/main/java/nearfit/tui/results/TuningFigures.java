@@ -11,9 +11,10 @@ package nearfit.tui.results;
  * @param oneSeK        the largest k within one standard error of the lowest
  * @param evaluatedRows rows whose leave-one-out error was evaluated (a sample above a size)
  * @param referenceRows reference rows
+ * @param scheme        which rows were held out: where the best and one-SE k come from
  */
 public record TuningFigures(double[] values, double[] se, int bestK, int oneSeK, int evaluatedRows,
-        int referenceRows) {
+        int referenceRows, HeldOutChoice scheme) {
     /** Checks that both columns cover the same k. */
     public TuningFigures {
         if (values.length != se.length) {

@@ -116,7 +116,7 @@ public class ScriptedWorkbench implements Workbench {
     }
 
     @Override
-    public TuningTable tune(FitKey model, JobControl control) {
+    public TuningTable tune(FitKey model, nearfit.tui.results.HeldOutChoice choice, String groupColumn, JobControl control) {
         tuneCalls.incrementAndGet();
         control.progress(0.5);
         // k = 1 to 50: RMSE falls from 9 to 4 at k = 15, rises to 4.4 at k = 30, then jumps above 4.5, so with
@@ -130,7 +130,10 @@ public class ScriptedWorkbench implements Workbench {
             rmse[k - 1] = k <= 15 ? 4 + (15 - k) * (5.0 / 14) : k <= 30 ? 4 + (k - 15) * (0.4 / 15) : 4.6 + (k - 30) * 0.02;
             se[k - 1] = 0.5;
         }
-        return new TuningTable("leave-one-out", 1000, 1000, rmse, se, none, none, none, none, none, none, 15, 30);
+        // The table names the scheme asked for, as the core's does, so the header can say where k came from.
+        nearfit.knn.HeldOutScheme scheme = TuningCriterion.schemeOf(choice);
+        return new TuningTable(scheme.describe(), 1000, 1000, rmse, se, none, none, none, none, none, none, 15, 30,
+                scheme, choice == nearfit.tui.results.HeldOutChoice.LEAVE_ONE_OUT ? 1000 : 5, scheme.seOverBlocks());
     }
 
     @Override

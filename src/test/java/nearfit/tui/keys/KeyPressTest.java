@@ -15,6 +15,7 @@ import com.googlecode.lanterna.input.KeyType;
 import nearfit.tui.bench.JobControl;
 import nearfit.tui.bench.ScriptedWorkbench;
 import nearfit.tui.results.FlaggedRows;
+import nearfit.tui.results.HeldOutChoice;
 import nearfit.tui.results.Results;
 
 class KeyPressTest {
@@ -34,6 +35,39 @@ class KeyPressTest {
     void ctrlCAsksForAnInterrupt() {
         Step step = KeyPress.next(two, new KeyStroke('c', true, false), cx);
         assertInstanceOf(Effect.Interrupt.class, step.effect());
+    }
+
+    @Test
+    void theHeldOutKeyCyclesOnlyThroughTheSchemesThatApply() {
+        KeyContext noTime = new KeyContext(wb.columns(), Results.none(1000), 0, 25, 3, 0, false, 5);
+        // A time column and a group: leave-one-out, days, group, and round again.
+        ViewState s = two.edit().groupColumn("turbine").build();
+        List<HeldOutChoice> seen = new java.util.ArrayList<>();
+        for (int i = 0; i < 4; i++) {
+            Step step = press(s, 'H');
+            s = step.state();
+            seen.add(s.heldOut());
+            assertEquals(s.heldOut().words(), s.message());
+            assertFalse(s.warning());
+        }
+        assertEquals(List.of(HeldOutChoice.DAYS, HeldOutChoice.GROUP, HeldOutChoice.LEAVE_ONE_OUT,
+                HeldOutChoice.DAYS), seen);
+        // A time column, no group: days and leave-one-out only.
+        ViewState t = press(two, 'H').state();
+        assertEquals(HeldOutChoice.DAYS, t.heldOut());
+        assertEquals(HeldOutChoice.LEAVE_ONE_OUT, press(t, 'H').state().heldOut());
+        // A group, no time column: group and leave-one-out only.
+        ViewState g = KeyPress.next(two.edit().groupColumn("turbine").build(), ch('H'), noTime).state();
+        assertEquals(HeldOutChoice.GROUP, g.heldOut());
+        assertEquals(HeldOutChoice.LEAVE_ONE_OUT, KeyPress.next(g, ch('H'), noTime).state().heldOut());
+        // Neither: a warning, and the choice stays leave-one-out.
+        ViewState none = KeyPress.next(two, ch('H'), noTime).state();
+        assertTrue(none.warning(), none.message());
+        assertEquals(HeldOutChoice.LEAVE_ONE_OUT, none.heldOut());
+        // A group choice whose group column is gone runs, and cycles on, as leave-one-out.
+        ViewState gone = g.edit().groupColumn(null).build();
+        assertEquals(HeldOutChoice.LEAVE_ONE_OUT, gone.tuningChoice(true));
+        assertEquals(HeldOutChoice.DAYS, press(gone, 'H').state().heldOut());
     }
 
     @Test

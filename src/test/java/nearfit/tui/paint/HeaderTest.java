@@ -33,7 +33,7 @@ class HeaderTest {
 
     /** Tuning done (best k 15, one-SE k 30) and flags 40 % through. */
     private Results results() {
-        return new Results(null, Double.NaN, TuningCriterion.figures(wb.tune(null, JobControl.NONE)), Double.NaN, null, 0.4, 1_234, "");
+        return new Results(null, Double.NaN, TuningCriterion.figures(wb.tune(null, nearfit.tui.results.HeldOutChoice.LEAVE_ONE_OUT, null, JobControl.NONE)), Double.NaN, null, 0.4, 1_234, "");
     }
 
     @Test
@@ -50,6 +50,24 @@ class HeaderTest {
             assertFalse(one.contains("T0…") || one.contains("7.…"), width + ": " + one);
             assertTrue(one.contains("ref"), width + ": " + one);
         }
+    }
+
+    @Test
+    void theHeaderAndTheTuningPanelSayWhichSchemeTheKComeFrom() throws Exception {
+        try (VirtualScreen v = VirtualScreen.standard(wb)) {
+            assertTrue(v.row(0).contains("best k 15, one-SE k 30 (k by leave-one-out)"), v.row(0));
+            v.type("H");
+            assertTrue(v.row(0).contains("best k 15, one-SE k 30 (k by days held out)"), v.row(0));
+            v.type("t");
+            assertTrue(v.text().contains("tuning, k by days held out: held-out RMSE against log k"), v.text());
+            v.key(KeyType.Escape).type("g").key(KeyType.ArrowDown).key(KeyType.Enter).type("H");
+            assertTrue(v.row(0).contains("(k by group)"), v.row(0));
+        }
+        // In a narrow header the scheme stays, in shorter words, while the file name has gone.
+        Results days = new Results(null, Double.NaN, TuningCriterion.figures(wb.tune(null,
+                nearfit.tui.results.HeldOutChoice.DAYS, null, JobControl.NONE)), Double.NaN, null, 0.4, 1_234, "");
+        String one = Header.first(state, days, frame(), 100, false);
+        assertTrue(one.contains("best k 15, one-SE k 30, days held out") && one.length() <= 100, one);
     }
 
     @Test

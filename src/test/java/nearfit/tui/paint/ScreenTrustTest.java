@@ -147,8 +147,9 @@ class ScreenTrustTest {
     void theTuningPanelAt80ColumnsShowsTheOneSeKAndSaysWhenItsRmseIsFromASample() throws Exception {
         ScriptedWorkbench sampled = new ScriptedWorkbench() {
             @Override
-            public TuningTable tune(FitKey model, JobControl control) {
-                TuningTable t = super.tune(model, control);
+            public TuningTable tune(FitKey model, nearfit.tui.results.HeldOutChoice choice, String groupColumn,
+                    JobControl control) {
+                TuningTable t = super.tune(model, choice, groupColumn, control);
                 return new TuningTable("sampled leave-one-out", 500, 1000, t.rmse(), t.rmseSe(), t.mae(), t.maeSe(),
                         t.press(), t.predictedR2(), t.errorRate(), t.errorRateSe(), t.bestK(), t.oneSeK());
             }
