@@ -71,29 +71,17 @@ final class TuningOptions {
     HeldOutBlocks blocks(ReferenceData data, Table table, CategoryColumn group) {
         TimeColumn times = timeColumnOf(table);
         int n = data.size();
-        int[] ids = data.rowIds();
-        long[] t = null;
+        long[] t = times == null ? null : HeldOutBlocks.timesOf(data, times);
         long min = Long.MAX_VALUE;
         long max = Long.MIN_VALUE;
-        if (times != null) {
-            t = new long[n];
-            for (int i = 0; i < n; i++) {
-                long v = times.epochMillis(ids[i]);
-                t[i] = v == TimeColumn.MISSING ? HeldOutBlocks.NO_TIME : v;
-                if (v != TimeColumn.MISSING) {
-                    min = Math.min(min, v);
-                    max = Math.max(max, v);
-                }
+        for (int i = 0; t != null && i < n; i++) {
+            if (t[i] != HeldOutBlocks.NO_TIME) {
+                min = Math.min(min, t[i]);
+                max = Math.max(max, t[i]);
             }
         }
         HeldOutScheme scheme = cv.auto() ? HeldOutScheme.auto(min <= max, min, max) : cv.scheme();
-        int[] g = null;
-        if (group != null) {
-            g = new int[n];
-            for (int i = 0; i < n; i++) {
-                g[i] = group.code(ids[i]);
-            }
-        }
+        int[] g = group == null ? null : HeldOutBlocks.groupsOf(data, group);
         if (scheme.needsGroups() && g == null) {
             throw new NearfitException("--cv " + scheme.word() + ": name the group column with --group COL");
         }

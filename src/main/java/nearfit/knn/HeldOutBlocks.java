@@ -2,7 +2,9 @@ package nearfit.knn;
 
 import java.util.Arrays;
 
+import nearfit.table.CategoryColumn;
 import nearfit.table.NearfitException;
+import nearfit.table.TimeColumn;
 
 /**
  * A held-out scheme applied to the reference rows: one block id per reference position (canonical
@@ -17,6 +19,32 @@ public record HeldOutBlocks(HeldOutScheme scheme, int[] blockOf, int count, int 
 
     /** Marks a missing time in the {@code times} array of {@link #of}. */
     public static final long NO_TIME = Long.MIN_VALUE;
+
+    /**
+     * Each reference position's time, looked up by its table row (the canonical order is not the table's), as
+     * {@link #of} takes them: epoch milliseconds, {@link #NO_TIME} where the cell is missing.
+     */
+    public static long[] timesOf(ReferenceData data, TimeColumn column) {
+        int n = data.size();
+        int[] ids = data.rowIds();
+        long[] t = new long[n];
+        for (int i = 0; i < n; i++) {
+            long v = column.epochMillis(ids == null ? i : ids[i]);
+            t[i] = v == TimeColumn.MISSING ? NO_TIME : v;
+        }
+        return t;
+    }
+
+    /** Each reference position's group code, looked up by its table row, as {@link #of} takes them. */
+    public static int[] groupsOf(ReferenceData data, CategoryColumn column) {
+        int n = data.size();
+        int[] ids = data.rowIds();
+        int[] g = new int[n];
+        for (int i = 0; i < n; i++) {
+            g[i] = column.code(ids == null ? i : ids[i]);
+        }
+        return g;
+    }
 
     /**
      * Assigns the reference rows to blocks. A row with a missing group or time is a block of its

@@ -228,32 +228,21 @@ public final class CoreWorkbench implements Workbench {
      * table row (the model's canonical order is not the table's).
      */
     private HeldOutBlocks blocks(KnnModel model, HeldOutChoice choice, String groupColumn) {
-        int n = model.data().size();
-        int[] ids = model.data().rowIds();
         long[] times = null;
         int[] groups = null;
         if (choice == HeldOutChoice.DAYS) {
             if (timeColumn == null) {
                 throw new NearfitException("tuning by days: the file has no time column");
             }
-            TimeColumn tc = (TimeColumn) table.column(timeColumn);
-            times = new long[n];
-            for (int i = 0; i < n; i++) {
-                long v = tc.epochMillis(ids[i]);
-                times[i] = v == TimeColumn.MISSING ? HeldOutBlocks.NO_TIME : v;
-            }
+            times = HeldOutBlocks.timesOf(model.data(), (TimeColumn) table.column(timeColumn));
         }
         if (choice == HeldOutChoice.GROUP) {
             if (groupColumn == null) {
                 throw new NearfitException("tuning by group: choose a group column with g");
             }
-            CategoryColumn g = (CategoryColumn) table.column(groupColumn);
-            groups = new int[n];
-            for (int i = 0; i < n; i++) {
-                groups[i] = g.code(ids[i]);
-            }
+            groups = HeldOutBlocks.groupsOf(model.data(), (CategoryColumn) table.column(groupColumn));
         }
-        return HeldOutBlocks.of(TuningCriterion.schemeOf(choice), n, groups, times);
+        return HeldOutBlocks.of(TuningCriterion.schemeOf(choice), model.data().size(), groups, times);
     }
 
     @Override
