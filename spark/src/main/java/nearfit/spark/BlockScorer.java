@@ -3,21 +3,27 @@ package nearfit.spark;
 import java.sql.Timestamp;
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.HashSet;
 import java.util.Iterator;
 import java.util.List;
 import java.util.NoSuchElementException;
+import java.util.Set;
 
+import nearfit.knn.ClassVotes;
+import nearfit.knn.KnnModel;
 import nearfit.knn.Progress;
 import nearfit.knn.ScoredBlock;
 import nearfit.knn.Scoring;
 import org.apache.hadoop.fs.Path;
+import org.apache.spark.TaskContext;
 import org.apache.spark.api.java.function.MapPartitionsFunction;
 import org.apache.spark.sql.Row;
 import org.apache.spark.sql.RowFactory;
 
 /**
  * Scores a partition's typed rows ({@link FleetInput}) in blocks through the core's one scoring call
- * ({@link Scoring#score}), tallies them, and hands on the rows the job writes. Each row's result depends only
+ * ({@link Scoring#score}; for a category response the core's class votes, {@link KnnModel#voteAll}, as the
+ * single-machine predict), tallies them, and hands on the rows the job writes. Each row's result depends only
  * on that row, so neither the block size nor the partitioning changes a result.
  */
 final class BlockScorer implements MapPartitionsFunction<Row, Row> {
@@ -51,6 +57,12 @@ final class BlockScorer implements MapPartitionsFunction<Row, Row> {
         private final String[] groups = new String[capacity];
         private final double[][] x = new double[d][capacity];
         private final double[] y = new double[capacity];
+        /** A category response's label in the file at each row (null missing), or null for a number response. */
+        private final String[] labels = plan.category() ? new String[capacity] : null;
+        private final Set<String> knownLabels;
+        private final int partition;
+        private final int attempt;
+        private int block;
         private final List<Row> out = new ArrayList<>();
         private int next;
         private boolean done;
@@ -63,6 +75,10 @@ final class BlockScorer implements MapPartitionsFunction<Row, Row> {
             this.in = in;
             this.model = WorkerModel.of(plan);
             this.tally = new FleetTally(d, plan.worstCount());
+            this.knownLabels = new HashSet<>(model.classLabels);
+            TaskContext task = TaskContext.get();
+            this.partition = task == null ? 0 : task.partitionId();
+            this.attempt = task == null ? 0 : task.attemptNumber();
         }
 
         @Override
@@ -70,8 +86,11 @@ final class BlockScorer implements MapPartitionsFunction<Row, Row> {
             while (next >= out.size() && !done) {
                 out.clear();
                 next = 0;
+                plan.probe().beforeBlock(partition, attempt, block++);
                 int n = fill();
-                if (n > 0) {
+                if (n > 0 && labels != null) {
+                    vote(n);
+                } else if (n > 0) {
                     score(n);
                 }
                 if (!in.hasNext()) {
@@ -119,16 +138,25 @@ final class BlockScorer implements MapPartitionsFunction<Row, Row> {
                     x[j][n] = number(r, FleetInput.FIRST_INPUT + j);
                 }
                 y[n] = number(r, FleetInput.FIRST_INPUT + d);
+                if (labels != null) {
+                    labels[n] = r.isNullAt(FleetInput.FIRST_INPUT + d + 1) ? null : r.getString(FleetInput.FIRST_INPUT + d + 1);
+                }
                 n++;
             }
             return n;
         }
 
-        private void score(int n) {
+        /** The block's inputs, one array of its n rows per input. */
+        private double[][] inputs(int n) {
             double[][] xs = new double[d][];
             for (int j = 0; j < d; j++) {
                 xs[j] = n == capacity ? x[j] : Arrays.copyOf(x[j], n);
             }
+            return xs;
+        }
+
+        private void score(int n) {
+            double[][] xs = inputs(n);
             double[] ys = plan.hasResponse() ? (n == capacity ? y : Arrays.copyOf(y, n)) : null;
             ScoredBlock s = Scoring.score(model.engine, xs, ys, model.basis, plan.threshold(), Progress.NONE);
             double[] width = s.estimates().windowWidth();
@@ -148,6 +176,42 @@ final class BlockScorer implements MapPartitionsFunction<Row, Row> {
                             s.fit()[i], s.bandLow()[i], s.bandHigh()[i], s.z()[i], out));
                 }
             }
+        }
+
+        /**
+         * A category response: the core's class votes at each row, written as the single-machine predict writes
+         * them (the file's class when the model knows it, the winning class and its vote share); the tally counts
+         * rows and those voted (every input present) over all and per group.
+         */
+        private void vote(int n) {
+            double[][] xs = inputs(n);
+            ClassVotes votes = model.engine.voteAll(xs, Progress.NONE);
+            for (int i = 0; i < n; i++) {
+                tally.rows++;
+                boolean voted = votes.winner()[i] >= 0;
+                tally.scored += voted ? 1 : 0;
+                if (groups[i] != null) {
+                    long[] g = tally.group(groups[i]);
+                    g[0]++;
+                    g[1] += voted ? 1 : 0;
+                }
+                if (plan.emit() == ScoringPlan.Emit.ALL) {
+                    this.out.add(voteRow(votes, xs, i));
+                    tally.written++;
+                }
+            }
+        }
+
+        /** An output row of a category response: file, row index, [time], [group], inputs, [response], class, share. */
+        private Row voteRow(ClassVotes votes, double[][] xs, int i) {
+            List<Object> v = origin(xs, i);
+            if (plan.hasResponse()) {
+                v.add(labels[i] != null && knownLabels.contains(labels[i]) ? labels[i] : null);
+            }
+            int c = votes.winner()[i];
+            v.add(c < 0 ? null : model.classLabels.get(c));
+            v.add(boxed(votes.share()[i]));
+            return RowFactory.create(v.toArray());
         }
 
         /** Counts row i as the single-machine check does; whether it lies beyond the reference. */
@@ -192,6 +256,22 @@ final class BlockScorer implements MapPartitionsFunction<Row, Row> {
 
         /** An output row: file, row index, [time], [group], inputs, [response], fit, band, [resid, z]. */
         private Row row(ScoredBlock s, double[][] xs, int i) {
+            List<Object> v = origin(xs, i);
+            if (plan.hasResponse()) {
+                v.add(boxed(y[i]));
+            }
+            v.add(boxed(s.fit()[i]));
+            v.add(boxed(s.bandLow()[i]));
+            v.add(boxed(s.bandHigh()[i]));
+            if (plan.hasResponse()) {
+                v.add(boxed(s.residual()[i]));
+                v.add(boxed(s.z()[i]));
+            }
+            return RowFactory.create(v.toArray());
+        }
+
+        /** The cells every output row starts with: file, row index, [time], [group], inputs. */
+        private List<Object> origin(double[][] xs, int i) {
             List<Object> v = new ArrayList<>(8 + d);
             v.add(files[i]);
             v.add(indexes[i]);
@@ -204,17 +284,7 @@ final class BlockScorer implements MapPartitionsFunction<Row, Row> {
             for (int j = 0; j < d; j++) {
                 v.add(boxed(xs[j][i]));
             }
-            if (plan.hasResponse()) {
-                v.add(boxed(y[i]));
-            }
-            v.add(boxed(s.fit()[i]));
-            v.add(boxed(s.bandLow()[i]));
-            v.add(boxed(s.bandHigh()[i]));
-            if (plan.hasResponse()) {
-                v.add(boxed(s.residual()[i]));
-                v.add(boxed(s.z()[i]));
-            }
-            return RowFactory.create(v.toArray());
+            return v;
         }
     }
 

@@ -41,7 +41,8 @@ import org.apache.spark.sql.types.TimestampType;
 /**
  * The rows of a job's input files as the scorer takes them, one typed row each: source file, row index (Parquet;
  * counted by the scorer for CSV), whether the row is kept (-1 malformed CSV line, 0 not meeting --where, 1
- * kept), bad cells, time (epoch ms), group label, then the model's inputs and response as doubles.
+ * kept), bad cells, time (epoch ms), group label, then the model's inputs and response as doubles (null for a
+ * category response), and for a category response its label as text, last.
  *
  * <p>Types come from the model, never from inference: every model column is read as a number with
  * {@code try_cast} (a time input as epoch milliseconds), so an unparseable cell is a missing value counted as a
@@ -147,7 +148,8 @@ final class FleetInput {
         }
         select.add(keepCode);
         List<String> numbers = new ArrayList<>(columns.inputs());
-        if (hasResponse) {
+        boolean category = columns.categoryResponse();
+        if (hasResponse && !category) {
             numbers.add(columns.response());
         }
         Column bad = lit(0);
@@ -161,8 +163,11 @@ final class FleetInput {
         select.add(time == null ? lit(null).cast("double") : number(time, raw.schema().apply(time).dataType(), true));
         select.add(group == null ? lit(null).cast("string") : quoted(group).cast("string"));
         select.addAll(values);
-        if (!hasResponse) {
+        if (!hasResponse || category) {
             select.add(lit(null).cast("double"));
+        }
+        if (category) {
+            select.add(hasResponse ? quoted(columns.response()).cast("string") : lit(null).cast("string"));
         }
         Dataset<Row> typed = raw.select(select.toArray(new Column[0]));
         return new FleetInput(typed, format, time, group, hasResponse, files);

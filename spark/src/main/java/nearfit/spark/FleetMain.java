@@ -1,6 +1,7 @@
 package nearfit.spark;
 
 import java.io.PrintWriter;
+import java.util.function.Consumer;
 
 import nearfit.table.NearfitException;
 import picocli.CommandLine;
@@ -39,7 +40,25 @@ public final class FleetMain implements Runnable {
 
     /** Runs a job with its report on {@code out} and messages on {@code err}; the exit status. */
     public static int run(String[] args, PrintWriter out, PrintWriter err) {
-        CommandLine cl = new CommandLine(new FleetMain());
+        return run(args, out, err, options -> { });
+    }
+
+    /**
+     * As {@link #run(String[], PrintWriter, PrintWriter)}, with {@code tweak} applied to the job's options once
+     * picocli has made them: how tests in this package set what is no option (block size, {@link TaskProbe}).
+     */
+    static int run(String[] args, PrintWriter out, PrintWriter err, Consumer<FleetOptions> tweak) {
+        CommandLine.IFactory defaults = CommandLine.defaultFactory();
+        CommandLine cl = new CommandLine(new FleetMain(), new CommandLine.IFactory() {
+            @Override
+            public <K> K create(Class<K> type) throws Exception {
+                K made = defaults.create(type);
+                if (made instanceof FleetOptions o) {
+                    tweak.accept(o);
+                }
+                return made;
+            }
+        });
         cl.setOut(out);
         cl.setErr(err);
         cl.setExecutionExceptionHandler((ex, line, parsed) -> {

@@ -31,7 +31,7 @@ final class FleetOptions {
     String zScale;
 
     @Option(names = "--master", paramLabel = "URL",
-            description = "Spark master (default: spark-submit's, else local[2] on this machine).")
+            description = "Spark master (default: spark-submit's, else local[2,2] on this machine: 2 threads, a failed task tried twice).")
     String master;
 
     @Option(names = "--force", description = "Replace an output folder that exists already.")
@@ -42,6 +42,9 @@ final class FleetOptions {
 
     /** Rows scored at a time in a task; not an option (tests set it to show blocks change nothing). */
     int blockRows = BlockScorer.BLOCK_ROWS;
+
+    /** The tasks' test hook ({@link TaskProbe}); not an option: only tests in this package set it. */
+    TaskProbe probe = TaskProbe.NONE;
 
     /** Checks what picocli has not, before Spark starts. */
     void validate() {

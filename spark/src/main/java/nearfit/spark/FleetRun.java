@@ -2,13 +2,14 @@ package nearfit.spark;
 
 import java.io.IOException;
 import java.io.InputStream;
-import java.util.ArrayList;
 import java.util.List;
 
 import nearfit.model.ModelColumns;
 import nearfit.model.ModelFile;
 import nearfit.model.ReferenceModel;
+import nearfit.model.ResultCsv;
 import nearfit.table.NearfitException;
+import nearfit.table.RowSource;
 import org.apache.hadoop.conf.Configuration;
 import org.apache.hadoop.fs.FileSystem;
 import org.apache.hadoop.fs.Path;
@@ -56,9 +57,10 @@ final class FleetRun {
         byte[] bytes = modelBytes(o.modelFile, conf);
         ReferenceModel stored = ModelFile.read(bytes, o.modelFile);
         ModelColumns columns = stored.columns();
-        if (columns.categoryResponse()) {
+        if (columns.categoryResponse() && emit != ScoringPlan.Emit.ALL) {
+            // The single-machine check's line, word for word (FleetCategoryTest compares them).
             throw new NearfitException(job + ": needs a model of a number response; " + columns.response()
-                    + " is a category (fleet jobs do not vote classes)");
+                    + " is a category (use predict for class votes)");
         }
         String zScale = o.zScale != null ? o.zScale : stored.settings().flagScale().word();
         double threshold = o.threshold != null ? o.threshold : stored.settings().flagThreshold();
@@ -67,15 +69,20 @@ final class FleetRun {
         boolean writeTime = input.timeColumn != null && !columns.inputs().contains(input.timeColumn);
         var broadcast = JavaSparkContext.fromSparkContext(spark.sparkContext()).broadcast(bytes);
         ScoringPlan plan = new ScoringPlan(broadcast, o.modelFile, sha256(bytes), zScale, threshold,
-                columns.inputs().size(), input.hasResponse, writeTime, input.groupColumn != null, emit, o.blockRows,
-                worstCount);
+                columns.inputs().size(), input.hasResponse, columns.categoryResponse(), writeTime,
+                input.groupColumn != null, emit, o.blockRows, worstCount, o.probe);
         return new FleetRun(spark, stored, plan.modelSha256(), zScale, threshold, driverModel, input, plan);
     }
 
     /**
      * Scores every row and writes those the plan keeps to {@code outDir} as Parquet (nowhere when it is
-     * {@code null}); returns the tally. A job that fails removes the output folder it created: Spark's
-     * committer leaves no partial files of failed or retried tasks, and no folder is left half written.
+     * {@code null}); returns the tally.
+     *
+     * <p>The rows go through Spark's committer to a hidden folder beside {@code outDir}
+     * ({@code .NAME.nf-RANDOM.part}, a name Spark and Hadoop readers skip), which is renamed to {@code outDir}
+     * only when the job has succeeded (with {@code force}, after the previous folder is removed). So a task
+     * attempt that fails leaves nothing (the committer drops its files and Spark retries it), a job that fails
+     * leaves no {@code outDir} and a previous one as it was, and a reader never sees a half-written folder.
      */
     FleetTally execute(String outDir, boolean force) {
         TallyAccumulator acc = new TallyAccumulator(plan.inputs(), plan.worstCount());
@@ -89,63 +96,93 @@ final class FleetRun {
             return acc.value();
         }
         Path out = new Path(outDir);
-        boolean existed;
         FileSystem fs;
+        Path staging;
         try {
             fs = out.getFileSystem(spark.sparkContext().hadoopConfiguration());
-            existed = fs.exists(out);
+            out = fs.makeQualified(out);
+            if (fs.exists(out) && !force) {
+                throw NearfitException.inFile(outDir, "exists already; give --force to replace it");
+            }
+            if (out.getParent() == null) {
+                throw NearfitException.inFile(outDir, "is a root folder; name a folder to write");
+            }
+            staging = new Path(out.getParent(), "." + out.getName() + ".nf-"
+                    + java.util.UUID.randomUUID().toString().substring(0, 8) + ".part");
         } catch (IOException e) {
             throw NearfitException.inFile(outDir, "cannot be checked: " + e.getMessage(), e);
         }
-        if (existed && !force) {
-            throw NearfitException.inFile(outDir, "exists already; give --force to replace it");
-        }
         try {
             input.run(spark, () -> {
-                scored.write().mode(force ? SaveMode.Overwrite : SaveMode.ErrorIfExists).parquet(outDir);
+                scored.write().mode(SaveMode.ErrorIfExists).parquet(staging.toString());
                 return null;
             });
         } catch (Exception e) {
             // Spark's task failures are checked exceptions Scala throws unchecked: catch them all here.
-            try {
-                if (fs.exists(out)) {
-                    fs.delete(out, true);
-                }
-            } catch (IOException ignored) {
-                // the job's own error is the one to report
-            }
-            throw e;
+            remove(fs, staging);
+            throw new NearfitException(null, NearfitException.NO_LINE, null, FleetMain.oneLine(e) + " (the job failed; "
+                    + outDir + (force && exists(fs, out) ? " left as it was)" : " not written)"), e);
         }
+        replace(fs, staging, out, outDir, force);
         return acc.value();
     }
 
+    /** Moves the finished output into place, over the previous folder when {@code force}. */
+    private static void replace(FileSystem fs, Path staging, Path out, String outDir, boolean force) {
+        try {
+            if (fs.exists(out)) {
+                if (!force) {
+                    remove(fs, staging);
+                    throw NearfitException.inFile(outDir, "was made by another program while the job ran; "
+                            + "give --force to replace it");
+                }
+                fs.delete(out, true);
+            }
+            if (!fs.rename(staging, out)) {
+                throw new IOException("renaming " + staging + " failed");
+            }
+        } catch (IOException e) {
+            throw NearfitException.inFile(outDir, "cannot be written: " + e.getMessage() + "; the job's output is in "
+                    + staging, e);
+        }
+    }
+
+    /** Deletes a folder if it is there; a failure to is not the error to report. */
+    private static void remove(FileSystem fs, Path p) {
+        try {
+            fs.delete(p, true);
+        } catch (IOException ignored) {
+            // the job's own error is the one to report
+        }
+    }
+
+    private static boolean exists(FileSystem fs, Path p) {
+        try {
+            return fs.exists(p);
+        } catch (IOException e) {
+            return false;
+        }
+    }
+
     /**
-     * The output rows' columns: file, row (as the tool's Parquet output of a data set), [time], [group], inputs,
-     * [response], fit, band, [resid, z].
+     * The output rows' columns, named and ordered as the single-machine predict's ({@link ResultCsv#rowColumns})
+     * with {@code file, row} in place of {@code line} (as the tool's Parquet output of a data set): file, row,
+     * [time], [group], inputs, [response], then fit, band_lo, band_hi, [resid, z], or for a category response
+     * class and share.
      */
     StructType outputSchema() {
         ModelColumns c = stored.columns();
-        StructType s = new StructType().add("file", DataTypes.StringType, false)
-                .add("row", DataTypes.LongType, false);
-        if (plan.writeTime()) {
-            s = s.add(input.timeColumn, DataTypes.TimestampType);
-        }
-        if (plan.writeGroup()) {
-            s = s.add(input.groupColumn, DataTypes.StringType);
-        }
-        for (String name : c.inputs()) {
-            s = s.add(name, DataTypes.DoubleType);
-        }
-        List<String> tail = new ArrayList<>();
-        if (plan.hasResponse()) {
-            tail.add(c.response());
-        }
-        tail.addAll(List.of("fit", "band_lo", "band_hi"));
-        if (plan.hasResponse()) {
-            tail.addAll(List.of("resid", "z"));
-        }
-        for (String name : tail) {
-            s = s.add(name, DataTypes.DoubleType);
+        String time = plan.writeTime() ? input.timeColumn : null;
+        String group = plan.writeGroup() ? input.groupColumn : null;
+        String response = plan.hasResponse() ? c.response() : null;
+        List<String> names = ResultCsv.rowColumns(time, group, c.inputs(), response, plan.category());
+        StructType s = new StructType().add(ResultCsv.FILE, DataTypes.StringType, false)
+                .add(ResultCsv.ROW, DataTypes.LongType, false);
+        for (String name : names.subList(ResultCsv.originColumns(RowSource.CSV_LINES).size(), names.size())) {
+            boolean text = name.equals(group) || name.equals(ResultCsv.CLASS)
+                    || plan.category() && name.equals(response);
+            s = s.add(name, name.equals(time) ? DataTypes.TimestampType
+                    : text ? DataTypes.StringType : DataTypes.DoubleType);
         }
         return s;
     }

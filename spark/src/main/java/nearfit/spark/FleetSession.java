@@ -5,12 +5,13 @@ import org.apache.spark.sql.SparkSession;
 
 /**
  * The Spark session of a job: the one already running in this process (a test's, or spark-submit's), or a new
- * one on {@code --master}, spark-submit's master, or {@code local[2]} (the embedded default: no cluster).
+ * one on {@code --master}, spark-submit's master, or {@code local[2,2]} (the embedded default: no cluster; two
+ * threads, each task tried at most twice).
  * Times are read and written in UTC, as the single-machine tool reads them.
  */
 final class FleetSession {
-    /** The master when none is given anywhere. */
-    static final String DEFAULT_MASTER = "local[2]";
+    /** The master when none is given anywhere: two threads, and a failed task tried once more (as a cluster retries it). */
+    static final String DEFAULT_MASTER = "local[2,2]";
 
     private FleetSession() {
     }

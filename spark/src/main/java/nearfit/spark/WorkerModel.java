@@ -1,5 +1,6 @@
 package nearfit.spark;
 
+import java.util.List;
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
 
@@ -26,11 +27,14 @@ final class WorkerModel {
     final KnnModel engine;
     final ReferenceReach reach;
     final ZBasis basis;
+    /** A category response's class labels (code i is label i), empty for a number response. */
+    final List<String> classLabels;
 
-    private WorkerModel(KnnModel engine, ReferenceReach reach, ZBasis basis) {
+    private WorkerModel(KnnModel engine, ReferenceReach reach, ZBasis basis, List<String> classLabels) {
         this.engine = engine;
         this.reach = reach;
         this.basis = basis;
+        this.classLabels = classLabels;
     }
 
     static WorkerModel of(ScoringPlan plan) {
@@ -59,7 +63,7 @@ final class WorkerModel {
         ReferenceModel.ResidualScale scale = stored.residualScale();
         ZBasis basis = flagScale == FlagScale.LOCAL_SD ? new ZBasis.LocalSpread()
                 : new ZBasis.ReferenceResiduals(scale.median(), scale.scale());
-        return new WorkerModel(r.engine(), ReferenceReach.of(r.engine()), basis);
+        return new WorkerModel(r.engine(), ReferenceReach.of(r.engine()), basis, stored.columns().responseLabels());
     }
 
     static KnnSettings withZScale(KnnSettings s, FlagScale zScale) {

@@ -13,7 +13,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import org.apache.spark.sql.SparkSession;
 
 /**
- * What the fleet tests share: one Spark session in local[2], the demo site log (scripts/test makes it), a model
+ * What the fleet tests share: one Spark session in local[2,2] (two threads, a failed task tried twice), the demo site log (scripts/test makes it), a model
  * fitted on it by the single-machine tool, and runs of both tools in this process.
  */
 final class FleetTestData {
@@ -40,7 +40,7 @@ final class FleetTestData {
     }
 
     static SparkSession spark() {
-        return FleetSession.open("local[2]", "test");
+        return FleetSession.open("local[2,2]", "test");
     }
 
     /**
@@ -70,12 +70,17 @@ final class FleetTestData {
         return new Result(status, out.toString(), err.toString());
     }
 
-    /** A fleet job, in this process, on the shared local[2] session. */
+    /** A fleet job, in this process, on the shared local[2,2] session. */
     static Result fleet(String... args) {
+        return fleetWith(options -> { }, args);
+    }
+
+    /** A fleet job with what is no option set by {@code tweak} (block size, the tasks' {@link TaskProbe}). */
+    static Result fleetWith(java.util.function.Consumer<FleetOptions> tweak, String... args) {
         spark();
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
-        int status = FleetMain.run(args, new PrintWriter(out), new PrintWriter(err));
+        int status = FleetMain.run(args, new PrintWriter(out), new PrintWriter(err), tweak);
         return new Result(status, out.toString(), err.toString());
     }
 }
