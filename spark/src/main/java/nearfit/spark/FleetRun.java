@@ -35,10 +35,12 @@ final class FleetRun {
     final double threshold;
     final WorkerModel driverModel;
     final FleetInput input;
+    /** The input arguments as given (paths, folders, globs). */
+    private final List<String> inputPaths;
     private final ScoringPlan plan;
 
     private FleetRun(SparkSession spark, ReferenceModel stored, String modelSha256, String zScale, double threshold,
-                     WorkerModel driverModel, FleetInput input, ScoringPlan plan) {
+                     WorkerModel driverModel, FleetInput input, List<String> inputPaths, ScoringPlan plan) {
         this.spark = spark;
         this.stored = stored;
         this.modelSha256 = modelSha256;
@@ -46,6 +48,7 @@ final class FleetRun {
         this.threshold = threshold;
         this.driverModel = driverModel;
         this.input = input;
+        this.inputPaths = List.copyOf(inputPaths);
         this.plan = plan;
     }
 
@@ -71,7 +74,7 @@ final class FleetRun {
         ScoringPlan plan = new ScoringPlan(broadcast, o.modelFile, sha256(bytes), zScale, threshold,
                 columns.inputs().size(), input.hasResponse, columns.categoryResponse(), writeTime,
                 input.groupColumn != null, emit, o.blockRows, worstCount, o.probe);
-        return new FleetRun(spark, stored, plan.modelSha256(), zScale, threshold, driverModel, input, plan);
+        return new FleetRun(spark, stored, plan.modelSha256(), zScale, threshold, driverModel, input, o.inputs, plan);
     }
 
     /**
@@ -101,6 +104,7 @@ final class FleetRun {
         try {
             fs = out.getFileSystem(spark.sparkContext().hadoopConfiguration());
             out = fs.makeQualified(out);
+            refuseInput(fs, out, outDir);
             if (fs.exists(out) && !force) {
                 throw NearfitException.inFile(outDir, "exists already; give --force to replace it");
             }
@@ -125,6 +129,22 @@ final class FleetRun {
         }
         replace(fs, staging, out, outDir, force);
         return acc.value();
+    }
+
+    /**
+     * Refuses an output folder that is one of the inputs, holds one, or lies inside an input folder: replacing
+     * it would destroy the input, and output inside an input folder would be read as input by the next run.
+     */
+    private void refuseInput(FileSystem fs, Path out, String outDir) {
+        String o = out.toString();
+        for (String arg : inputPaths) {
+            String in = fs.makeQualified(new Path(arg)).toString();
+            boolean folder = !arg.matches(".*[*?\\[{].*");
+            if (in.equals(o) || in.startsWith(o + "/") || folder && o.startsWith(in + "/")) {
+                throw NearfitException.inFile(outDir, "is, holds or lies in an input of this run (" + arg
+                        + "); choose another output folder");
+            }
+        }
     }
 
     /** Moves the finished output into place, over the previous folder when {@code force}. */

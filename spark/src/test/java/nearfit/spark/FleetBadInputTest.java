@@ -108,6 +108,10 @@ class FleetBadInputTest {
         assertEquals(2, r.status(), r.toString());
         assertEquals(1, r.err().strip().lines().count(), r.err());
         assertFalse(Files.exists(out), "a failed job left " + out);
+        try (java.util.stream.Stream<Path> left = Files.list(dir)) {
+            assertEquals(List.of(), left.filter(p -> p.getFileName().toString().startsWith(".flagged-out")).toList(),
+                    "a failed job left its hidden work folder");
+        }
     }
 
     @Test
@@ -118,6 +122,22 @@ class FleetBadInputTest {
         Files.writeString(out.resolve("mine.txt"), "keep me");
         assertOneLineExit2(FleetTestData.fleet("check", model, csv.toString(), "-o", out.toString()), "--force");
         assertTrue(Files.exists(out.resolve("mine.txt")));
+    }
+
+    @Test
+    void anInputIsNeverTheOutputFolder() throws Exception {
+        Path in = Files.createDirectories(dir.resolve("inputs"));
+        Path csv = in.resolve("one.csv");
+        Files.writeString(csv, HEADER + "\n2025-01-01T00:00:00Z,T01,7.5,1.22,900\n");
+        assertOneLineExit2(FleetTestData.fleet("predict", model, in.toString(), "-o", in.toString(), "--force"),
+                "input of this run");
+        assertOneLineExit2(FleetTestData.fleet("predict", model, csv.toString(), "-o", in.toString(), "--force"),
+                "input of this run");
+        assertOneLineExit2(FleetTestData.fleet("predict", model, in.toString(), "-o", in.resolve("out").toString()),
+                "input of this run");
+        try (java.util.stream.Stream<Path> left = Files.list(in)) {
+            assertEquals(List.of(csv), left.toList(), "the input folder is untouched");
+        }
     }
 
     /** Spark's logging is fatal errors only in the tests and in the launcher's configuration (quiet runs). */

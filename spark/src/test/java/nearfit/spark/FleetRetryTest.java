@@ -39,7 +39,9 @@ class FleetRetryTest {
     private static final String HEADER = "time,turbine,wind_ms,wind_dir_deg,air_temp_c,air_density,power_kw,"
             + "rotor_rpm,gearbox_oil_c";
     /** Rows per block in these jobs, so each task scores several blocks and a fault can come mid-write. */
-    private static final int BLOCK_ROWS = 2000;
+    private static final int BLOCK_ROWS = 1000;
+    /** Rows of the inputs: the demo log's last two weeks, 18 to 31 December (8 turbines, every 10 minutes). */
+    private static final int ROWS = 16_128;
     /** The failing task's partial files found in its attempt folder each time a fault fired (one JVM: local mode). */
     private static final Queue<Integer> FAULTS = new ConcurrentLinkedQueue<>();
     private static String model;
@@ -60,7 +62,7 @@ class FleetRetryTest {
         }
     }
 
-    /** December of the demo log (35 712 rows) as three CSV files, one task each. */
+    /** The demo log's last two weeks as three CSV files of 5 376 rows, one task each. */
     @BeforeAll
     static void files() throws Exception {
         model = FleetTestData.model().toString();
@@ -76,11 +78,11 @@ class FleetRetryTest {
             assertEquals(HEADER, in.readLine());
             long n = 0;
             for (String line = in.readLine(); line != null; line = in.readLine()) {
-                if (line.startsWith("2025-12")) {
-                    parts.get((int) (n++ * 3 / 35_712 % 3)).write(line + "\n");
+                if (line.compareTo("2025-12-18") >= 0) {
+                    parts.get((int) (n++ * 3 / ROWS)).write(line + "\n");
                 }
             }
-            assertEquals(35_712, n);
+            assertEquals(ROWS, n);
         }
         for (Writer w : parts) {
             w.close();
@@ -116,7 +118,7 @@ class FleetRetryTest {
 
         Dataset<Row> x = FleetTestData.spark().read().parquet(clean.toString());
         Dataset<Row> y = FleetTestData.spark().read().parquet(retried.toString());
-        assertEquals(35_712, x.count());
+        assertEquals(ROWS, x.count());
         assertEquals(x.count(), y.count());
         assertEquals(0, x.except(y).count(), "rows of the clean run missing after the retry");
         assertEquals(0, y.except(x).count(), "rows after the retry the clean run has not");
@@ -143,7 +145,7 @@ class FleetRetryTest {
             assertEquals(clean.json().get(field), retried.json().get(field), field);
         }
         JsonNode f = retried.json().get("flagged");
-        assertTrue(f.asLong() > 0, "December has flagged rows");
+        assertTrue(f.asLong() > 0, "the two weeks have flagged rows");
         assertEquals(f.asLong(), FleetTestData.spark().read().parquet(parent.resolve("flagged").toString()).count());
         assertOnlyCommittedFiles(parent.resolve("flagged"));
     }
@@ -182,7 +184,7 @@ class FleetRetryTest {
         FleetTestData.Result ok = job(TaskProbe.NONE, "predict", model, inputs, "-o", out.toString(), "--force");
         assertEquals(0, ok.status(), ok.toString());
         assertFalse(Files.exists(out.resolve("previous.txt")));
-        assertEquals(35_712, FleetTestData.spark().read().parquet(out.toString()).count());
+        assertEquals(ROWS, FleetTestData.spark().read().parquet(out.toString()).count());
         assertOnlyCommittedFiles(out);
         assertEquals(List.of("predicted"), names(parent));
     }
