@@ -223,7 +223,7 @@ public final class KeyPress {
         int lines = f == null ? 0 : f.rows().size();
         if (f != null && lines > 0 && key.getKeyType() == KeyType.Enter) {
             FlaggedRow row = f.rows().get(Math.min(s.cursor(), lines - 1));
-            return Step.of(markRow(s, cx, row));
+            return Step.of(markRow(s, cx, row, f.source().heading() + " " + nearfit.table.VisibleText.of(f.origin(row))));
         }
         if (key.getKeyType() == KeyType.Character && key.getCharacter() == 'F') {
             return Step.of(s.edit().close().build());
@@ -232,10 +232,11 @@ public final class KeyPress {
     }
 
     /**
-     * Marks a flagged row on the plot and puts the crosshair on it, keeping the zoom: a zoomed view that does
-     * not hold the row moves over to it with the same width.
+     * Marks a flagged row on the plot ({@code origin}: "line 12", "row 5" or "row set/f.parquet:5") and puts the
+     * crosshair on it, keeping the zoom: a zoomed view that does not hold the row moves over to it with the same
+     * width.
      */
-    private static ViewState markRow(ViewState s, KeyContext cx, FlaggedRow row) {
+    private static ViewState markRow(ViewState s, KeyContext cx, FlaggedRow row, String origin) {
         ViewState.Builder b = s.edit().close().markedRow(row.row());
         double x = row.inputs().get(s.inputs().indexOf(s.displayInput()));
         double from = s.wholeRange() ? cx.dataFrom() : s.zoomFrom();
@@ -247,7 +248,7 @@ public final class KeyPress {
             b.zoom(from, to);
         }
         double at = to > from ? (x - from) / (to - from) : 0.5;
-        String mark = "line " + row.line() + " marked on the plot";
+        String mark = origin + " marked on the plot";
         return b.crosshair(Math.max(0, Math.min(1, at))).message(mark).build();
     }
 
