@@ -8,8 +8,10 @@ import java.util.Map;
 import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.input.KeyType;
 
+import nearfit.table.VisibleText;
 import nearfit.tui.results.FlaggedRow;
 import nearfit.tui.results.FlaggedRows;
+import nearfit.tui.results.HeldOutChoice;
 import nearfit.tui.results.TuningFigures;
 
 /**
@@ -223,12 +225,30 @@ public final class KeyPress {
         int lines = f == null ? 0 : f.rows().size();
         if (f != null && lines > 0 && key.getKeyType() == KeyType.Enter) {
             FlaggedRow row = f.rows().get(Math.min(s.cursor(), lines - 1));
-            return Step.of(markRow(s, cx, row, f.source().heading() + " " + nearfit.table.VisibleText.of(f.origin(row))));
+            return Step.of(markRow(s, cx, row, f.source().heading() + " " + VisibleText.of(f.origin(row))));
         }
         if (key.getKeyType() == KeyType.Character && key.getCharacter() == 'F') {
             return Step.of(s.edit().close().build());
         }
         return panel(s, key, cx, lines);
+    }
+
+    /**
+     * The next held-out scheme (key H). Holding out by group needs a group column of at least two groups: with
+     * one label, every row is in the held-out group and nothing is left to predict it from, so the scheme is
+     * not offered and the message says why.
+     */
+    static Step nextHeldOut(ViewState s, KeyContext cx) {
+        boolean oneGroup = s.groupColumn() != null && cx.groupCount() < 2;
+        HeldOutChoice now = s.tuningChoice(cx.hasTime());
+        HeldOutChoice next = now.next(cx.hasTime(), s.groupColumn() != null && !oneGroup);
+        String why = oneGroup ? "by group needs two groups; " + VisibleText.of(s.groupColumn()) + " has "
+                + (cx.groupCount() == 1 ? "one" : "none") : null;
+        if (next == now) {
+            return Step.of(s.edit().warning(why != null ? "only leave-one-out applies: " + why
+                    : "only leave-one-out applies: no time column and no group (g)").build());
+        }
+        return Step.of(s.edit().heldOut(next).message(next.words() + (why != null ? " (" + why + ")" : "")).build());
     }
 
     /**
