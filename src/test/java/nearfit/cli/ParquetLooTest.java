@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.net.URISyntaxException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.HashMap;
@@ -37,17 +36,11 @@ class ParquetLooTest {
     private Path model;
 
     private static Path fixture(String name) {
-        try {
-            return Path.of(ParquetLooTest.class.getResource("/parquet/" + name).toURI());
-        } catch (URISyntaxException e) {
-            throw new IllegalStateException(e);
-        }
+        return Path.of(ParquetCommandsTest.fixture(name));
     }
 
     private static CliRun.Result ok(String... args) {
-        CliRun.Result r = CliRun.inProcess(args);
-        assertEquals(0, r.status(), () -> String.join(" ", args) + ": " + r);
-        return r;
+        return ParquetCommandsTest.ok(args);
     }
 
     private static String[] fit(Path data, Path out) {
