@@ -109,7 +109,7 @@ final class FitCommand implements Callable<Integer> {
             CategoryColumn group = input.group();
             this.data = input.data();
             this.info = new SourceInfo(src.name(), src.sizeBytes(), src.sha256(),
-                    where == null || where.isBlank() ? null : where.trim());
+                    where == null || where.isBlank() ? null : where.trim(), src.parquetFiles());
             this.responseLabels = input.responseLabels();
             this.groupName = group == null ? null : group.name();
             this.groupLabels = group == null ? List.of() : group.labels();

@@ -7,11 +7,14 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
+import java.util.ArrayList;
 import java.util.HexFormat;
+import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CompletionException;
 
+import nearfit.model.SourceInfo;
 import nearfit.table.CategoryColumn;
 import nearfit.table.Column;
 import nearfit.table.CsvLoader;
@@ -20,6 +23,7 @@ import nearfit.table.LoadReport;
 import nearfit.table.NearfitException;
 import nearfit.table.NumericColumn;
 import nearfit.table.RowSet;
+import nearfit.table.RowSource;
 import nearfit.table.Table;
 import nearfit.table.VisibleText;
 
@@ -145,6 +149,35 @@ final class SourceTable {
         } catch (CompletionException e) {
             throw e.getCause() instanceof NearfitException ne ? ne : e;
         }
+    }
+
+    /**
+     * For Parquet rows, each file they come from (named as the table's {@link nearfit.table.RowSource} names it),
+     * with its size and SHA-256, so a model records what its row indexes point at; {@code null} for CSV lines.
+     * A data set's files are hashed here, one after the other (a single file's digest is {@link #sha256()}).
+     */
+    List<SourceInfo.SourceFile> parquetFiles() {
+        RowSource rows = table.rowSource();
+        if (!rows.isParquet()) {
+            return null;
+        }
+        Path base = "-".equals(name) ? null : ArgumentPath.of(name);
+        List<SourceInfo.SourceFile> out = new ArrayList<>();
+        if (base == null || !Files.isDirectory(base)) {
+            String sha = sha256();
+            if (sha == null) {
+                throw NearfitException.inFile(name, "a model's Parquet rows need a named file or folder, not a stream");
+            }
+            out.add(new SourceInfo.SourceFile(rows.files().get(0), sizeBytes, sha));
+            return out;
+        }
+        String prefix = name.endsWith("/") ? name : name + "/";
+        for (String file : rows.files()) {
+            // The loader names a data set's file as the folder given, then its path within the folder.
+            Path path = file.startsWith(prefix) ? base.resolve(file.substring(prefix.length())) : Path.of(file);
+            out.add(new SourceInfo.SourceFile(file, sizeOf(path, file), sha256Of(path, file)));
+        }
+        return out;
     }
 
     /** The rows meeting the row condition, or every row when it is {@code null}. */

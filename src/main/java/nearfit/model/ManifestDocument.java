@@ -35,8 +35,16 @@ record ManifestDocument(String toolVersion, String created, SourceFields source,
     @interface MayBeAbsent {
     }
 
-    /** {@code "source"}: the file the reference was fitted on. */
-    record SourceFields(String name, BigDecimal size, String sha256) {
+    /**
+     * {@code "source"}: the file the reference was fitted on; for Parquet rows also {@code parquet_files}, the files
+     * the rows' file numbers point at (absent for CSV lines, and in files written before it).
+     */
+    record SourceFields(String name, BigDecimal size, String sha256,
+                        @MayBeAbsent @OmitWhenNull List<FileFields> parquetFiles) {
+    }
+
+    /** One entry of {@code "source.parquet_files"}. */
+    record FileFields(String name, BigDecimal size, String sha256) {
     }
 
     /** {@code "columns"}. */

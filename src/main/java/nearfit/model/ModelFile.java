@@ -38,7 +38,8 @@ import static nearfit.model.ManifestValues.whole;
  *
  * <p>Arrays: {@code input.J} (f64, input J in manifest order), {@code response} (f64) or
  * {@code response_code} (i32), {@code group_code} (i32, only with a group) and {@code source_line}
- * (i64). The manifest fields are listed in docs of {@link #manifestOf}; loading checks that each is
+ * (i64: the CSV line, or for Parquet rows the file number and row index packed as {@link nearfit.table.RowSource}
+ * packs them, the files listed in the manifest's {@code source.parquet_files}). The manifest fields are listed in docs of {@link #manifestOf}; loading checks that each is
  * present, of its type and consistent with the arrays, and reports the first problem as one line
  * naming the file.
  */
@@ -72,7 +73,8 @@ public final class ModelFile {
 
     /**
      * The manifest fields of a model (ModelArchive adds format, format_version and entries):
-     * tool_version, created (ISO 8601 UTC), source {name, size, sha256}, row_condition, rows,
+     * tool_version, created (ISO 8601 UTC), source {name, size, sha256, parquet_files (only for Parquet rows:
+     * [{name, size, sha256}], the files the packed source_line values point at)}, row_condition, rows,
      * columns {inputs, response, response_labels, group, group_labels}, scaling {method, center,
      * spread, whitening}, metric, weights, k, band, estimate (absent in files written before it: the
      * mean), flags {threshold, residual_median, residual_scale,
@@ -85,7 +87,7 @@ public final class ModelFile {
                 model.created().truncatedTo(ChronoUnit.SECONDS).toString(),
                 new ManifestDocument.SourceFields(model.source().name(),
                         model.source().sizeBytes() < 0 ? null : BigDecimal.valueOf(model.source().sizeBytes()),
-                        model.source().sha256()),
+                        model.source().sha256(), parquetFilesOf(model.source())),
                 model.source().rowCondition(), BigDecimal.valueOf(model.rows().size()),
                 new ManifestDocument.ColumnFields(c.inputs(), c.response(), c.responseLabels(), c.group(), c.groupLabels()),
                 new ManifestDocument.ScalingFields(s.scaling().word(), ManifestDocument.listOf(model.scaleCenter()),
@@ -95,6 +97,57 @@ public final class ModelFile {
                 new ManifestDocument.FlagFields(s.flagThreshold(), model.residualScale().median(),
                         model.residualScale().scale(), s.flagScale().word()),
                 model.tuning() == null ? null : (ManifestDocument.TuningFields) model.tuning().toJson());
+    }
+
+    /** {@code source.parquet_files}: null for CSV lines, so a CSV model's manifest is what it always was. */
+    private static List<ManifestDocument.FileFields> parquetFilesOf(SourceInfo source) {
+        if (source.parquetFiles() == null) {
+            return null;
+        }
+        List<ManifestDocument.FileFields> out = new ArrayList<>();
+        for (SourceInfo.SourceFile f : source.parquetFiles()) {
+            out.add(new ManifestDocument.FileFields(f.name(), BigDecimal.valueOf(f.sizeBytes()), f.sha256()));
+        }
+        return out;
+    }
+
+    /** The checked {@code source.parquet_files}, or null when absent (CSV lines). */
+    private static List<SourceInfo.SourceFile> parquetFilesOf(List<ManifestDocument.FileFields> files) {
+        if (files == null) {
+            return null;
+        }
+        if (files.isEmpty() || files.size() > nearfit.table.RowSource.MAX_FILES) {
+            throw ManifestDocument.bad("source.parquet_files", "has " + files.size() + " entries; Parquet rows come from 1 to "
+                    + nearfit.table.RowSource.MAX_FILES + " files");
+        }
+        List<SourceInfo.SourceFile> out = new ArrayList<>(files.size());
+        for (int i = 0; i < files.size(); i++) {
+            String field = "source.parquet_files[" + i + "]";
+            ManifestDocument.FileFields f = object(field, files.get(i));
+            String name = text(field + ".name", f.name());
+            if (name.isEmpty()) {
+                throw ManifestDocument.bad(field + ".name", "is empty");
+            }
+            long size = whole(field + ".size", f.size(), 0, MAX_EXACT_WHOLE);
+            String sha = text(field + ".sha256", f.sha256());
+            if (!sha.matches("[0-9a-f]{64}")) {
+                throw ManifestDocument.bad(field + ".sha256", "is not 64 lower-case hex digits");
+            }
+            out.add(new SourceInfo.SourceFile(name, size, sha));
+        }
+        return out;
+    }
+
+    /** Each stored row's source value names one of the recorded Parquet files (CSV lines are not checked). */
+    private static void checkOrigins(ReferenceRows rows, SourceInfo source) {
+        nearfit.table.RowSource origin = source.rowSource();
+        long[] values = rows.sourceLines();
+        for (int i = 0; i < values.length; i++) {
+            if (!origin.holds(values[i])) {
+                throw new IllegalArgumentException("entry source_line holds " + values[i] + " at stored row " + (i + 1)
+                        + ", which names no file of \"source.parquet_files\"");
+            }
+        }
     }
 
     /**
@@ -117,6 +170,7 @@ public final class ModelFile {
             Described described = describedOf(m, columns, rows);
             ReferenceRows stored = rowsOf(archive.read(needs(columns, rows)), columns);
             checkCodes(stored, columns);
+            checkOrigins(stored, described.source());
             StoredRowCheck.check(stored, columns, described.settings(), described.center(), described.spread(),
                     described.whitening());
             return described.with(stored);
@@ -208,7 +262,7 @@ public final class ModelFile {
         }
         SourceInfo source = new SourceInfo(sourceName,
                 src.size() == null ? -1 : whole("source.size", src.size(), 0, MAX_EXACT_WHOLE), sha,
-                m.rowCondition());
+                m.rowCondition(), parquetFilesOf(src.parquetFiles()));
         KnnSettings settings = settingsOf(m, rows);
         ManifestDocument.ScalingFields scaling = m.scaling();
         int d = columns.inputs().size();

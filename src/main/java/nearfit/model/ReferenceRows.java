@@ -12,7 +12,8 @@ package nearfit.model;
  * @param response      number responses, or {@code null} for a category response
  * @param responseCodes class codes of a category response, or {@code null}
  * @param groupCodes    group codes, or {@code null}
- * @param sourceLines   the 1-based line of each row in the source file
+ * @param sourceLines   each row's source value: its 1-based CSV line, or for Parquet rows its file and row index
+ *                      as {@link nearfit.table.RowSource} packs them (read through {@link SourceInfo#rowSource()})
  */
 public record ReferenceRows(double[][] inputs, double[] response, int[] responseCodes, int[] groupCodes,
                             long[] sourceLines) {

@@ -9,14 +9,21 @@ import java.util.List;
  *
  * @param report  the loader's report
  * @param columns the columns with blank or bad cells, in file order
+ * @param source  what the gaps' first lines are (CSV lines, or Parquet file and row index): the table's
  */
-public record LoadNotes(LoadReport report, List<ColumnGaps> columns) {
+public record LoadNotes(LoadReport report, List<ColumnGaps> columns, RowSource source) {
     /** Lines of missing cells kept per column. */
     public static final int FIRST_LINES = 3;
 
     /** Copies the list so that the record stays immutable. */
     public LoadNotes {
         columns = List.copyOf(columns);
+        java.util.Objects.requireNonNull(source, "source");
+    }
+
+    /** Notes of a CSV, whose gaps are listed by line. */
+    public LoadNotes(LoadReport report, List<ColumnGaps> columns) {
+        this(report, columns, RowSource.CSV_LINES);
     }
 
     /**
@@ -54,7 +61,7 @@ public record LoadNotes(LoadReport report, List<ColumnGaps> columns) {
             List<Long> first = blankOnly && blank == 0 ? List.of() : firstMissing(table, c, blankOnly ? bad : List.of());
             out.add(new ColumnGaps(c.name(), blank, c.badCount(), first, blankOnly, bad));
         }
-        return new LoadNotes(report, out);
+        return new LoadNotes(report, out, table.rowSource());
     }
 
     private static List<Long> firstMissing(Table table, Column c, List<BadCell> skip) {

@@ -13,15 +13,23 @@ public final class RowSource {
     public static final RowSource CSV_LINES = new RowSource(null);
     private static final int FILE_SHIFT = 40;
     private static final long ROW_MASK = (1L << FILE_SHIFT) - 1;
+    /** The most files whose number fits above the row index in a positive {@code long}. */
+    public static final int MAX_FILES = 1 << (63 - FILE_SHIFT);
 
     private final List<String> files;
 
     private RowSource(List<String> files) {
+        if (files != null && (files.isEmpty() || files.size() > MAX_FILES)) {
+            throw new IllegalArgumentException("Parquet rows come from 1 to " + MAX_FILES + " files, not " + files.size());
+        }
         this.files = files == null ? null : List.copyOf(files);
     }
 
-    /** Rows of Parquet files, named as given (one name for a single file, paths within a data set's folder). */
-    static RowSource parquet(List<String> files) {
+    /**
+     * Rows of Parquet files, named as given (one name for a single file; for a data set, the folder as given
+     * followed by the path within it). At most 2^23 files: the packed value stays positive.
+     */
+    public static RowSource parquet(List<String> files) {
         return new RowSource(files);
     }
 
@@ -48,6 +56,14 @@ public final class RowSource {
     /** The 0-based row index in its file of a Parquet source-row value (the value itself for CSV). */
     public long rowIndex(long value) {
         return files == null ? value : value & ROW_MASK;
+    }
+
+    /**
+     * Whether {@code value} is a source-row value this source can hold: for Parquet a file number below
+     * {@code files().size()} and a row index of at least 0; for CSV any value (lines are not checked).
+     */
+    public boolean holds(long value) {
+        return files == null || value >= 0 && (value >>> FILE_SHIFT) < files.size();
     }
 
     /** The file a Parquet source-row value comes from, or null for CSV. */

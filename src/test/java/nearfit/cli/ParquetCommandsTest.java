@@ -32,7 +32,7 @@ class ParquetCommandsTest {
     @TempDir
     Path dir;
 
-    private static String fixture(String name) {
+    static String fixture(String name) {
         try {
             return Path.of(ParquetCommandsTest.class.getResource("/parquet/" + name).toURI()).toString();
         } catch (URISyntaxException e) {
@@ -40,7 +40,7 @@ class ParquetCommandsTest {
         }
     }
 
-    private static CliRun.Result ok(String... args) {
+    static CliRun.Result ok(String... args) {
         CliRun.Result r = CliRun.inProcess(args);
         assertEquals(0, r.status(), () -> String.join(" ", args) + ": " + r);
         return r;

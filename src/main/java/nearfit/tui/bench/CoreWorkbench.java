@@ -211,6 +211,12 @@ public final class CoreWorkbench implements Workbench {
         KnnModel model = references.model(m.withK(1), null, -1);
         HeldOutBlocks blocks = blocks(model, choice, groupColumn);
         boolean loo = choice == HeldOutChoice.LEAVE_ONE_OUT;
+        if (!loo && blocks.largest() >= model.data().size()) {
+            // One group (or day) holds every reference row: nothing outside it is left to predict a row from. The
+            // table is leave-one-out's, which its scheme says, and the tuning panel says why: not a failure.
+            blocks = blocks(model, HeldOutChoice.LEAVE_ONE_OUT, null);
+            loo = true;
+        }
         int kmax = Math.min(TUNING_KMAX, model.data().size() - (loo ? 1 : blocks.largest()));
         if (kmax < 1) {
             throw new NearfitException(loo ? "tuning needs at least two reference rows"

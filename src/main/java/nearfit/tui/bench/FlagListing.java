@@ -67,6 +67,6 @@ final class FlagListing {
             rows.add(new FlaggedRow(row, table.lineOf(row), when, label, inputs, data.response()[i], f.looFit()[i],
                     f.residual()[i], z[i]));
         }
-        return new FlaggedRows(f, f.looRmse(), rows, examined, n);
+        return new FlaggedRows(f, f.looRmse(), rows, examined, n, table.rowSource());
     }
 }

@@ -107,15 +107,16 @@ public final class Exporter {
     }
 
     /**
-     * The flagged rows with predict's columns: the time column only when there is one and it is not an input,
+     * The flagged rows with predict's columns: the origin ({@code line}; {@code row}, or {@code file, row} for a
+     * Parquet data set), the time column only when there is one and it is not an input,
      * the group column only when one is chosen, band cells empty (leave-one-out gives no band), times as ISO 8601.
      */
     static void flagsCsv(ViewState s, TimeInputs times, FlaggedRows f, OutputStream out) throws IOException {
         ResultCsv csv = ResultCsv.on(out);
         String time = times.column() == null || s.inputs().contains(times.column()) ? null : times.column();
-        csv.header(ResultCsv.rowColumns(time, s.groupColumn(), s.inputs(), s.response(), false));
+        csv.header(ResultCsv.rowColumns(f.source(), time, s.groupColumn(), s.inputs(), s.response(), false));
         for (FlaggedRow row : f.rows()) {
-            csv.whole(row.line());
+            ResultCsv.origin(csv, f.source(), row.line());
             if (time != null) {
                 csv.text(row.time());
             }

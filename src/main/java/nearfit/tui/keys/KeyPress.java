@@ -8,8 +8,10 @@ import java.util.Map;
 import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.input.KeyType;
 
+import nearfit.table.VisibleText;
 import nearfit.tui.results.FlaggedRow;
 import nearfit.tui.results.FlaggedRows;
+import nearfit.tui.results.HeldOutChoice;
 import nearfit.tui.results.TuningFigures;
 
 /**
@@ -223,7 +225,7 @@ public final class KeyPress {
         int lines = f == null ? 0 : f.rows().size();
         if (f != null && lines > 0 && key.getKeyType() == KeyType.Enter) {
             FlaggedRow row = f.rows().get(Math.min(s.cursor(), lines - 1));
-            return Step.of(markRow(s, cx, row));
+            return Step.of(markRow(s, cx, row, f.source().heading() + " " + VisibleText.of(f.origin(row))));
         }
         if (key.getKeyType() == KeyType.Character && key.getCharacter() == 'F') {
             return Step.of(s.edit().close().build());
@@ -232,10 +234,29 @@ public final class KeyPress {
     }
 
     /**
-     * Marks a flagged row on the plot and puts the crosshair on it, keeping the zoom: a zoomed view that does
-     * not hold the row moves over to it with the same width.
+     * The next held-out scheme (key H). Holding out by group needs a group column of at least two groups: with
+     * one label, every row is in the held-out group and nothing is left to predict it from, so the scheme is
+     * not offered and the message says why.
      */
-    private static ViewState markRow(ViewState s, KeyContext cx, FlaggedRow row) {
+    static Step nextHeldOut(ViewState s, KeyContext cx) {
+        boolean oneGroup = s.groupColumn() != null && cx.groupCount() < 2;
+        HeldOutChoice now = s.tuningChoice(cx.hasTime());
+        HeldOutChoice next = now.next(cx.hasTime(), s.groupColumn() != null && !oneGroup);
+        String why = oneGroup ? "by group needs two groups; " + VisibleText.of(s.groupColumn()) + " has "
+                + (cx.groupCount() == 1 ? "one" : "none") : null;
+        if (next == now) {
+            return Step.of(s.edit().warning(why != null ? "only leave-one-out applies: " + why
+                    : "only leave-one-out applies: no time column and no group (g)").build());
+        }
+        return Step.of(s.edit().heldOut(next).message(next.words() + (why != null ? " (" + why + ")" : "")).build());
+    }
+
+    /**
+     * Marks a flagged row on the plot ({@code origin}: "line 12", "row 5" or "row set/f.parquet:5") and puts the
+     * crosshair on it, keeping the zoom: a zoomed view that does not hold the row moves over to it with the same
+     * width.
+     */
+    private static ViewState markRow(ViewState s, KeyContext cx, FlaggedRow row, String origin) {
         ViewState.Builder b = s.edit().close().markedRow(row.row());
         double x = row.inputs().get(s.inputs().indexOf(s.displayInput()));
         double from = s.wholeRange() ? cx.dataFrom() : s.zoomFrom();
@@ -247,7 +268,7 @@ public final class KeyPress {
             b.zoom(from, to);
         }
         double at = to > from ? (x - from) / (to - from) : 0.5;
-        String mark = "line " + row.line() + " marked on the plot";
+        String mark = origin + " marked on the plot";
         return b.crosshair(Math.max(0, Math.min(1, at))).message(mark).build();
     }
 

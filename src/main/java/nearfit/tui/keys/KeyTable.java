@@ -11,7 +11,6 @@ import nearfit.knn.EstimateKind;
 import nearfit.knn.Metric;
 import nearfit.knn.Scaling;
 import nearfit.knn.Weighting;
-import nearfit.tui.results.HeldOutChoice;
 
 /**
  * The explorer's keys on the plot, as data: each entry is what the user types, what it does in help, its
@@ -35,15 +34,7 @@ public enum KeyTable {
     TUNING("t", "tuning panel: Enter adopts the highlighted k, * the lowest-RMSE k, 1 the one-SE k", "t tuning",
             KeyPress::openTuning),
     HELD_OUT("H", "tuning holds out: each row, a day at a time (time column), a group at a time (g)",
-            (s, k, cx) -> {
-                boolean group = s.groupColumn() != null;
-                HeldOutChoice now = s.tuningChoice(cx.hasTime());
-                HeldOutChoice next = now.next(cx.hasTime(), group);
-                if (next == now) {
-                    return Step.of(s.edit().warning("only leave-one-out applies: no time column and no group (g)").build());
-                }
-                return Step.of(s.edit().heldOut(next).message(next.words()).build());
-            }),
+            (s, k, cx) -> KeyPress.nextHeldOut(s, cx)),
     METRIC("m", "next metric", (s, k, cx) -> {
         Metric m = KeyPress.cycle(Metric.values(), s.metric());
         return Step.of(s.edit().metric(m).message("metric " + m.word()).build());

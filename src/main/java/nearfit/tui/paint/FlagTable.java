@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
+import nearfit.table.RowSource;
 import nearfit.table.VisibleText;
 import nearfit.tui.keys.ViewState;
 import nearfit.tui.results.Figures;
@@ -15,7 +16,7 @@ import nearfit.tui.results.Results;
  * The flagged-rows table as text lines: a heading, then one line per flagged row in the results' order.
  *
  * <p>Columns run from the most to the least important: z (the sort key), the fit and the residual, then the
- * group, time, source line, response and the inputs. When the width is short, whole columns are left out from
+ * group, time, the row's origin (CSV line or Parquet row), response and the inputs. When the width is short, whole columns are left out from
  * the least important end; a number is never cut. Group labels and column names come from the file and are
  * made visible ({@link VisibleText}).
  */
@@ -44,7 +45,12 @@ final class FlagTable {
         if (anyTime) {
             columns.add(column("time", rows, f -> shortTime(f.time()), true));
         }
-        columns.add(column("line", rows, f -> Long.toString(f.line()), false));
+        if (r.flags() != null) {
+            // "line" for CSV, "row" for Parquet (the row index, or file:row in a data set)
+            RowSource origin = r.flags().source();
+            columns.add(column(origin.heading(), rows, f -> RowOrigin.shown(origin, f.line(), in.source()),
+                    origin.isParquet()));
+        }
         columns.add(column(VisibleText.of(s.response()), rows, f -> Figures.value(f.response()), false));
         int display = s.inputs().indexOf(s.displayInput());
         columns.add(column(VisibleText.of(s.displayInput()), rows, f -> Figures.value(f.inputs().get(display)), false));

@@ -7,6 +7,7 @@ import java.util.Locale;
 import nearfit.table.BadCell;
 import nearfit.table.ColumnGaps;
 import nearfit.table.LoadNotes;
+import nearfit.table.RowSource;
 import nearfit.table.LoadReport;
 import nearfit.table.VisibleText;
 import nearfit.tui.results.Figures;
@@ -48,34 +49,35 @@ public final class LoadPanel {
             out.add("no column has blank or bad cells");
             return out;
         }
-        out.add(String.format(Locale.ROOT, "%-16s %9s %9s  %s", "column", "blank", "bad", "first lines"));
+        out.add(String.format(Locale.ROOT, "%-16s %9s %9s  %s", "column", "blank", "bad",
+                "first " + notes.source().heading() + "s"));
         for (ColumnGaps g : notes.columns()) {
             out.add(String.format(Locale.ROOT, "%-16s %9s %9s  %s", VisibleText.of(g.column()), Figures.count(g.blank()),
-                    Figures.count(g.bad()), where(g)));
+                    Figures.count(g.bad()), where(g, notes.source(), r.source())));
         }
         return out;
     }
 
     /** Where a column's gaps are: its first blank (or missing) lines, then its bad cells with their text. */
-    private static String where(ColumnGaps g) {
+    private static String where(ColumnGaps g, RowSource source, String folder) {
         StringBuilder sb = new StringBuilder();
         if (!g.firstLines().isEmpty()) {
-            sb.append(g.blankOnly() ? "blank at " : "missing at ").append(join(g.firstLines()));
+            sb.append(g.blankOnly() ? "blank at " : "missing at ").append(join(g.firstLines(), source, folder));
         }
         if (!g.badExamples().isEmpty()) {
             sb.append(sb.length() == 0 ? "" : "; ").append("bad at");
             for (int i = 0; i < g.badExamples().size(); i++) {
                 BadCell b = g.badExamples().get(i);
-                sb.append(i == 0 ? " " : ", ").append(b.line()).append(" \"").append(VisibleText.of(b.text())).append('"');
+                sb.append(i == 0 ? " " : ", ").append(RowOrigin.shown(source, b.line(), folder)).append(" \"").append(VisibleText.of(b.text())).append('"');
             }
         }
         return sb.toString();
     }
 
-    private static String join(List<Long> lines) {
+    private static String join(List<Long> lines, RowSource source, String folder) {
         StringBuilder sb = new StringBuilder();
         for (long l : lines) {
-            sb.append(sb.length() == 0 ? "" : ", ").append(l);
+            sb.append(sb.length() == 0 ? "" : ", ").append(RowOrigin.shown(source, l, folder));
         }
         return sb.toString();
     }

@@ -14,6 +14,7 @@ import nearfit.tui.results.Figures;
 import nearfit.tui.results.FrameInput;
 import nearfit.tui.results.Ink;
 import nearfit.tui.results.Results;
+import nearfit.tui.results.HeldOutChoice;
 import nearfit.tui.results.TuningFigures;
 
 /** Draws the open panel over the plot: help, a column picker, tuning, flagged rows, export, a prompt. */
@@ -134,13 +135,28 @@ final class Panels {
         return out;
     }
 
+    /**
+     * Why the table is leave-one-out's when another scheme was chosen: the workbench falls back when one group (or
+     * day) holds every reference row, since nothing outside it is left to predict a row from.
+     */
+    static String fellBack(ViewState s, TuningFigures t) {
+        HeldOutChoice chosen = s.heldOut();
+        if (t.scheme() != HeldOutChoice.LEAVE_ONE_OUT || chosen == HeldOutChoice.LEAVE_ONE_OUT
+                || chosen == HeldOutChoice.GROUP && s.groupColumn() == null) {
+            return "";
+        }
+        return " (" + chosen.shortWords() + " does not apply: one " + (chosen == HeldOutChoice.GROUP ? "group" : "day")
+                + " holds every reference row)";
+    }
+
     private static void tuning(Pen pen, ScreenRegions layout, ViewState s, Results r, Cells chart) {
         int row = layout.plotTop();
         int h = layout.plotHeight();
         int w = layout.width() - 4;
         TuningFigures t = r.tuning();
         String title = t == null ? "tuning: " + ScreenPainter.tuningState(r)
-                : "tuning, " + t.scheme().words() + ": " + rmseSource(t) + " RMSE against log k (Enter adopts, * lowest, 1 one-SE, H scheme, Esc)";
+                : "tuning, " + t.scheme().words() + fellBack(s, t) + ": " + rmseSource(t)
+                        + " RMSE against log k (Enter adopts, * lowest, 1 one-SE, H scheme, Esc)";
         pen.box(2, row, w, h, title);
         if (t == null) {
             return;

@@ -10,6 +10,7 @@ import java.util.List;
 import nearfit.knn.FlagResult;
 import nearfit.knn.FlagScale;
 import nearfit.model.ResultCsv;
+import nearfit.table.RowSource;
 import org.junit.jupiter.api.Test;
 
 import nearfit.tui.keys.ViewState;
@@ -37,6 +38,23 @@ class ExporterCsvTest {
         assertEquals("line,time,turbine,wind_ms,power_kw,fit,band_lo,band_hi,resid,z\n"
                 + "9,2025-03-01T00:10:00Z,'=T05,8.5,400,1000,,,-600,-7.25\n"
                 + "10,,\"T0,6\",-1.5,0,2.5,,,-2.5,-inf\n", out.toString(StandardCharsets.UTF_8));
+    }
+
+    @Test
+    void flaggedRowsOfAParquetDataSetStartWithFileAndRowAsPredictsDo() throws IOException {
+        ViewState s = ViewState.initial("power_kw", List.of("wind_ms"), 20);
+        RowSource set = RowSource.parquet(List.of("set/unit=T01/a.parquet", "set/unit=T02/b.parquet"));
+        long secondFileRow7 = (1L << 40) | 7; // RowSource's packing: file number above bit 40, row index below
+        FlaggedRows f = new FlaggedRows(NO_FLAGS, 10, List.of(
+                new FlaggedRow(7, secondFileRow7, "", "", List.of(8.5), 400, 1000, -600, -7.25),
+                new FlaggedRow(8, 3, "", "", List.of(9.0), 5, 1100, -1095, -9)), 2, 2, set);
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        Exporter.flagsCsv(s, new Exporter.TimeInputs(null, new boolean[1]), f, out);
+        assertEquals(String.join(",", ResultCsv.rowColumns(set, null, null, List.of("wind_ms"), "power_kw", false)) + "\n"
+                + "set/unit=T02/b.parquet,7,8.5,400,1000,,,-600,-7.25\n"
+                + "set/unit=T01/a.parquet,3,9,5,1100,,,-1095,-9\n", out.toString(StandardCharsets.UTF_8));
+        assertEquals("file,row,wind_ms,power_kw", String.join(",",
+                ResultCsv.rowColumns(set, null, null, List.of("wind_ms"), "power_kw", false).subList(0, 4)));
     }
 
     @Test

@@ -71,6 +71,23 @@ class KeyPressTest {
     }
 
     @Test
+    void holdingOutByGroupIsNotOfferedForAGroupColumnOfOneGroupAndTheMessageSaysWhy() {
+        KeyContext oneGroup = new KeyContext(wb.columns(), Results.none(1000), 0, 25, 1, 0, true, 5);
+        KeyContext oneGroupNoTime = new KeyContext(wb.columns(), Results.none(1000), 0, 25, 1, 0, false, 5);
+        ViewState s = two.edit().groupColumn("turbine").build();
+        // A time column: days, then back to leave-one-out, never group.
+        ViewState days = KeyPress.next(s, ch('H'), oneGroup).state();
+        assertEquals(HeldOutChoice.DAYS, days.heldOut());
+        assertEquals("k by days held out (by group needs two groups; turbine has one)", days.message());
+        assertEquals(HeldOutChoice.LEAVE_ONE_OUT, KeyPress.next(days, ch('H'), oneGroup).state().heldOut());
+        // No time column: nothing else applies, and the warning says why group does not.
+        ViewState none = KeyPress.next(s, ch('H'), oneGroupNoTime).state();
+        assertTrue(none.warning());
+        assertEquals("only leave-one-out applies: by group needs two groups; turbine has one", none.message());
+        assertEquals(HeldOutChoice.LEAVE_ONE_OUT, none.heldOut());
+    }
+
+    @Test
     void zoomInKeepsTheCrosshairValueInPlace() {
         ViewState s = two.edit().crosshair(0.2).build();
         ViewState z = press(s, ']').state();

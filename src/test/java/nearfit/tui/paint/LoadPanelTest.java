@@ -198,4 +198,30 @@ class LoadPanelTest {
         assertEquals(0, p.waitFor());
         return out;
     }
+
+    /**
+     * A Parquet data set written by DuckDB (scripts/reference/make-parquet-fixtures; wind_ms is null in every 53rd
+     * row): the panel heads the places "first rows" and names each by its file within the folder and its row index,
+     * and that file, read alone, has no wind at that index.
+     */
+    @Test
+    void aParquetDataSetsMissingCellsAreListedByFileWithinTheFolderAndRowIndex() throws Exception {
+        Path set = Path.of(LoadPanelTest.class.getResource("/parquet/site-set").toURI());
+        nearfit.table.Table table = nearfit.table.CsvLoader.load(set, set.toString(), nearfit.table.LoadOptions.DEFAULT);
+        List<String> lines = LoadPanel.lines(LoadNotes.of(table));
+        String heading = lines.stream().filter(l -> l.startsWith("column ")).findFirst().orElseThrow();
+        assertTrue(heading.endsWith("first rows"), heading);
+        String wind = lines.stream().filter(l -> l.startsWith("wind_ms ")).findFirst().orElseThrow();
+        // Nulls are blank cells (no text was there to be bad).
+        String places = wind.substring(wind.indexOf("blank at ") + "blank at ".length());
+        List<String> listed = List.of(places.split(", "));
+        assertEquals(LoadNotes.FIRST_LINES, listed.size(), wind);
+        for (String place : listed) {
+            int colon = place.lastIndexOf(':');
+            assertTrue(place.startsWith("unit="), place);
+            Path file = set.resolve(place.substring(0, colon));
+            nearfit.table.Table alone = nearfit.table.CsvLoader.load(file, file.toString(), nearfit.table.LoadOptions.DEFAULT);
+            assertTrue(alone.column("wind_ms").isMissing(Integer.parseInt(place.substring(colon + 1))), place);
+        }
+    }
 }
