@@ -37,8 +37,9 @@ import static nearfit.model.ManifestValues.whole;
  * {@link ModelArchive} whose manifest carries the settings and whose arrays carry the reference rows.
  *
  * <p>Arrays: {@code input.J} (f64, input J in manifest order), {@code response} (f64) or
- * {@code response_code} (i32), {@code group_code} (i32, only with a group) and {@code source_line}
- * (i64). The manifest fields are listed in docs of {@link #manifestOf}; loading checks that each is
+ * {@code response_code} (i32), {@code group_code} (i32, only with a group), {@code source_line}
+ * (i64) and {@code heldout_residual} (f64, each row's held-out residual; only when the manifest names
+ * {@code flags.residual_scheme}, absent in older files). The manifest fields are listed in docs of {@link #manifestOf}; loading checks that each is
  * present, of its type and consistent with the arrays, and reports the first problem as one line
  * naming the file.
  */
@@ -79,7 +80,7 @@ public final class ModelFile {
      * columns {inputs, response, response_labels, group, group_labels}, scaling {method, center,
      * spread, whitening}, metric, weights, k, band, estimate (absent in files written before it: the
      * mean), flags {threshold, residual_median, residual_scale,
-     * z_scale}, tuning (the tune JSON object, or null).
+     * z_scale, residual_scheme (absent in older files and for a category)}, tuning (the tune JSON object, or null).
      */
     static ManifestDocument manifestOf(ReferenceModel model) {
         ModelColumns c = model.columns();
