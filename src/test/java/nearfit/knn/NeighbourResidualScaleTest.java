@@ -88,6 +88,43 @@ class NeighbourResidualScaleTest {
     }
 
     @Test
+    void aQueryAnsweredByALongTiedRunTakesTheRunsResiduals() {
+        // 300 rows, 100 of them at exactly x = 5 (a run the fit answers from its totals, TiedRuns): the spread is
+        // taken over those 100 rows' values, found by a second search
+        int n = 300;
+        double[] x = new double[n];
+        double[] y = new double[n];
+        double[] values = new double[n];
+        java.util.Random r = new java.util.Random(2);
+        for (int i = 0; i < n; i++) {
+            x[i] = i < 100 ? 5.0 : (i < 200 ? 1 + 3 * r.nextDouble() : 6 + 3 * r.nextDouble());
+            y[i] = 10 * x[i] + r.nextGaussian();
+        }
+        KnnModel m = KnnModel.fit(ReferenceData.numeric(new String[] {"x"}, new double[][] {x}, "y", y,
+                Tuning.allRows(n)), KnnSettings.defaults().withK(30));
+        int[] ids = m.data().rowIds();
+        double[] run = new double[100];
+        for (int p = 0, c = 0; p < n; p++) {
+            values[p] = ids[p] % 7 - 3 + 0.1 * ids[p]; // any values; by reference position
+            if (ids[p] < 100) {
+                run[c++] = values[p];
+            }
+        }
+        double[] centre = new double[1];
+        double[] spread = new double[1];
+        m.estimateAll(new double[][] {{5.0}}, values, centre, spread, Progress.NONE);
+        java.util.Arrays.sort(run);
+        double median = (run[49] + run[50]) / 2;
+        double[] dev = new double[100];
+        for (int i = 0; i < 100; i++) {
+            dev[i] = Math.abs(run[i] - median);
+        }
+        java.util.Arrays.sort(dev);
+        assertEquals(median, centre[0], 1e-12);
+        assertEquals(1.4826 * (dev[49] + dev[50]) / 2, spread[0], 1e-12);
+    }
+
+    @Test
     void theFloorDividesOnAFlatStretchWhereEveryNeighbourResidualIsZero() {
         // 200 rows: y = 0 exactly for x < 5 (below cut-in), a noisy slope above; held-out residuals 0 on the flat
         int n = 200;
