@@ -148,7 +148,8 @@ final class CheckCommand implements Callable<Integer> {
                 CheckReport.scheme(stored.tuning()), stored.residualScale().median(),
                 stored.residualScale().scale(), ToolVersion.get(), Instant.now().truncatedTo(ChronoUnit.SECONDS),
                 c.inputs(), c.response(), scored.group() == null ? null : scored.group().name(),
-                scored.time() == null ? null : scored.time().name(), scored.rowSource());
+                scored.time() == null ? null : scored.time().name(), scored.rowSource())
+                .withBasis(CheckReport.Basis.of(scored.zBasis(), stored.residualScale().scheme()));
     }
 
     /**

@@ -10,6 +10,7 @@ import java.util.Map;
 
 import nearfit.knn.KnnSettings;
 import nearfit.knn.ReferenceReach;
+import nearfit.knn.ZBasis;
 import nearfit.model.JsonText;
 import nearfit.table.RowSource;
 import nearfit.model.TuningSummary;
@@ -52,17 +53,64 @@ public record CheckReport(About about, long rows, long scored, long flagged, dou
      * @param group          the group column, or {@code null}
      * @param timeColumn     the data file's time column shown beside each row, or {@code null}
      * @param rowSource      what a worst row's source-row value means (CSV line, or Parquet file and row)
+     * @param basis          what divided the residuals ({@link Basis})
      */
     public record About(String modelFile, String modelSha256, String dataFile, String rowCondition, KnnSettings settings,
                  String scheme, double residualMedian,
                  double residualScale, String toolVersion, Instant ranAt, List<String> inputs, String response,
-                 String group, String timeColumn, RowSource rowSource) {
+                 String group, String timeColumn, RowSource rowSource, Basis basis) {
+        /** With the basis the settings name when nothing else is known: local, or one reference-wide scale. */
+        public About(String modelFile, String modelSha256, String dataFile, String rowCondition, KnnSettings settings,
+              String scheme, double residualMedian, double residualScale, String toolVersion, Instant ranAt,
+              List<String> inputs, String response, String group, String timeColumn, RowSource rowSource) {
+            this(modelFile, modelSha256, dataFile, rowCondition, settings, scheme, residualMedian, residualScale,
+                    toolVersion, ranAt, inputs, response, group, timeColumn, rowSource,
+                    Basis.of(settings.flagScale() == nearfit.knn.FlagScale.LOCAL_SD ? new ZBasis.LocalSpread()
+                            : new ZBasis.ReferenceResiduals(residualMedian, residualScale), null));
+        }
+
+        /** This description with the basis the scoring really used. */
+        public About withBasis(Basis b) {
+            return new About(modelFile, modelSha256, dataFile, rowCondition, settings, scheme, residualMedian,
+                    residualScale, toolVersion, ranAt, inputs, response, group, timeColumn, rowSource, b);
+        }
+
         /** Rows of a CSV file, traced by line (a fleet job traces its rows itself, in {@link WorstRow#source}). */
         public About(String modelFile, String modelSha256, String dataFile, String rowCondition, KnnSettings settings,
               String scheme, double residualMedian, double residualScale, String toolVersion, Instant ranAt,
               List<String> inputs, String response, String group, String timeColumn) {
             this(modelFile, modelSha256, dataFile, rowCondition, settings, scheme, residualMedian, residualScale,
                     toolVersion, ranAt, inputs, response, group, timeColumn, RowSource.CSV_LINES);
+        }
+    }
+
+    /**
+     * What divided the residuals, for the report: {@code neighbour_spread} (local: the neighbours' spread of
+     * responses), {@code neighbour_residuals} (reference: the median and 1.4826·MAD of the neighbours' held-out
+     * residuals, at least {@code floor}) or {@code reference_wide} (reference, from a model file that stores no
+     * per-row residuals: one scale for the whole reference).
+     *
+     * @param kind   one of the three words above
+     * @param scheme the {@code --cv} words of the scheme the residuals were held out by, or {@code null}
+     * @param floor  the smallest divisor of {@code neighbour_residuals}, NaN otherwise
+     */
+    public record Basis(String kind, String scheme, double floor) {
+        /** The basis a scoring call was given, with the scheme of the model's stored residuals (or null). */
+        public static Basis of(ZBasis z, String scheme) {
+            if (z instanceof ZBasis.NeighbourResiduals r) {
+                return new Basis("neighbour_residuals", scheme, r.floor());
+            }
+            return new Basis(z instanceof ZBasis.LocalSpread ? "neighbour_spread" : "reference_wide", null, Double.NaN);
+        }
+
+        /** The words of the text report's flags line. */
+        String words() {
+            return switch (kind) {
+                case "neighbour_residuals" -> "the median and 1.4826 MAD of the neighbours' held-out residuals ("
+                        + scheme + "), at least " + TuneReport.significant(floor);
+                case "neighbour_spread" -> "the neighbours' spread of responses";
+                default -> "one reference-wide scale";
+            };
         }
     }
 
@@ -380,6 +428,9 @@ public record CheckReport(About about, long rows, long scored, long flagged, dou
         a.put("z_scale", s.flagScale().word());
         a.put("residual_median", about.residualMedian());
         a.put("residual_scale", about.residualScale());
+        a.put("z_basis", about.basis().kind());
+        a.put("residual_scheme", about.basis().scheme());
+        a.put("z_floor", Double.isNaN(about.basis().floor()) ? null : (Object) about.basis().floor());
         a.put("tool_version", about.toolVersion());
         a.put("run_at", about.ranAt().toString());
         return a;
@@ -441,9 +492,13 @@ public record CheckReport(About about, long rows, long scored, long flagged, dou
         KnnSettings s = about.settings();
         out.printf(Locale.ROOT, "settings: k %d (%s), metric %s, weights %s, scaling %s, band %s%n", s.k(),
                 about.scheme(), s.metric().word(), s.weighting().word(), s.scaling().word(), s.band().word());
-        out.printf(Locale.ROOT, "flags: |z| > %s, z scale %s (reference residuals: median %s, 1.4826 MAD %s)%n",
-                TuneReport.significant(threshold), s.flagScale().word(), TuneReport.significant(about.residualMedian()),
-                TuneReport.significant(about.residualScale()));
+        out.printf(Locale.ROOT, "flags: |z| > %s, z scale %s: %s (reference residuals: median %s, 1.4826 MAD %s)%n",
+                TuneReport.significant(threshold), s.flagScale().word(), about.basis().words(),
+                TuneReport.significant(about.residualMedian()), TuneReport.significant(about.residualScale()));
+        if (about.basis().kind().equals("reference_wide")) {
+            out.println("note: the model file stores no per-row held-out residuals (written before they were), so z "
+                    + "divides by one scale for the whole reference; fit again to have it follow the curve");
+        }
         out.printf(Locale.ROOT, "run: nearfit %s at %s%n", about.toolVersion(), about.ranAt());
     }
 

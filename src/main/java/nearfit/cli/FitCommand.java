@@ -69,18 +69,23 @@ final class FitCommand implements Callable<Integer> {
         TuningOptions.Fitted fitted = tuning.fit(source.data, blocks, model.settings(1, z), chosenK, err, model.quiet);
         KnnModel engine = fitted.engine();
         TuningOptions.Result tuned = fitted.tuned();
-        ZBasis.ReferenceResiduals residual = null;
-        if (!source.data.isCategory()) {
-            // the reference residual scale from the held-out scheme's residuals at the fitted k (not leave-one-out's,
-            // which near-copies in time make too small)
-            TerminalProgress progress = TerminalProgress.of(err, "held-out residuals", model.quiet);
-            residual = Tuning.residualScale(engine, blocks, progress);
-            progress.done();
-        }
         TuningTable table = tuned == null ? null : tuned.table();
-        ReferenceModel saved = ReferenceCapture.captureHeldOut(ToolVersion.get(), source.info, engine, residual, table,
-                tuned == null ? -1 : tuned.sampled(), source.responseLabels, source.groupName, source.groupLabels,
-                source.facts);
+        long sampled = tuned == null ? -1 : tuned.sampled();
+        ReferenceModel saved;
+        if (source.data.isCategory()) {
+            saved = ReferenceCapture.captureHeldOut(ToolVersion.get(), source.info, engine,
+                    (ZBasis.ReferenceResiduals) null, table, sampled, source.responseLabels, source.groupName,
+                    source.groupLabels, source.facts);
+        } else {
+            // each row's residual under the held-out scheme at the fitted k, stored: --z-scale reference takes the
+            // median and MAD of a scored row's neighbours' residuals, so the scale follows the curve
+            TerminalProgress progress = TerminalProgress.of(err, "held-out residuals", model.quiet);
+            double[] heldOut = Tuning.heldOutResiduals(engine, blocks, progress);
+            progress.done();
+            saved = ReferenceCapture.captureHeldOut(ToolVersion.get(), source.info, engine, heldOut,
+                    blocks.scheme().word(), table, sampled, source.responseLabels, source.groupName,
+                    source.groupLabels, source.facts);
+        }
         ModelFile.write(saved, output, model.force, inputs);
         model.out().printf("fitted k = %d on %s; wrote %s%n", saved.settings().k(),
                 nearfit.table.VisibleText.of(source.described), nearfit.table.VisibleText.of(output.toString()));

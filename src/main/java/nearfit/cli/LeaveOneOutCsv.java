@@ -36,7 +36,9 @@ final class LeaveOneOutCsv {
             throw new NearfitException("--loo: needs a number response; " + model.stored().columns().response()
                     + " is a category");
         }
-        FlagResult flags = Flags.leaveOneOut(model.engine(), nearfit.knn.Progress.NONE);
+        // under the reference scale, the neighbours' stored held-out residuals (an older file: their leave-one-out ones)
+        double[] heldOut = model.zBasis() instanceof nearfit.knn.ZBasis.NeighbourResiduals r ? r.residuals() : null;
+        FlagResult flags = Flags.leaveOneOut(model.engine(), heldOut, nearfit.knn.Progress.NONE);
         if (PredictionCsv.isParquet(target)) {
             CommandOutput.bytes(target, force, inputs, stdout, out -> {
                 java.io.OutputStream buffered = new java.io.BufferedOutputStream(out, 1 << 16);

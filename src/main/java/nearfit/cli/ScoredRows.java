@@ -5,14 +5,12 @@ import java.util.List;
 
 import nearfit.knn.ClassVotes;
 import nearfit.knn.Estimates;
-import nearfit.knn.FlagScale;
 import nearfit.knn.KnnModel;
 import nearfit.knn.Progress;
 import nearfit.knn.ScoredBlock;
 import nearfit.knn.Scoring;
 import nearfit.knn.ZBasis;
 import nearfit.model.ModelColumns;
-import nearfit.model.ReferenceModel;
 import nearfit.model.RestoredModel;
 import nearfit.table.CategoryColumn;
 import nearfit.table.Column;
@@ -32,8 +30,9 @@ import nearfit.table.TimeColumn;
  * Each estimate depends only on its point, so the block size never changes a result.
  *
  * <p>z follows the model's z scale ({@code local}: the neighbours' spread at the row;
- * {@code reference}: the reference's residual median and scale stored in the model), computed by the
- * core; this class only copies the rows out of the table and hands them over.
+ * {@code reference}: the neighbours' held-out residuals stored in the model, or one reference-wide scale
+ * from an older file; {@link RestoredModel#zBasis}), computed by the core; this class only copies the rows
+ * out of the table and hands them over.
  */
 final class ScoredRows {
     /**
@@ -107,9 +106,7 @@ final class ScoredRows {
         ModelColumns columns = model.stored().columns();
         this.engine = model.engine();
         this.category = columns.categoryResponse();
-        ReferenceModel.ResidualScale scale = model.stored().residualScale();
-        this.zBasis = model.settings().flagScale() == FlagScale.LOCAL_SD ? new ZBasis.LocalSpread()
-                : new ZBasis.ReferenceResiduals(scale.median(), scale.scale());
+        this.zBasis = model.zBasis();
         this.threshold = threshold;
         this.table = source.table();
         boolean everyRow = options.where == null || options.where.isBlank();
@@ -152,6 +149,11 @@ final class ScoredRows {
     /** What the rows' source-row values mean (CSV lines, or Parquet files and row indexes). */
     nearfit.table.RowSource rowSource() {
         return table.rowSource();
+    }
+
+    /** What divides the residuals (the model's z scale, as the core takes it). */
+    ZBasis zBasis() {
+        return zBasis;
     }
 
     /** Rows to score (those meeting the row condition). */

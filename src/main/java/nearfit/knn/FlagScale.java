@@ -3,8 +3,10 @@ package nearfit.knn;
 /** What divides a leave-one-out residual to make its z-score. */
 public enum FlagScale implements ChoiceWord {
     /**
-     * Modified z-score (Iglewicz &amp; Hoaglin 1993): {@code (e - median(e)) / (1.4826 MAD(e))}
-     * over all evaluated rows.
+     * The reference's residual scale where the row lies: {@code (e - m) / max(s, floor)}, m and s the median
+     * and 1.4826·MAD of the neighbours' held-out residuals ({@link Flags#curveZ}; modified z-score of
+     * Iglewicz &amp; Hoaglin 1993, taken locally). A model file without per-row residuals gives one scale
+     * for the whole reference ({@link ZBasis.ReferenceResiduals}).
      */
     GLOBAL_MAD("reference"),
     /** {@code e / s}, with s the weighted SD of the row's neighbours' responses. */

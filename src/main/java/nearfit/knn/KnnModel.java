@@ -180,6 +180,30 @@ public final class KnnModel {
     }
 
     /**
+     * As {@link #estimateAll(double[][], Progress)}, and at each point the weighted median ({@code centre}) and
+     * 1.4826 times the weighted MAD ({@code spread}) of {@code values} (one per reference position, canonical
+     * order) over the point's counted neighbours, with the fit's share weights
+     * ({@link Searcher#neighbourSpread}); NaN at a point with a missing coordinate.
+     */
+    Estimates estimateAll(double[][] columns, double[] values, double[] centre, double[] spread, Progress progress) {
+        requireNumeric();
+        if (values.length != data.size()) {
+            throw new IllegalArgumentException(values.length + " values for " + data.size() + " reference rows");
+        }
+        Estimates out = Estimates.ofSize(columns[0].length);
+        int k = settings.k();
+        forEachPoint(columns, progress, (s, p, i) -> {
+            s.estimateAt(p, -1, out, i);
+            s.neighbourSpread(p, k, -1, values, centre, spread, i);
+        }, i -> {
+            markMissing(out, i);
+            centre[i] = Double.NaN;
+            spread[i] = Double.NaN;
+        });
+        return out;
+    }
+
+    /**
      * Class votes at many raw points given as one column per input, in parallel on
      * {@link KnnSettings#threads()} threads; category response only.
      */

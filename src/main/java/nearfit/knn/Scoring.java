@@ -23,7 +23,8 @@ import nearfit.table.NearfitException;
  *         System.out.println(i + ": fit " + s.fit()[i] + ", resid " + s.residual()[i] + ", z " + s.z()[i]);
  *     }
  * }
- * // on the reference's residual scale instead: new ZBasis.ReferenceResiduals(flags.median(), flags.mad())
+ * // on the reference's held-out residuals where each row lies (Tuning.heldOutResiduals, median, 1.4826 MAD):
+ * // new ZBasis.NeighbourResiduals(heldOut, median, scale)
  * }</pre>
  */
 public final class Scoring {
@@ -56,7 +57,16 @@ public final class Scoring {
         if (!(threshold > 0)) {
             throw new NearfitException("scoring: the threshold must be greater than 0, not " + threshold);
         }
-        Estimates est = model.estimateAll(inputs, progress);
+        double[] centre = null;
+        double[] spread = null;
+        Estimates est;
+        if (basis instanceof ZBasis.NeighbourResiduals r && response != null) {
+            centre = new double[n];
+            spread = new double[n];
+            est = model.estimateAll(inputs, r.residuals(), centre, spread, progress);
+        } else {
+            est = model.estimateAll(inputs, progress);
+        }
         double[] fit = est.fit();
         double[] residual = new double[n];
         double[] z = new double[n];
@@ -66,7 +76,14 @@ public final class Scoring {
             java.util.Arrays.fill(z, Double.NaN);
             return new ScoredBlock(est, residual, z, flagged);
         }
-        if (basis instanceof ZBasis.ReferenceResiduals r) {
+        if (basis instanceof ZBasis.NeighbourResiduals r) {
+            double floor = r.floor();
+            for (int i = 0; i < n; i++) {
+                residual[i] = response[i] - fit[i];
+                z[i] = Flags.curveZ(residual[i], centre[i], spread[i], floor);
+                flagged[i] = Flags.isFlagged(z[i], threshold);
+            }
+        } else if (basis instanceof ZBasis.ReferenceResiduals r) {
             double median = r.median();
             double scale = r.scale();
             for (int i = 0; i < n; i++) {
@@ -75,10 +92,10 @@ public final class Scoring {
                 flagged[i] = Flags.isFlagged(z[i], threshold);
             }
         } else {
-            double[] spread = est.localSd();
+            double[] sd = est.localSd();
             for (int i = 0; i < n; i++) {
                 residual[i] = response[i] - fit[i];
-                z[i] = Flags.zScore(residual[i], spread[i]);
+                z[i] = Flags.zScore(residual[i], sd[i]);
                 flagged[i] = Flags.isFlagged(z[i], threshold);
             }
         }

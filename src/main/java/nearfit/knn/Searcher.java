@@ -13,6 +13,8 @@ public final class Searcher {
     private final double[] shares;
     private final double[] nearest;
     private double localScale = Double.NaN;
+    /** Whether {@link #list} holds the neighbours of the last estimate (false after a tied-run answer). */
+    private boolean listCurrent;
 
     Searcher(KnnModel model) {
         this.model = model;
@@ -29,6 +31,7 @@ public final class Searcher {
      * {@link Metric#EUCLIDEAN} and {@link Metric#MAHALANOBIS} keys are squared distances.
      */
     public NeighborList neighbors(double[] raw) {
+        listCurrent = false;
         model.transform().apply(raw, coords);
         model.index().search(coords, model.settings().k(), -1, list);
         return list;
@@ -126,6 +129,7 @@ public final class Searcher {
         double key;
         int counted;
         boolean median = s.estimate() == EstimateKind.MEDIAN;
+        listCurrent = run < 0;
         if (run >= 0) {
             fit = median ? runs.quantile(run, exclude, 0.5) : runs.mean(run, exclude);
             sd = runs.sd(run, exclude);
@@ -169,6 +173,7 @@ public final class Searcher {
         boolean median = model.settings().estimate() == EstimateKind.MEDIAN;
         TiedRuns runs = model.tiedRuns();
         int run = runs == null || scale == FlagScale.LOCAL_MAD ? -1 : runs.runFor(q[0], k, exclude);
+        listCurrent = run < 0;
         if (run >= 0) {
             localScale = scale == FlagScale.LOCAL_SD ? runs.sd(run, exclude) : Double.NaN;
             return median ? runs.quantile(run, exclude, 0.5) : runs.mean(run, exclude);
@@ -189,9 +194,28 @@ public final class Searcher {
     /** The estimator loaded with the neighbours of q for k (position exclude left out), weighted. */
     private LocalEstimator rowByRow(double[] q, int k, int exclude) {
         find(q, k, exclude);
+        listCurrent = true;
         estimator.load(list, model.data().response());
         estimator.prepare(model.settings().weighting(), k);
         return estimator;
+    }
+
+    /**
+     * The weighted median and 1.4826 times the weighted MAD of {@code values} (one per reference position) over
+     * the neighbours of the last estimate at q ({@link #estimateAt} or {@link #fitLeavingOut} with the same q, k
+     * and exclude): the same counted rows and share weights as that fit (the tie rule, the settings' weighting),
+     * so the spread describes the neighbourhood the fit averaged. A tied-run answer kept no list: the rows are
+     * searched again (they are the run). Into {@code centre[i]} and {@code spread[i]}; the estimator then holds
+     * these values, not the responses.
+     */
+    void neighbourSpread(double[] q, int k, int exclude, double[] values, double[] centre, double[] spread, int i) {
+        if (!listCurrent) {
+            find(q, k, exclude);
+        }
+        estimator.load(list, values);
+        estimator.prepare(model.settings().weighting(), k);
+        centre[i] = estimator.quantile(k, 0.5);
+        spread[i] = InputTransform.MAD_TO_SD * estimator.mad(k);
     }
 
     /** The local spread of the last {@link #fitLeavingOut} call. */

@@ -125,14 +125,14 @@ public final class Tuning {
      * 1993) of {@link #heldOutResiduals} at the model's k, as {@link Flags} takes them from leave-one-out's.
      */
     public static ZBasis.ReferenceResiduals residualScale(KnnModel model, HeldOutBlocks blocks, Progress progress) {
-        double[] res = heldOutResiduals(model, blocks, progress);
+        return residualScale(heldOutResiduals(model, blocks, progress));
+    }
+
+    /** The median and 1.4826 MAD (Iglewicz &amp; Hoaglin 1993) of held-out residuals, as {@link Flags} takes them. */
+    public static ZBasis.ReferenceResiduals residualScale(double[] res) {
         int n = res.length;
-        double[] scratch = res.clone();
-        double median = WeightedQuantiles.median(scratch, n);
-        for (int i = 0; i < n; i++) {
-            scratch[i] = Math.abs(res[i] - median);
-        }
-        return new ZBasis.ReferenceResiduals(median, InputTransform.MAD_TO_SD * WeightedQuantiles.median(scratch, n));
+        double median = Flags.medianOf(res, n);
+        return new ZBasis.ReferenceResiduals(median, Flags.madOf(res, median, n));
     }
 
     /** Up to this many blocks, one index per block on the other rows; above, a filtered search of the model's index. */

@@ -32,7 +32,7 @@
  *
  * FlagResult flags = Flags.leaveOneOut(tuned, progress);      // per row: fit, residual, z, flagged
  * ScoredBlock s = Scoring.score(tuned, newColumns, newResponse,   // new rows, by the same z and flag rule
- *         new ZBasis.LocalSpread(), 3.5, progress);            // or new ZBasis.ReferenceResiduals(median, scale)
+ *         new ZBasis.LocalSpread(), 3.5, progress);            // or new ZBasis.NeighbourResiduals(heldOut, median, scale)
  *
  * // words of the choices, for options, files and screens: settings.metric().word() ("euclidean"),
  * // ChoiceWord.find(Band.values(), "q05-q95"), ChoiceWord.words(FlagScale.offered()) (local, reference)

@@ -56,8 +56,12 @@ record ManifestDocument(String toolVersion, String created, SourceFields source,
     record ScalingFields(String method, List<Double> center, List<Double> spread, List<Double> whitening) {
     }
 
-    /** {@code "flags"}. */
-    record FlagFields(Double threshold, Double residualMedian, Double residualScale, String zScale) {
+    /**
+     * {@code "flags"}; {@code residual_scheme} (the {@code --cv} words of the scheme that held the stored
+     * {@code heldout_residual} entry out) is absent in files written before that entry existed.
+     */
+    record FlagFields(Double threshold, Double residualMedian, Double residualScale, String zScale,
+                      @MayBeAbsent @OmitWhenNull String residualScheme) {
     }
 
     /** {@code "tuning"}: the tune table; one family of figures (rmse... or error_rate...) is present. */

@@ -37,9 +37,11 @@ import static nearfit.model.ManifestValues.whole;
  * {@link ModelArchive} whose manifest carries the settings and whose arrays carry the reference rows.
  *
  * <p>Arrays: {@code input.J} (f64, input J in manifest order), {@code response} (f64) or
- * {@code response_code} (i32), {@code group_code} (i32, only with a group) and {@code source_line}
+ * {@code response_code} (i32), {@code group_code} (i32, only with a group), {@code source_line}
  * (i64: the CSV line, or for Parquet rows the file number and row index packed as {@link nearfit.table.RowSource}
- * packs them, the files listed in the manifest's {@code source.parquet_files}). The manifest fields are listed in docs of {@link #manifestOf}; loading checks that each is
+ * packs them, the files listed in the manifest's {@code source.parquet_files}) and {@code heldout_residual} (f64,
+ * each row's held-out residual; only when the manifest names {@code flags.residual_scheme}, absent in older files).
+ * The manifest fields are listed in docs of {@link #manifestOf}; loading checks that each is
  * present, of its type and consistent with the arrays, and reports the first problem as one line
  * naming the file.
  */
@@ -68,6 +70,9 @@ public final class ModelFile {
             arrays.put("group_code", rows.groupCodes());
         }
         arrays.put("source_line", rows.sourceLines());
+        if (model.residualScale().heldOut() != null) {
+            arrays.put(HELD_OUT, model.residualScale().heldOut());
+        }
         ModelArchive.write(target, force, inputs, manifestOf(model), arrays);
     }
 
@@ -78,7 +83,7 @@ public final class ModelFile {
      * columns {inputs, response, response_labels, group, group_labels}, scaling {method, center,
      * spread, whitening}, metric, weights, k, band, estimate (absent in files written before it: the
      * mean), flags {threshold, residual_median, residual_scale,
-     * z_scale}, tuning (the tune JSON object, or null).
+     * z_scale, residual_scheme (absent in older files and for a category)}, tuning (the tune JSON object, or null).
      */
     static ManifestDocument manifestOf(ReferenceModel model) {
         ModelColumns c = model.columns();
@@ -95,7 +100,7 @@ public final class ModelFile {
                 s.metric().word(), s.weighting().word(), BigDecimal.valueOf(s.k()), s.band().word(),
                 s.estimate().word(),
                 new ManifestDocument.FlagFields(s.flagThreshold(), model.residualScale().median(),
-                        model.residualScale().scale(), s.flagScale().word()),
+                        model.residualScale().scale(), s.flagScale().word(), model.residualScale().scheme()),
                 model.tuning() == null ? null : (ManifestDocument.TuningFields) model.tuning().toJson());
     }
 
@@ -168,12 +173,18 @@ public final class ModelFile {
             int rows = integer("rows", m.rows(), 0, Integer.MAX_VALUE);
             ModelColumns columns = columnsOf(object("columns", m.columns()));
             Described described = describedOf(m, columns, rows);
-            ReferenceRows stored = rowsOf(archive.read(needs(columns, rows)), columns);
+            String residualScheme = residualSchemeOf(m, columns);
+            List<ModelArchive.Need> needs = needs(columns, rows);
+            if (residualScheme != null) {
+                needs.add(new ModelArchive.Need(HELD_OUT, ModelArchive.ElementType.F64, rows));
+            }
+            ModelArchive.Contents contents = archive.read(needs);
+            ReferenceRows stored = rowsOf(contents, columns);
             checkCodes(stored, columns);
             checkOrigins(stored, described.source());
             StoredRowCheck.check(stored, columns, described.settings(), described.center(), described.spread(),
                     described.whitening());
-            return described.with(stored);
+            return withHeldOut(described.with(stored), contents, residualScheme);
         } catch (IllegalArgumentException e) {
             // Each check says what is wrong in a sentence of its own (the field, entry or row, and why).
             throw NearfitException.inFile(name, e.getMessage(), e);
@@ -221,6 +232,55 @@ public final class ModelFile {
         }
         needs.add(new ModelArchive.Need("source_line", ModelArchive.ElementType.I64, rows));
         return needs;
+    }
+
+    /** The entry of each stored row's held-out residual (f64, stored-row order); older files lack it. */
+    static final String HELD_OUT = "heldout_residual";
+
+    /**
+     * {@code flags.residual_scheme}: the {@code --cv} words of the scheme the stored held-out residuals come
+     * from, or null in files written before they were stored (then there is no such entry, and the reference
+     * z scale is one scale for the whole reference). Only for a number response.
+     */
+    private static String residualSchemeOf(ManifestDocument m, ModelColumns columns) {
+        String words = object("flags", m.flags()).residualScheme();
+        if (words == null) {
+            return null;
+        }
+        if (columns.categoryResponse()) {
+            throw ManifestDocument.bad("flags.residual_scheme", "must be absent for a category response");
+        }
+        if (!words.matches("[a-z0-9:+.]{1,64}")) {
+            throw ManifestDocument.bad("flags.residual_scheme", "is not a held-out scheme's words (such as block:1d)");
+        }
+        return words;
+    }
+
+    /**
+     * The model with its stored held-out residuals, checked: every value finite (the fit writes no other), and
+     * their median and 1.4826·MAD exactly the manifest's {@code flags.residual_median} and
+     * {@code flags.residual_scale} (both are computed from the same residuals, so any difference is damage).
+     */
+    private static ReferenceModel withHeldOut(ReferenceModel model, ModelArchive.Contents contents, String scheme) {
+        if (scheme == null) {
+            return model;
+        }
+        double[] heldOut = contents.doubles(HELD_OUT);
+        for (int i = 0; i < heldOut.length; i++) {
+            if (!Double.isFinite(heldOut[i])) {
+                throw new IllegalArgumentException("entry " + HELD_OUT + " holds " + heldOut[i] + " at stored row "
+                        + (i + 1) + "; a held-out residual is finite");
+            }
+        }
+        ReferenceModel.ResidualScale written = model.residualScale();
+        nearfit.knn.ZBasis.ReferenceResiduals found = nearfit.knn.Tuning.residualScale(heldOut);
+        if (Double.compare(found.median(), written.median()) != 0 || Double.compare(found.scale(), written.scale()) != 0) {
+            throw new IllegalArgumentException("entry " + HELD_OUT + " gives a median of " + spelled(found.median())
+                    + " and a scale of " + spelled(found.scale()) + ", but the manifest's \"flags\" say "
+                    + spelled(written.median()) + " and " + spelled(written.scale()));
+        }
+        return model.withResidualScale(new ReferenceModel.ResidualScale(written.median(), written.scale(), heldOut,
+                scheme));
     }
 
     private static ModelColumns columnsOf(ManifestDocument.ColumnFields col) {

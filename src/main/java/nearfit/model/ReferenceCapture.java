@@ -87,6 +87,31 @@ public final class ReferenceCapture {
                                                 ZBasis.ReferenceResiduals scale, TuningTable tuning, long sampled,
                                                 List<String> responseLabels, String group, List<String> groupLabels,
                                                 RowFacts facts) {
+        return captureHeldOut(toolVersion, source, engine, scale == null ? null
+                : new ReferenceModel.ResidualScale(scale.median(), scale.scale()), tuning, sampled, responseLabels,
+                group, groupLabels, facts);
+    }
+
+    /**
+     * As {@link #captureHeldOut(String, SourceInfo, KnnModel, ZBasis.ReferenceResiduals, TuningTable, long, List,
+     * String, List, RowFacts)}, with each reference row's held-out residual (canonical order, as
+     * {@code Tuning.heldOutResiduals} gives them) and the scheme's {@code --cv} words stored beside the rows, so
+     * {@code --z-scale reference} can take the residuals of a scored row's neighbours.
+     */
+    public static ReferenceModel captureHeldOut(String toolVersion, SourceInfo source, KnnModel engine,
+                                                double[] heldOut, String scheme, TuningTable tuning, long sampled,
+                                                List<String> responseLabels, String group, List<String> groupLabels,
+                                                RowFacts facts) {
+        ZBasis.ReferenceResiduals s = nearfit.knn.Tuning.residualScale(heldOut);
+        return captureHeldOut(toolVersion, source, engine,
+                new ReferenceModel.ResidualScale(s.median(), s.scale(), heldOut, scheme), tuning, sampled,
+                responseLabels, group, groupLabels, facts);
+    }
+
+    private static ReferenceModel captureHeldOut(String toolVersion, SourceInfo source, KnnModel engine,
+                                                 ReferenceModel.ResidualScale scale, TuningTable tuning, long sampled,
+                                                 List<String> responseLabels, String group, List<String> groupLabels,
+                                                 RowFacts facts) {
         ReferenceData data = engine.data();
         long[] lines = facts.lines();
         int[] groups = group == null ? null : facts.groups();
@@ -100,8 +125,7 @@ public final class ReferenceCapture {
                 group, groupLabels);
         InputTransform t = engine.transform();
         ReferenceModel.ResidualScale residual = scale == null
-                ? new ReferenceModel.ResidualScale(Double.NaN, Double.NaN)
-                : new ReferenceModel.ResidualScale(scale.median(), scale.scale());
+                ? new ReferenceModel.ResidualScale(Double.NaN, Double.NaN) : scale;
         return new ReferenceModel(toolVersion, Instant.now(), source, columns, engine.settings(),
                 t.center(), t.scale(), t.whitening(), residual,
                 tuning == null ? null : summary(tuning, sampled), rows);

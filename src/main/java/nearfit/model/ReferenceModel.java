@@ -24,7 +24,7 @@ import nearfit.knn.KnnSettings;
  * @param scaleSpread   per input, the divisor after centring (input units); 1 for no scaling
  * @param whitening     for the Mahalanobis metric, the d×d row-major lower-triangular matrix applied
  *                      to the scaled inputs; {@code null} for the other metrics
- * @param residualScale the reference's leave-one-out residual centre and scale for z
+ * @param residualScale the reference's held-out residuals (centre, scale, per row) for the reference z scale
  * @param tuning        the tuning table when k was tuned, or {@code null}
  * @param rows          the reference rows
  */
@@ -51,6 +51,10 @@ public record ReferenceModel(String toolVersion, Instant created, SourceInfo sou
         if (!Arrays.asList(FlagScale.offered()).contains(settings.flagScale())) {
             throw new IllegalArgumentException("a model file cannot store the z scale " + settings.flagScale().word());
         }
+        if (residualScale.heldOut() != null && residualScale.heldOut().length != rows.size()) {
+            throw new IllegalArgumentException("the held-out residuals have " + residualScale.heldOut().length
+                    + " values for " + rows.size() + " rows");
+        }
         if (settings.k() > rows.size()) {
             throw new IllegalArgumentException("k = " + settings.k() + " is more than the "
                     + rows.size() + " reference rows");
@@ -63,14 +67,36 @@ public record ReferenceModel(String toolVersion, Instant created, SourceInfo sou
                 residualScale, table, rows);
     }
 
-        /**
-     * The centre and scale of the reference's leave-one-out residuals: median and 1.4826·MAD (the
-     * MAD scaled to estimate a normal distribution's standard deviation; Iglewicz and Hoaglin 1993).
-     * For a category response both are NaN.
+    /** This model with another residual scale (say, with the per-row residuals read from its file). */
+    public ReferenceModel withResidualScale(ResidualScale scale) {
+        return new ReferenceModel(toolVersion, created, source, columns, settings, scaleCenter, scaleSpread, whitening,
+                scale, tuning, rows);
+    }
+
+    /**
+     * The reference's held-out residuals: their median and 1.4826·MAD (the MAD scaled to estimate a normal
+     * distribution's standard deviation; Iglewicz and Hoaglin 1993), and, in files that store them, each
+     * row's own residual and the scheme that held it out, from which {@code --z-scale reference} takes the
+     * median and MAD of a scored row's neighbours. For a category response the numbers are NaN.
      *
-     * @param median the median leave-one-out residual (response units)
-     * @param scale  1.4826 times the median absolute deviation (response units)
+     * @param median  the median held-out residual (response units)
+     * @param scale   1.4826 times the median absolute deviation (response units)
+     * @param heldOut each stored row's held-out residual (stored-row order), or {@code null} in files
+     *                written before they were stored (and for a category response)
+     * @param scheme  the held-out scheme's {@code --cv} words ({@code block:1d}, {@code loo}), or {@code null}
+     *                exactly when {@code heldOut} is
      */
-    public record ResidualScale(double median, double scale) {
+    public record ResidualScale(double median, double scale, double[] heldOut, String scheme) {
+        /** Checks that residuals and scheme come together. */
+        public ResidualScale {
+            if ((heldOut == null) != (scheme == null)) {
+                throw new IllegalArgumentException("held-out residuals need their scheme, and only then");
+            }
+        }
+
+        /** One scale for the whole reference, with no per-row residuals (older files, category responses). */
+        public ResidualScale(double median, double scale) {
+            this(median, scale, null, null);
+        }
     }
 }

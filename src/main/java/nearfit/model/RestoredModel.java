@@ -1,9 +1,11 @@
 package nearfit.model;
 
+import nearfit.knn.FlagScale;
 import nearfit.knn.InputTransform;
 import nearfit.knn.KnnModel;
 import nearfit.knn.KnnSettings;
 import nearfit.knn.ReferenceData;
+import nearfit.knn.ZBasis;
 
 /**
  * A model file's contents with the engine model rebuilt from its stored rows, scaling and settings,
@@ -25,6 +27,29 @@ public record RestoredModel(ReferenceModel stored, KnnModel engine) {
             return r;
         }
         return new RestoredModel(stored, r.engine().withSettings(wanted));
+    }
+
+    /**
+     * What divides a scored row's residual under the settings in effect: the neighbours' spread for
+     * {@code local}; for {@code reference} the neighbours' held-out residuals when the file stores them
+     * ({@link ZBasis.NeighbourResiduals}, mapped to the engine's positions), else the one reference-wide
+     * scale of older files ({@link ZBasis.ReferenceResiduals}).
+     */
+    public ZBasis zBasis() {
+        if (settings().flagScale() == FlagScale.LOCAL_SD) {
+            return new ZBasis.LocalSpread();
+        }
+        ReferenceModel.ResidualScale scale = stored.residualScale();
+        double[] heldOut = scale.heldOut();
+        if (heldOut == null) {
+            return new ZBasis.ReferenceResiduals(scale.median(), scale.scale());
+        }
+        int[] ids = engine.data().rowIds();
+        double[] byPosition = new double[ids.length];
+        for (int p = 0; p < ids.length; p++) {
+            byPosition[p] = heldOut[ids[p]];
+        }
+        return new ZBasis.NeighbourResiduals(byPosition, scale.median(), scale.scale());
     }
 
     /** The settings in effect. */

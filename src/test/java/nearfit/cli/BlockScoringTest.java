@@ -30,6 +30,8 @@ import picocli.CommandLine;
  * worst rows' time, inputs, band and residual. Line 177's fit and z moved when ties became tolerant of
  * rounding: its 12th and 13th neighbours (14.08 m/s at 14.9 and 19.9 °C, about 17.4 °C) are equally far in
  * exact arithmetic and now share the 12th place (fit 1978.67 → 1980.26 kW; the reference z scale moved too).
+ * When the reference z scale came to follow the curve (the neighbours' held-out residuals), only the z column of
+ * predict-wind-reference-z changed, and check's header and JSON gained the words of the z basis.
  */
 class BlockScoringTest {
     private static final String RESOURCES = "/cli/blocks/";

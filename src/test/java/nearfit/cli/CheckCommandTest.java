@@ -167,8 +167,22 @@ class CheckCommandTest {
         assertEquals("data: " + healthy, lines.get(1));
         assertEquals("settings: k 15 (given at fit, not tuned), metric euclidean, weights uniform, scaling z, "
                 + "band q05-q95", lines.get(2));
-        assertTrue(lines.get(3).startsWith("flags: |z| > 3.5, z scale local (reference residuals: median "), lines.get(3));
+        assertTrue(lines.get(3).startsWith("flags: |z| > 3.5, z scale local: the neighbours' spread of responses "
+                + "(reference residuals: median "), lines.get(3));
         assertTrue(lines.get(4).matches("run: nearfit \\S+ at \\d{4}-.*Z"), lines.get(4));
+    }
+
+    @Test
+    void theReferenceScaleNamesTheNeighboursHeldOutResidualsAndItsFloor() {
+        CliRun.Result r = CliRun.inProcess("check", model, healthy.toString(), "--quiet", "--z-scale", "reference",
+                "--format", "json");
+        Map<?, ?> checked = (Map<?, ?>) ((Map<?, ?>) JsonTrees.parse(r.out())).get("checked");
+        assertEquals("neighbour_residuals", checked.get("z_basis"), checked.toString());
+        assertEquals("loo", checked.get("residual_scheme")); // 50 hours of rows: --cv auto holds one row out
+        assertEquals(0.25 * (Double) checked.get("residual_scale"), (Double) checked.get("z_floor"), 1e-12);
+        CliRun.Result text = CliRun.inProcess("check", model, healthy.toString(), "--quiet", "--z-scale", "reference");
+        assertTrue(text.out().contains("z scale reference: the median and 1.4826 MAD of the neighbours' held-out "
+                + "residuals (loo), at least "), text.out());
     }
 
     @Test

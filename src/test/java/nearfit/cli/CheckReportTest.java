@@ -91,7 +91,9 @@ class CheckReportTest {
         Map<?, ?> checked = (Map<?, ?>) m.get("checked");
         assertEquals(List.of("model", "model_sha256", "data", "row_condition", "inputs", "response", "group",
                 "time_column", "k", "k_chosen_by", "metric", "weights", "scaling", "band", "threshold", "z_scale",
-                "residual_median", "residual_scale", "tool_version", "run_at"), List.copyOf(checked.keySet()));
+                "residual_median", "residual_scale", "z_basis", "residual_scheme", "z_floor", "tool_version", "run_at"),
+                List.copyOf(checked.keySet()));
+        assertEquals("neighbour_spread", checked.get("z_basis"));
         Map<?, ?> worst = (Map<?, ?>) ((List<?>) m.get("worst")).get(0);
         assertEquals(List.of("line", "time", "group", "inputs", "response", "fit", "band_lo", "band_hi", "resid", "z",
                 "beyond_reference"), List.copyOf(worst.keySet()));
@@ -105,7 +107,7 @@ class CheckReportTest {
         String text = s.toString();
         assertTrue(text.startsWith("model: spring.nfm (sha256 ab12)\ndata: site.csv\n"
                 + "settings: k 30 (given at fit, not tuned), metric euclidean, weights uniform, scaling z, band q05-q95\n"
-                + "flags: |z| > 3.5, z scale local (reference residuals: median 0.5, 1.4826 MAD 20)\n"
+                + "flags: |z| > 3.5, z scale local: the neighbours' spread of responses (reference residuals: median 0.5, 1.4826 MAD 20)\n"
                 + "run: nearfit dev at 2026-12-02T12:00:00Z\n"), text);
         assertTrue(text.contains("\nrows 6, scored 5, flagged 2 (40.00 %, |z| > 3.5), limit 50.00 %: PASSED\n"), text);
         assertTrue(text.contains("line time                 turbine           wind_ms     power_kw          fit"), text);

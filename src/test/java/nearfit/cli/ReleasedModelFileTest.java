@@ -65,6 +65,27 @@ class ReleasedModelFileTest {
         assertEquals(40, m.rows().size());
     }
 
+    @Test
+    void aModelWrittenByRelease010ChecksOnOneReferenceWideScaleAndSaysSo() throws IOException {
+        // release 0.1.0 stored no per-row held-out residuals: --z-scale reference falls back to the stored
+        // median and 1.4826 MAD, and the report says so in one note line
+        Path model = copy("tiny-v0.1.0.nfm");
+        Path query = copy("tiny-query.csv");
+
+        CliRun.Result check = CliRun.inProcess("check", "--quiet", "--z-scale", "reference", "--limit", "100",
+                model.toString(), query.toString());
+
+        assertEquals(0, check.status(), check.toString());
+        List<String> lines = check.out().lines().toList();
+        assertEquals("flags: |z| > 3.5, z scale reference: one reference-wide scale (reference residuals: median "
+                + "-8.9353, 1.4826 MAD 71.159)", lines.get(3));
+        assertEquals("note: the model file stores no per-row held-out residuals (written before they were), so z "
+                + "divides by one scale for the whole reference; fit again to have it follow the curve", lines.get(4));
+        CliRun.Result json = CliRun.inProcess("check", "--quiet", "--z-scale", "reference", "--limit", "100",
+                "--format", "json", model.toString(), query.toString());
+        assertEquals(true, json.out().contains("\"z_basis\":\"reference_wide\""), json.out());
+    }
+
     private Path copy(String name) throws IOException {
         Path target = dir.resolve(name);
         try (InputStream in = ReleasedModelFileTest.class.getResourceAsStream("/model/" + name)) {

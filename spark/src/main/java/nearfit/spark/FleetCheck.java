@@ -120,7 +120,8 @@ final class FleetCheck implements Callable<Integer> {
                 run.stored.residualScale().median(),
                 run.stored.residualScale().scale(), FleetMain.toolVersion(),
                 Instant.now().truncatedTo(ChronoUnit.SECONDS), c.inputs(), c.response(), run.input.groupColumn,
-                run.input.timeColumn);
+                run.input.timeColumn)
+                .withBasis(CheckReport.Basis.of(run.driverModel.basis, run.stored.residualScale().scheme()));
         ReferenceReach reach = run.driverModel.reach;
         int d = c.inputs().size();
         double[] min = new double[d];

@@ -60,10 +60,7 @@ final class WorkerModel {
     static WorkerModel restore(ReferenceModel stored, String zScale, int threads) {
         FlagScale flagScale = flagScale(zScale);
         RestoredModel r = RestoredModel.of(stored, withZScale(stored.settings(), flagScale), threads);
-        ReferenceModel.ResidualScale scale = stored.residualScale();
-        ZBasis basis = flagScale == FlagScale.LOCAL_SD ? new ZBasis.LocalSpread()
-                : new ZBasis.ReferenceResiduals(scale.median(), scale.scale());
-        return new WorkerModel(r.engine(), ReferenceReach.of(r.engine()), basis, stored.columns().responseLabels());
+        return new WorkerModel(r.engine(), ReferenceReach.of(r.engine()), r.zBasis(), stored.columns().responseLabels());
     }
 
     static KnnSettings withZScale(KnnSettings s, FlagScale zScale) {
