@@ -25,7 +25,7 @@ import picocli.CommandLine.Spec;
 @Command(name = "describe", mixinStandardHelpOptions = true,
         description = "Summarise each column of a CSV file (plain, gzip or - for standard input) and report "
                 + "ragged rows and bad cells.")
-final class DescribeCommand implements Callable<Integer>, PlainLine.Streams {
+final class DescribeCommand extends PlainLine.Streams implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "FILE", description = "The CSV file (plain or gzip), Parquet file, or folder of Parquet files; - for standard input.")
     String file;
 
@@ -41,19 +41,10 @@ final class DescribeCommand implements Callable<Integer>, PlainLine.Streams {
     @Spec
     CommandSpec spec;
 
-    /** The streams the quick lane gives ({@link PlainLine}); null under the parser, whose are in {@link #spec}. */
-    private PrintWriter out;
-    private PrintWriter err;
-
-    @Override
-    public void streams(PrintWriter out, PrintWriter err) {
-        this.out = out;
-        this.err = err;
-    }
-
     @Override
     public Integer call() {
-        return out != null ? run(out, err) : run(spec.commandLine().getOut(), spec.commandLine().getErr());
+        return givenOut() != null ? run(givenOut(), givenErr())
+                : run(spec.commandLine().getOut(), spec.commandLine().getErr());
     }
 
     /** Runs with output to {@code out} and warnings and progress to {@code err}; the exit status. */

@@ -18,7 +18,7 @@ import picocli.CommandLine.Spec;
  * typed options converting to the knn enums ({@link OptionChoices}), null when not given (predict and
  * check then keep the model's); {@link #settings} fills in the defaults the help states.
  */
-final class ModelOptions implements PlainLine.Streams {
+final class ModelOptions extends PlainLine.Streams {
     @Option(names = "--metric", converter = OptionChoices.MetricWords.class,
             completionCandidates = OptionChoices.MetricWords.class, paramLabel = "METRIC",
             description = "Distance between rows: ${COMPLETION-CANDIDATES} (default: euclidean; predict and check: the model's).")
@@ -75,24 +75,14 @@ final class ModelOptions implements PlainLine.Streams {
     @Spec(Spec.Target.MIXEE)
     CommandSpec command;
 
-    /** The streams the quick lane gives ({@link PlainLine}); null under the parser, whose are in {@link #command}. */
-    private PrintWriter out;
-    private PrintWriter err;
-
-    @Override
-    public void streams(PrintWriter out, PrintWriter err) {
-        this.out = out;
-        this.err = err;
-    }
-
     /** Standard output: the results (CSV, reports, text plots, PNG bytes with {@code -}). */
     PrintWriter out() {
-        return out != null ? out : command.commandLine().getOut();
+        return givenOut() != null ? givenOut() : command.commandLine().getOut();
     }
 
     /** Standard error: progress, notes and warnings, whatever goes to standard output. */
     PrintWriter err() {
-        return err != null ? err : command.commandLine().getErr();
+        return givenErr() != null ? givenErr() : command.commandLine().getErr();
     }
 
     /** A model's settings with the options given on this command line in place of its own, on {@link #threads}. */

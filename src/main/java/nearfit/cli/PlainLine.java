@@ -32,9 +32,28 @@ import picocli.CommandLine;
  * same lines.
  */
 final class PlainLine {
-    /** The command or mixin objects that hold a {@code @Spec} for their streams take them from the quick lane here. */
-    interface Streams {
-        void streams(PrintWriter out, PrintWriter err);
+    /**
+     * What a command or mixin that holds a {@code @Spec} for its streams extends: the streams the quick lane
+     * gives, null under the parser (whose streams are in the spec).
+     */
+    abstract static class Streams {
+        private PrintWriter out;
+        private PrintWriter err;
+
+        final void streams(PrintWriter out, PrintWriter err) {
+            this.out = out;
+            this.err = err;
+        }
+
+        /** The quick lane's standard output, or null under the parser. */
+        final PrintWriter givenOut() {
+            return out;
+        }
+
+        /** The quick lane's standard error, or null under the parser. */
+        final PrintWriter givenErr() {
+            return err;
+        }
     }
 
     /** A command read from a plain line, its fields set; {@code debug} the inherited {@code --debug} flag. */
