@@ -173,6 +173,9 @@ final class PlainLine {
                 return null;
             }
             Object defaultValue = slot.elements().get("defaultValue");
+            if (defaultValue instanceof String d && d.contains("${")) {
+                return null; // the parser interpolates variables in a default
+            }
             if (defaultValue != null) {
                 slot.field().set(slot.target(), convert(slot, (String) defaultValue));
             }
