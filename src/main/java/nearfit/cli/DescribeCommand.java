@@ -25,7 +25,7 @@ import picocli.CommandLine.Spec;
 @Command(name = "describe", mixinStandardHelpOptions = true,
         description = "Summarise each column of a CSV file (plain, gzip or - for standard input) and report "
                 + "ragged rows and bad cells.")
-final class DescribeCommand implements Callable<Integer> {
+final class DescribeCommand extends PlainLine.Streams implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "FILE", description = "The CSV file (plain or gzip), Parquet file, or folder of Parquet files; - for standard input.")
     String file;
 
@@ -43,61 +43,8 @@ final class DescribeCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        return run(spec.commandLine().getOut(), spec.commandLine().getErr());
-    }
-
-    /**
-     * This command read from a plain command line without the option parser, or null for any other line.
-     * Building the parser's model of a command costs a fresh process about 0.3 s of CPU, more than the rest
-     * of {@code describe} on a small file (docs/bench-startup.md). A plain line is {@code describe}, one file
-     * and at most one each of {@code --format WORD} (or {@code --format=WORD}), {@code --quiet} and
-     * {@code --debug}; anything else (help, a misspelt option, a repeat, a word not allowed, an {@code @}file,
-     * {@code --}) goes to the parser, whose messages stay the only ones. QuickLaneTest runs both lanes on the
-     * same lines.
-     */
-    static DescribeCommand fromPlainLine(String[] args) {
-        if (args.length < 2 || !args[0].equals("describe")) {
-            return null;
-        }
-        DescribeCommand c = new DescribeCommand();
-        c.format = OptionChoices.DescribeFormat.TABLE;
-        boolean formatGiven = false;
-        boolean debug = false;
-        for (int i = 1; i < args.length; i++) {
-            String a = args[i];
-            String word = null;
-            if (a.equals("--format") && i + 1 < args.length && !args[i + 1].startsWith("-")) {
-                word = args[++i];
-            } else if (a.startsWith("--format=")) {
-                word = a.substring("--format=".length());
-            } else if (a.equals("--quiet") && !c.quiet) {
-                c.quiet = true;
-                continue;
-            } else if (a.equals("--debug") && !debug) {
-                debug = true;
-                continue;
-            } else if (c.file == null && !a.isEmpty() && (a.equals("-") || !a.startsWith("-")) && !a.startsWith("@")) {
-                c.file = a;
-                continue;
-            } else {
-                return null;
-            }
-            if (formatGiven) {
-                return null;
-            }
-            formatGiven = true;
-            String given = word.trim().toLowerCase(Locale.ROOT);
-            c.format = null;
-            for (OptionChoices.DescribeFormat f : OptionChoices.DescribeFormat.values()) {
-                if (OptionChoices.word(f).equals(given)) {
-                    c.format = f;
-                }
-            }
-            if (c.format == null) {
-                return null;
-            }
-        }
-        return c.file == null ? null : c;
+        return givenOut() != null ? run(givenOut(), givenErr())
+                : run(spec.commandLine().getOut(), spec.commandLine().getErr());
     }
 
     /** Runs with output to {@code out} and warnings and progress to {@code err}; the exit status. */

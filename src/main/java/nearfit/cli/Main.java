@@ -26,10 +26,10 @@ public final class Main implements Runnable {
     /**
      * The sub-commands, in the order help lists them. Not in {@code @Command(subcommands = ...)}: building the
      * model of every command by reflection took about 200 ms of a cold start (two thirds of a small
-     * {@code describe}), so a command line that names one command builds only that one ({@link #commandLine}).
+     * {@code describe}), so a command line that names one command builds only that one ({@link #commandLine}),
+     * and a plain line none ({@link PlainLine}).
      */
     private static final class Commands {
-        /** In a holder of its own, so that the quick lane of {@link #run(String[], PrintWriter, PrintWriter)} loads none. */
         static final List<Class<?>> ALL = List.of(ViewCommand.class, DescribeCommand.class,
                 PlotCommand.class, TuneCommand.class, FitCommand.class, PredictCommand.class, CheckCommand.class,
                 CompletionCommand.class);
@@ -76,24 +76,29 @@ public final class Main implements Runnable {
      * @return the exit status
      */
     public static int run(String[] args, PrintWriter out, PrintWriter err) {
-        DescribeCommand plain = DescribeCommand.fromPlainLine(args);
+        PlainLine.Parsed plain = plainLine(args, out, err);
         if (plain == null) {
             return run(args, out, err, CommandLine.defaultFactory());
         }
-        // The quick lane: no parser is built (DescribeCommand#fromPlainLine); failures end as the parser's lane ends them.
-        boolean debug = java.util.Arrays.asList(args).contains("--debug");
+        // The quick lane: no parser model is built (PlainLine); failures end as the parser's lane ends them.
         int status;
         try {
-            status = plain.run(out, err);
+            Object result = plain.command().call();
+            status = result instanceof Integer i ? i : 0;
         } catch (OutOfMemoryError ex) {
             err.println(outOfMemory());
             status = EXIT_USAGE;
-        } catch (RuntimeException ex) {
-            status = failed(ex, err, debug);
+        } catch (Exception ex) {
+            status = failed(ex, err, plain.debug());
         }
         out.flush();
         err.flush();
         return status;
+    }
+
+    /** The command a plain line names, ready to run, or null when the line is for the parser ({@link PlainLine}). */
+    static PlainLine.Parsed plainLine(String[] args, PrintWriter out, PrintWriter err) {
+        return PlainLine.read(args, Main.class, Commands.ALL, out, err);
     }
 
     /** As {@link #run(String[], PrintWriter, PrintWriter)} through the option parser always, with commands and

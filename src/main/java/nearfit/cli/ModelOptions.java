@@ -18,7 +18,7 @@ import picocli.CommandLine.Spec;
  * typed options converting to the knn enums ({@link OptionChoices}), null when not given (predict and
  * check then keep the model's); {@link #settings} fills in the defaults the help states.
  */
-final class ModelOptions {
+final class ModelOptions extends PlainLine.Streams {
     @Option(names = "--metric", converter = OptionChoices.MetricWords.class,
             completionCandidates = OptionChoices.MetricWords.class, paramLabel = "METRIC",
             description = "Distance between rows: ${COMPLETION-CANDIDATES} (default: euclidean; predict and check: the model's).")
@@ -77,12 +77,12 @@ final class ModelOptions {
 
     /** Standard output: the results (CSV, reports, text plots, PNG bytes with {@code -}). */
     PrintWriter out() {
-        return command.commandLine().getOut();
+        return givenOut() != null ? givenOut() : command.commandLine().getOut();
     }
 
     /** Standard error: progress, notes and warnings, whatever goes to standard output. */
     PrintWriter err() {
-        return command.commandLine().getErr();
+        return givenErr() != null ? givenErr() : command.commandLine().getErr();
     }
 
     /** A model's settings with the options given on this command line in place of its own, on {@link #threads}. */
