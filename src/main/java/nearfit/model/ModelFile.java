@@ -183,7 +183,7 @@ public final class ModelFile {
             checkCodes(stored, columns);
             checkOrigins(stored, described.source());
             StoredRowCheck.check(stored, columns, described.settings(), described.center(), described.spread(),
-                    described.whitening());
+                    described.whitening(), described.source().rowSource());
             return withHeldOut(described.with(stored), contents, residualScheme);
         } catch (IllegalArgumentException e) {
             // Each check says what is wrong in a sentence of its own (the field, entry or row, and why).

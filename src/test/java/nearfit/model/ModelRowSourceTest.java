@@ -89,6 +89,20 @@ class ModelRowSourceTest {
     }
 
     @Test
+    void aDamagedStoredRowOfParquetOriginIsNamedByFileAndRowIndexNotByItsPackedValue() {
+        Path p = dir.resolve("nan.nfm");
+        ReferenceModel m = parquetSample(new long[] {0, 1, SECOND_FILE_ROW_7, 3});
+        Map<String, Object> arrays = arraysOf(m);
+        double[] x = m.rows().inputs()[1].clone();
+        x[2] = Double.NaN;
+        arrays.put("input.1", x);
+        ModelArchive.write(p, false, List.of(), ModelFile.manifestOf(m), arrays);
+        NearfitException e = assertThrows(NearfitException.class, () -> ModelFile.read(p));
+        assertEquals(p + ": entry input.1 (" + m.columns().inputs().get(1) + ") holds NaN at stored row 3 (source row "
+                + "set/unit=T02/part-0.parquet:7); stored inputs must be finite", e.getMessage());
+    }
+
+    @Test
     void aParquetFileEntryWithABadDigestIsADamagedModelNamingTheField() {
         Path p = dir.resolve("digest.nfm");
         ReferenceModel m = parquetSample(new long[] {0, 1, 2, 3});
