@@ -117,13 +117,15 @@ final class CheckCommand implements Callable<Integer> {
         } else {
             // Flagged rows are written as they are found, so none is kept in memory; too few rows scored
             // fails inside the write, so no file is left behind.
-            PredictionCsv.open(flaggedOutput, model.force, inputs, out, scored, columns.response(), List.of(), csv -> {
+            PredictionCsv.Body flaggedRows = csv -> {
                 scored.forEachBlock(b -> {
                     tally.add(b);
                     csv.rows(b, (block, i) -> block.scores().flagged()[i]);
                 });
                 requireRows(tally, scored, leastRows);
-            });
+            };
+            PredictionCsv.open(flaggedOutput, model.force, inputs, out, scored, columns.response(), List.of(), reach,
+                    flaggedRows);
         }
         CheckReport report = tally.report(limitFraction, maxOutsideFraction);
         if (CommandOutput.isStandardOutput(flaggedOutput)) {

@@ -269,21 +269,9 @@ public record CheckReport(About about, long rows, long scored, long flagged, dou
             if (reach == null) {
                 return false;
             }
-            boolean out = false;
-            for (int j = 0; j < x.length; j++) {
-                if (reach.below(j, x[j][i])) {
-                    below[j]++;
-                    out = true;
-                } else if (reach.above(j, x[j][i])) {
-                    above[j]++;
-                    out = true;
-                }
-            }
-            if (reach.far(windowWidth)) {
-                far++;
-                out = true;
-            }
-            return out;
+            int met = reach.rulesMet(x, i, windowWidth, below, above);
+            far += (met & ReferenceReach.FAR) != 0 ? 1 : 0;
+            return met != 0;
         }
 
         private WorstRow worstRow(ScoredRows.Block b, int i, int group, boolean out) {

@@ -105,7 +105,8 @@ final class LeaveOneOutCsv {
         }
         // Source order: by line, or by file and then row index (the packed value's order).
         IntArrays.quickSort(order, (a, b) -> Long.compare(lines[positions[a]], lines[positions[b]]));
-        sink.header(ResultCsv.rowColumns(origin, null, columns.group(), columns.inputs(), columns.response(), false));
+        sink.header(ResultCsv.rowColumns(origin, null, columns.group(), columns.inputs(), columns.response(), false,
+                false));
         for (int i : order) {
             int p = positions[i];
             ResultCsv.origin(sink, origin, lines[p]);

@@ -6,6 +6,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
 
+import nearfit.knn.ReferenceReach;
 import nearfit.model.ModelFile;
 import nearfit.model.ReferenceModel;
 import nearfit.model.RestoredModel;
@@ -53,8 +54,11 @@ final class PredictCommand implements Callable<Integer> {
         } else {
             ScoredRows scored = ScoredRows.open(restored, file, model, restored.settings().flagThreshold(),
                     model.err());
+            // A category response's rows carry no beyond column (its votes report no window width).
+            ReferenceReach reach = scored.categoryResponse() ? null : ReferenceReach.of(restored.engine());
             PredictionCsv.write(scored, restored.stored().columns().response(),
-                    restored.stored().columns().responseLabels(), output, model.force, inputs, out, (b, i) -> true);
+                    restored.stored().columns().responseLabels(), reach, output, model.force, inputs, out,
+                    (b, i) -> true);
         }
         out.flush();
         return 0;

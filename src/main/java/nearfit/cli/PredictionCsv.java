@@ -9,14 +9,16 @@ import java.util.List;
 
 import nearfit.model.ResultCsv;
 import nearfit.model.ResultParquet;
+import nearfit.knn.ReferenceReach;
 import nearfit.model.ResultSink;
 import nearfit.table.RowSource;
 
 /**
  * Writes scored rows through {@link ResultCsv}, the one CSV writer: {@code line}, the file's first time
  * column (when it has one and it is not an input), the group, the inputs, the response, then
- * {@code fit, band_lo, band_hi, resid, z} for a number response or {@code class, share} for a category
- * response.
+ * {@code fit, band_lo, band_hi, resid, z, beyond} for a number response or {@code class, share} for a category
+ * response. {@code beyond} is the reference's one per-row rule ({@link ReferenceReach#rulesMet}): 1 when the
+ * row's fit is an extrapolation, 0 when not, empty where there is no fit.
  */
 final class PredictionCsv {
     /** Which rows of a block to write. */
@@ -31,31 +33,30 @@ final class PredictionCsv {
     private final List<String> classLabels;
     /** Whether the time column is written on its own (it is not one of the inputs). */
     private final boolean timeColumn;
-
-    /** Starts a CSV of {@code source}'s rows on {@code w} and writes its header. */
-    PredictionCsv(Writer w, ScoredRows source, String responseName, List<String> classLabels) throws IOException {
-        this(new ResultCsv(w), source, responseName, classLabels);
-    }
+    /** The reference's reach for the {@code beyond} column (a number response), or null for none. */
+    private final ReferenceReach reach;
 
     /** Starts {@code sink} (a CSV or Parquet form) with the columns of {@code source}'s rows. */
-    PredictionCsv(ResultSink sink, ScoredRows source, String responseName, List<String> classLabels) throws IOException {
+    private PredictionCsv(ResultSink sink, ScoredRows source, String responseName, List<String> classLabels,
+                          ReferenceReach reach) throws IOException {
         this.csv = sink;
         this.rowSource = source.rowSource();
         this.source = source;
         this.classLabels = classLabels;
         this.timeColumn = source.time() != null && !source.inputNames().contains(source.time().name());
+        this.reach = source.categoryResponse() ? null : reach;
         csv.header(ResultCsv.rowColumns(rowSource, timeColumn ? source.time().name() : null,
                 source.group() == null ? null : source.group().name(), source.inputNames(),
-                source.hasResponse() ? responseName : null, source.categoryResponse()));
+                source.hasResponse() ? responseName : null, source.categoryResponse(), this.reach != null));
     }
 
     /**
      * Scores every row of {@code s} block by block and writes those {@code filter} keeps to {@code target}, or
      * to standard output when it is {@code null} or {@code -}.
      */
-    static void write(ScoredRows s, String responseName, List<String> classLabels, Path target, boolean force,
-                      Collection<Path> inputs, PrintWriter stdout, RowFilter filter) {
-        open(target, force, inputs, stdout, s, responseName, classLabels, csv -> {
+    static void write(ScoredRows s, String responseName, List<String> classLabels, ReferenceReach reach, Path target,
+                      boolean force, Collection<Path> inputs, PrintWriter stdout, RowFilter filter) {
+        open(target, force, inputs, stdout, s, responseName, classLabels, reach, csv -> {
             s.forEachBlock(b -> csv.rows(b, filter));
         });
     }
@@ -69,22 +70,22 @@ final class PredictionCsv {
     /**
      * Opens the rows' output: Parquet when {@code target}'s name ends in {@code .parquet} (any case), else
      * CSV; standard output ({@code null} or {@code -}) is always CSV. Writes the header, runs {@code body},
-     * then ends the file.
+     * then ends the file. With {@code reach} not null, a number response's rows end with {@code beyond}.
      */
     static void open(Path target, boolean force, Collection<Path> inputs, PrintWriter stdout, ScoredRows s,
-                     String responseName, List<String> classLabels, Body body) {
+                     String responseName, List<String> classLabels, ReferenceReach reach, Body body) {
         if (isParquet(target)) {
             CommandOutput.bytes(target, force, inputs, stdout, out -> {
                 java.io.OutputStream buffered = new java.io.BufferedOutputStream(out, 1 << 16);
                 PredictionCsv rows = new PredictionCsv(new ResultParquet(buffered, "nearfit " + ToolVersion.get()), s,
-                        responseName, classLabels);
+                        responseName, classLabels, reach);
                 body.writeTo(rows);
                 rows.csv.finish();
             });
             return;
         }
         CommandOutput.text(target, force, inputs, stdout, w -> {
-            PredictionCsv rows = new PredictionCsv(w, s, responseName, classLabels);
+            PredictionCsv rows = new PredictionCsv(new ResultCsv(w), s, responseName, classLabels, reach);
             body.writeTo(rows);
             rows.csv.finish();
         });
@@ -147,6 +148,13 @@ final class PredictionCsv {
         csv.number(b.scores().fit()[i]).number(b.scores().bandLow()[i]).number(b.scores().bandHigh()[i]);
         if (hasResponse) {
             csv.number(b.scores().residual()[i]).number(b.scores().z()[i]);
+        }
+        if (reach != null) {
+            if (Double.isNaN(b.scores().fit()[i])) {
+                csv.empty();
+            } else {
+                csv.whole(reach.rulesMet(b.x(), i, b.estimates().windowWidth()[i], null, null) != 0 ? 1 : 0);
+            }
         }
     }
 }

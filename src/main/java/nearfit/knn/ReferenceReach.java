@@ -141,6 +141,41 @@ public final class ReferenceReach {
         return sampledRows;
     }
 
+    /** {@link #rulesMet} bit: some input of the row lies below or above the reference's range of it. */
+    public static final int OUTSIDE_RANGE = 1;
+    /** {@link #rulesMet} bit: the row is far from every reference row ({@link #far}). */
+    public static final int FAR = 2;
+
+    /**
+     * The one per-row rule every face applies (check's counts and worst rows, the written rows' {@code beyond}
+     * column, the fleet jobs): which of the two rules row i of a block meets, as {@link #OUTSIDE_RANGE} and
+     * {@link #FAR} bits, 0 for a row within the reference. When {@code below} and {@code above} are not null,
+     * each input outside its range adds one to {@code below[j]} or {@code above[j]}; a missing input (NaN)
+     * meets neither range rule.
+     *
+     * @param x           one array per model input (input units), as the block holds them
+     * @param i           the row's position in the block
+     * @param windowWidth the row's window width, as the model's estimates report it
+     */
+    public int rulesMet(double[][] x, int i, double windowWidth, long[] below, long[] above) {
+        int met = 0;
+        for (int j = 0; j < x.length; j++) {
+            double v = x[j][i];
+            if (v < min[j]) {
+                met = OUTSIDE_RANGE;
+                if (below != null) {
+                    below[j]++;
+                }
+            } else if (v > max[j]) {
+                met = OUTSIDE_RANGE;
+                if (above != null) {
+                    above[j]++;
+                }
+            }
+        }
+        return far(windowWidth) ? met | FAR : met;
+    }
+
     /** Whether a row with this window width is far from every reference row; false when the rule is off. */
     public boolean far(double windowWidth) {
         return windowWidth > FAR_FACTOR * referenceWidth;

@@ -41,6 +41,8 @@ public final class ResultCsv implements ResultSink {
     public static final String SHARE = "share";
     public static final String WINDOW_WIDTH = "window_width";
     public static final String NEIGHBOURS = "neighbours";
+    /** 1 when a scored row lies beyond the reference (outside an input's range or far from every row), else 0. */
+    public static final String BEYOND = "beyond";
 
     /** RFC 4180 quoting with {@code \n} line ends (see DEVELOPERS, Decisions). */
     private static final CSVFormat FORMAT = CSVFormat.RFC4180.builder().setRecordSeparator('\n').get();
@@ -65,18 +67,19 @@ public final class ResultCsv implements ResultSink {
      * @param inputs    the model's inputs
      * @param response  the response, or {@code null} when the rows have none
      * @param category  whether the response is a category ({@code class, share} instead of fit and band)
+     * @param beyond    whether a number response's rows end with {@link #BEYOND} (rows scored against a model)
      */
     public static List<String> rowColumns(String time, String group, List<String> inputs, String response,
-                                          boolean category) {
-        return rowColumns(RowSource.CSV_LINES, time, group, inputs, response, category);
+                                          boolean category, boolean beyond) {
+        return rowColumns(RowSource.CSV_LINES, time, group, inputs, response, category, beyond);
     }
 
     /**
-     * As {@link #rowColumns(String, String, List, String, boolean)} for rows of {@code source}: a CSV's rows
-     * start with {@code line}, one Parquet file's with {@code row}, a data set's with {@code file, row}.
+     * As {@link #rowColumns(String, String, List, String, boolean, boolean)} for rows of {@code source}: a CSV's
+     * rows start with {@code line}, one Parquet file's with {@code row}, a data set's with {@code file, row}.
      */
     public static List<String> rowColumns(RowSource source, String time, String group, List<String> inputs,
-                                          String response, boolean category) {
+                                          String response, boolean category, boolean beyond) {
         List<String> names = new ArrayList<>(originColumns(source));
         if (time != null) {
             names.add(time);
@@ -96,6 +99,9 @@ public final class ResultCsv implements ResultSink {
             if (response != null) {
                 names.add(RESID);
                 names.add(Z);
+            }
+            if (beyond) {
+                names.add(BEYOND);
             }
         }
         return names;

@@ -31,7 +31,8 @@ import picocli.CommandLine;
  * rounding: its 12th and 13th neighbours (14.08 m/s at 14.9 and 19.9 °C, about 17.4 °C) are equally far in
  * exact arithmetic and now share the 12th place (fit 1978.67 → 1980.26 kW; the reference z scale moved too).
  * When the reference z scale came to follow the curve (the neighbours' held-out residuals), only the z column of
- * predict-wind-reference-z changed, and check's header and JSON gained the words of the z basis.
+ * predict-wind-reference-z changed, and check's header and JSON gained the words of the z basis. The rows
+ * then gained a last column, {@code beyond} (every earlier cell kept), the rule check counts by.
  */
 class BlockScoringTest {
     private static final String RESOURCES = "/cli/blocks/";
@@ -102,6 +103,33 @@ class BlockScoringTest {
         assertEquals(expected, r.out());
         assertTrue(expected.contains(",0.4\n") && expected.contains(",,\n"),
                 "the expected file holds split votes and a row with a missing input");
+    }
+
+    @ParameterizedTest(name = "block of {0} rows")
+    @ValueSource(ints = {ScoredRows.BLOCK_ROWS, 7, 1})
+    void predictMarksBeyondTheReferenceExactlyTheRowsCheckCountsThere(int blockRows) throws IOException {
+        CliRun.Result p = run(blockRows, "predict", windModel, file("wind-new.csv"), "--quiet");
+        List<String> lines = p.out().lines().toList();
+        List<String> header = List.of(lines.get(0).split(","));
+        int z = header.indexOf("z");
+        int beyond = header.indexOf("beyond");
+        int wind = header.indexOf("wind_ms");
+        assertEquals(header.size() - 1, beyond, lines.get(0));
+        int scoredBeyond = 0;
+        int aboveWindRange = 0;
+        for (String line : lines.subList(1, lines.size())) {
+            String[] c = line.split(",", -1);
+            if (!c[z].isEmpty() && c[beyond].equals("1")) {
+                scoredBeyond++;
+                // The reference's wind speeds end at 15.95 m/s (check's report below names that range).
+                aboveWindRange += Double.parseDouble(c[wind]) > 15.95 ? 1 : 0;
+            }
+        }
+        CliRun.Result r = run(blockRows, "check", windModel, file("wind-new.csv"), "--quiet", "--format", "json");
+        assertTrue(r.out().contains("\"beyond_reference\":{\"rows\":" + scoredBeyond + ","), r.out());
+        assertTrue(r.out().contains("\"wind_ms\":{\"reference_min\":2,\"reference_max\":15.95,\"below\":0,\"above\":"
+                + aboveWindRange + "}"), r.out());
+        assertTrue(scoredBeyond > 0, "the new rows hold wind speeds above the reference's");
     }
 
     /** Runs nearfit in-process with predict's and check's block size set to {@code blockRows}. */

@@ -49,7 +49,7 @@ class EstimateOptionTest {
         CliRun.Result r = CliRun.inProcess("predict", model, query.toString(), "--quiet");
         assertEquals(0, r.status(), r.toString());
         List<String> lines = r.out().lines().toList();
-        assertEquals("line,x,y,fit,band_lo,band_hi,resid,z", lines.get(0));
+        assertEquals("line,x,y,fit,band_lo,band_hi,resid,z,beyond", lines.get(0));
         return Double.parseDouble(lines.get(1).split(",")[3]);
     }
 

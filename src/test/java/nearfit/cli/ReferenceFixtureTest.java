@@ -51,7 +51,7 @@ class ReferenceFixtureTest {
             CliRun.Result predict = CliRun.inProcess("predict", model, query.toString(), "--quiet");
             assertEquals(0, predict.status(), predict.toString());
             List<String> rows = predict.out().lines().toList();
-            assertEquals("line,wind_ms,air_temp_c,fit,band_lo,band_hi", rows.get(0));
+            assertEquals("line,wind_ms,air_temp_c,fit,band_lo,band_hi,beyond", rows.get(0));
             for (int i = 0; i < e.getValue().size(); i++) {
                 double fitted = Double.parseDouble(rows.get(i + 1).split(",")[3]);
                 double want = e.getValue().get(i);

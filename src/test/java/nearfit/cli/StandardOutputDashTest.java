@@ -53,7 +53,7 @@ class StandardOutputDashTest {
         CliRun.Result dash = CliRun.process(dir, "predict", model, slice.toString(), "-o", "-");
         assertEquals(0, dash.status(), dash.toString());
         assertEquals(plain.out(), dash.out());
-        assertTrue(dash.out().startsWith("line,time,turbine,wind_ms,power_kw,fit,band_lo,band_hi,resid,z\n"));
+        assertTrue(dash.out().startsWith("line,time,turbine,wind_ms,power_kw,fit,band_lo,band_hi,resid,z,beyond\n"));
         assertFalse(Files.exists(dir.resolve("-")), "a file named - was written");
         assertFalse(dash.err().contains("line,"), "the CSV went to standard error: " + dash.err());
     }

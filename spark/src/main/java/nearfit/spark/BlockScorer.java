@@ -12,6 +12,7 @@ import java.util.Set;
 import nearfit.knn.ClassVotes;
 import nearfit.knn.KnnModel;
 import nearfit.knn.Progress;
+import nearfit.knn.ReferenceReach;
 import nearfit.knn.ScoredBlock;
 import nearfit.knn.Scoring;
 import org.apache.hadoop.fs.Path;
@@ -164,7 +165,7 @@ final class BlockScorer implements MapPartitionsFunction<Row, Row> {
                 boolean out = count(s, width[i], xs, i);
                 ScoringPlan.Emit emit = plan.emit();
                 if (emit == ScoringPlan.Emit.ALL || emit == ScoringPlan.Emit.FLAGGED && s.flagged()[i]) {
-                    this.out.add(row(s, xs, i));
+                    this.out.add(row(s, xs, i, width[i]));
                     tally.written++;
                 }
                 if (!Double.isNaN(s.z()[i]) && tally.admits(Math.abs(s.z()[i]))) {
@@ -230,20 +231,9 @@ final class BlockScorer implements MapPartitionsFunction<Row, Row> {
             }
             tally.scored++;
             boolean flag = s.flagged()[i];
-            boolean beyond = false;
-            for (int j = 0; j < d; j++) {
-                if (model.reach.below(j, xs[j][i])) {
-                    tally.below[j]++;
-                    beyond = true;
-                } else if (model.reach.above(j, xs[j][i])) {
-                    tally.above[j]++;
-                    beyond = true;
-                }
-            }
-            if (model.reach.far(windowWidth)) {
-                tally.far++;
-                beyond = true;
-            }
+            int met = model.reach.rulesMet(xs, i, windowWidth, tally.below, tally.above);
+            tally.far += (met & ReferenceReach.FAR) != 0 ? 1 : 0;
+            boolean beyond = met != 0;
             tally.flagged += flag ? 1 : 0;
             tally.beyond += beyond ? 1 : 0;
             if (g != null) {
@@ -254,8 +244,8 @@ final class BlockScorer implements MapPartitionsFunction<Row, Row> {
             return beyond;
         }
 
-        /** An output row: file, row index, [time], [group], inputs, [response], fit, band, [resid, z]. */
-        private Row row(ScoredBlock s, double[][] xs, int i) {
+        /** An output row: file, row index, [time], [group], inputs, [response], fit, band, [resid, z], beyond. */
+        private Row row(ScoredBlock s, double[][] xs, int i, double windowWidth) {
             List<Object> v = origin(xs, i);
             if (plan.hasResponse()) {
                 v.add(boxed(y[i]));
@@ -267,6 +257,9 @@ final class BlockScorer implements MapPartitionsFunction<Row, Row> {
                 v.add(boxed(s.residual()[i]));
                 v.add(boxed(s.z()[i]));
             }
+            // As the single-machine output: the reference's one per-row rule, missing where there is no fit.
+            v.add(Double.isNaN(s.fit()[i]) ? null
+                    : model.reach.rulesMet(xs, i, windowWidth, null, null) != 0 ? 1L : 0L);
             return RowFactory.create(v.toArray());
         }
 

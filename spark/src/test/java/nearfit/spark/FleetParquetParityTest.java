@@ -104,7 +104,7 @@ class FleetParquetParityTest {
                 "--where", PREDICT_WHERE, "-o", csv.toString(), "--quiet");
         assertEquals(0, single.status(), single.toString());
         List<String> lines = Files.readAllLines(csv);
-        assertEquals("line,time,turbine,wind_ms,air_density,power_kw,fit,band_lo,band_hi,resid,z", lines.get(0));
+        assertEquals("line,time,turbine,wind_ms,air_density,power_kw,fit,band_lo,band_hi,resid,z,beyond", lines.get(0));
         Map<Long, String[]> byLine = new HashMap<>();
         Map<String, String[]> byTimeAndTurbine = new HashMap<>();
         for (String l : lines.subList(1, lines.size())) {
@@ -128,6 +128,8 @@ class FleetParquetParityTest {
                     // wind_ms, air_density, power_kw, fit, band_lo, band_hi, resid, z
                     assertClose(c[3 + k], r.isNullAt(4 + k) ? Double.NaN : r.getDouble(4 + k), r.toString());
                 }
+                // beyond: the reference's one per-row rule, empty (null) where there is no fit
+                assertEquals(c[11], r.isNullAt(12) ? "" : Long.toString(r.getLong(12)), r.toString());
             }
         }
     }

@@ -114,7 +114,7 @@ public final class Exporter {
     static void flagsCsv(ViewState s, TimeInputs times, FlaggedRows f, OutputStream out) throws IOException {
         ResultCsv csv = ResultCsv.on(out);
         String time = times.column() == null || s.inputs().contains(times.column()) ? null : times.column();
-        csv.header(ResultCsv.rowColumns(f.source(), time, s.groupColumn(), s.inputs(), s.response(), false));
+        csv.header(ResultCsv.rowColumns(f.source(), time, s.groupColumn(), s.inputs(), s.response(), false, false));
         for (FlaggedRow row : f.rows()) {
             ResultCsv.origin(csv, f.source(), row.line());
             if (time != null) {

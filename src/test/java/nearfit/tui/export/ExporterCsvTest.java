@@ -50,11 +50,12 @@ class ExporterCsvTest {
                 new FlaggedRow(8, 3, "", "", List.of(9.0), 5, 1100, -1095, -9)), 2, 2, set);
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         Exporter.flagsCsv(s, new Exporter.TimeInputs(null, new boolean[1]), f, out);
-        assertEquals(String.join(",", ResultCsv.rowColumns(set, null, null, List.of("wind_ms"), "power_kw", false)) + "\n"
+        List<String> header = ResultCsv.rowColumns(set, null, null, List.of("wind_ms"), "power_kw", false, false);
+        assertEquals(String.join(",", header) + "\n"
                 + "set/unit=T02/b.parquet,7,8.5,400,1000,,,-600,-7.25\n"
                 + "set/unit=T01/a.parquet,3,9,5,1100,,,-1095,-9\n", out.toString(StandardCharsets.UTF_8));
         assertEquals("file,row,wind_ms,power_kw", String.join(",",
-                ResultCsv.rowColumns(set, null, null, List.of("wind_ms"), "power_kw", false).subList(0, 4)));
+                ResultCsv.rowColumns(set, null, null, List.of("wind_ms"), "power_kw", false, false).subList(0, 4)));
     }
 
     @Test
@@ -64,7 +65,8 @@ class ExporterCsvTest {
                 new FlaggedRow(1, 3, "2025-03-01T00:00:00Z", "", List.of(1.7407872E12, 6.0), 5, 300, -295, -9)));
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         Exporter.flagsCsv(s, new Exporter.TimeInputs("time", new boolean[] {true, false}), f, out);
-        assertEquals(String.join(",", ResultCsv.rowColumns(null, null, List.of("time", "wind_ms"), "power_kw", false))
+        assertEquals(String.join(",",
+                ResultCsv.rowColumns(null, null, List.of("time", "wind_ms"), "power_kw", false, false))
                 + "\n3,2025-03-01T00:00:00Z,6,5,300,,,-295,-9\n", out.toString(StandardCharsets.UTF_8));
     }
 
