@@ -34,9 +34,9 @@ import org.apache.parquet.schema.PrimitiveType;
 import org.apache.parquet.schema.Type.Repetition;
 
 /**
- * One Parquet file: its footer (read once) and the values of a row group's flat columns, decoded by
- * parquet-column's readers from pages this class reads and decompresses itself (no Hadoop file system or
- * codec classes). Values go straight into the loader's {@link ColumnBuilder}s. Thread-safe: each call
+ * One Parquet file: its footer (read once) and the values of a row group's flat columns, decoded from
+ * pages this class reads and decompresses itself (no Hadoop file system or codec classes): plain number
+ * columns by {@link ParquetDirectDecoder}, the rest by parquet-column's readers. Values go straight into the loader's {@link ColumnBuilder}s. Thread-safe: each call
  * opens its own channel.
  */
 final class ParquetFile {

@@ -19,8 +19,8 @@ import java.util.concurrent.Future;
 /**
  * Loads a Parquet file, or a folder of them (a data set, whose {@code key=value} folder names become
  * columns), into a {@link Table} as {@link CsvLoader} loads CSV: the same column types, missing and bad
- * cell counts, kept columns and load report. Only the kept columns are read; row groups are read in
- * parallel, one task per (file, row group), and joined in file order. A row's source-row value is its
+ * cell counts, kept columns and load report. Only the kept columns are read, in parallel, one task per
+ * (file, row group, column), and joined in file order. A row's source-row value is its
  * file and row index ({@link RowSource}). Recognised by the magic bytes {@code PAR1}, never by the name.
  */
 public final class ParquetLoader {
