@@ -46,6 +46,48 @@ final class ColumnBuilder {
     }
 
     /**
+     * Adds {@code v[0, n)}, numbers read from a file's binary values: NaN is a missing cell, an infinity a bad
+     * one (a reading is never infinite), both stored as NaN. Rewrites those in {@code v}. Only for a number column.
+     */
+    void addNumbers(double[] v, int n) {
+        for (int i = 0; i < n; i++) {
+            double x = v[i];
+            if (x - x != 0) { // NaN or infinite: rare, so one test on the common path
+                missing++;
+                if (x == x) {
+                    bad++;
+                }
+                v[i] = Double.NaN;
+            }
+        }
+        size += n;
+        numbers.addAll(v, n);
+    }
+
+    /**
+     * Adds {@code n} cells: where {@code defined[i]} is 0 a missing cell, else the next of {@code v}'s numbers
+     * (as {@link #addNumbers}). Only for a number column.
+     */
+    void addNumbersAndNulls(double[] v, byte[] defined, int n) {
+        int k = 0;
+        for (int i = 0; i < n; i++) {
+            double x = Double.NaN;
+            if (defined[i] != 0) {
+                x = v[k++];
+            }
+            if (x - x != 0) {
+                missing++;
+                if (x == x) {
+                    bad++;
+                }
+                x = Double.NaN;
+            }
+            numbers.add(x);
+        }
+        size += n;
+    }
+
+    /**
      * Adds the cell {@code b[s..e)}.
      *
      * @param scratchInUse whether {@code b} is {@code scratch} itself (then a decimal comma is replaced

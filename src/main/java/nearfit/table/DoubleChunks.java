@@ -18,6 +18,21 @@ final class DoubleChunks extends ChunkedStore {
         size++;
     }
 
+    /** Appends {@code src[0, n)}, chunk by chunk. */
+    void addAll(double[] src, int n) {
+        int from = 0;
+        while (from < n) {
+            int at = size & MASK;
+            if (at == 0) {
+                last = (double[]) newChunk();
+            }
+            int k = Math.min(n - from, CHUNK - at);
+            System.arraycopy(src, from, last, at, k);
+            from += k;
+            size += k;
+        }
+    }
+
     double get(int i) {
         return ((double[]) chunks[i >>> SHIFT])[i & MASK];
     }

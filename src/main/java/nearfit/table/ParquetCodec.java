@@ -20,24 +20,65 @@ public final class ParquetCodec {
 
     /** Decompresses {@code length} bytes of {@code in} from {@code offset} into exactly {@code size} bytes. */
     static byte[] decompress(CompressionCodec codec, byte[] in, int offset, int length, int size) {
-        return switch (codec) {
-            case UNCOMPRESSED -> {
-                if (length != size) {
-                    throw new IllegalArgumentException("an uncompressed page of " + length + " bytes should hold " + size);
-                }
-                yield java.util.Arrays.copyOfRange(in, offset, offset + length);
-            }
-            case SNAPPY -> snappy(in, offset, length, size);
-            case GZIP -> gzip(in, offset, length, size);
-            case ZSTD -> airlift(new io.airlift.compress.zstd.ZstdDecompressor(), in, offset, length, size);
-            case LZ4_RAW -> airlift(new io.airlift.compress.lz4.Lz4Decompressor(), in, offset, length, size);
-            default -> throw new IllegalArgumentException("pages compressed with " + codec + " are not supported "
-                    + "(SNAPPY, GZIP, ZSTD, LZ4_RAW or none are)");
-        };
+        if (codec == CompressionCodec.UNCOMPRESSED) {
+            checkUncompressed(length, size);
+            return java.util.Arrays.copyOfRange(in, offset, offset + length);
+        }
+        byte[] out = new byte[size];
+        decompressInto(codec, in, offset, length, out, size, null);
+        return out;
     }
 
-    private static byte[] airlift(io.airlift.compress.Decompressor d, byte[] in, int offset, int length, int size) {
-        byte[] out = new byte[size];
+    /**
+     * Decompresses {@code length} bytes of {@code in} from {@code offset} into exactly {@code size} bytes at the
+     * start of {@code out} (at least {@code size} long), with the ZSTD and LZ4_RAW decoders of {@code reused}
+     * (one per thread; null makes new ones). Not for UNCOMPRESSED pages: those are read where they lie.
+     */
+    static void decompressInto(CompressionCodec codec, byte[] in, int offset, int length, byte[] out, int size,
+                               Decompressors reused) {
+        switch (codec) {
+            case UNCOMPRESSED -> {
+                checkUncompressed(length, size);
+                System.arraycopy(in, offset, out, 0, length);
+            }
+            case SNAPPY -> snappyInto(in, offset, length, out, size);
+            case GZIP -> gzip(in, offset, length, out, size);
+            case ZSTD -> airlift(reused == null ? new io.airlift.compress.zstd.ZstdDecompressor() : reused.zstd(),
+                    in, offset, length, out, size);
+            case LZ4_RAW -> airlift(reused == null ? new io.airlift.compress.lz4.Lz4Decompressor() : reused.lz4(),
+                    in, offset, length, out, size);
+            default -> throw new IllegalArgumentException("pages compressed with " + codec + " are not supported "
+                    + "(SNAPPY, GZIP, ZSTD, LZ4_RAW or none are)");
+        }
+    }
+
+    static void checkUncompressed(int length, int size) {
+        if (length != size) {
+            throw new IllegalArgumentException("an uncompressed page of " + length + " bytes should hold " + size);
+        }
+    }
+
+    /** The library decoders one thread reuses from page to page (each holds tables worth keeping); not thread-safe. */
+    static final class Decompressors {
+        private io.airlift.compress.zstd.ZstdDecompressor zstd;
+        private io.airlift.compress.lz4.Lz4Decompressor lz4;
+
+        io.airlift.compress.Decompressor zstd() {
+            if (zstd == null) {
+                zstd = new io.airlift.compress.zstd.ZstdDecompressor();
+            }
+            return zstd;
+        }
+
+        io.airlift.compress.Decompressor lz4() {
+            if (lz4 == null) {
+                lz4 = new io.airlift.compress.lz4.Lz4Decompressor();
+            }
+            return lz4;
+        }
+    }
+
+    private static void airlift(io.airlift.compress.Decompressor d, byte[] in, int offset, int length, byte[] out, int size) {
         int n;
         try {
             n = d.decompress(in, offset, length, out, 0, size);
@@ -47,11 +88,9 @@ public final class ParquetCodec {
         if (n != size) {
             throw new IllegalArgumentException("a page decompressed to " + n + " bytes instead of " + size);
         }
-        return out;
     }
 
-    private static byte[] gzip(byte[] in, int offset, int length, int size) {
-        byte[] out = new byte[size];
+    private static void gzip(byte[] in, int offset, int length, byte[] out, int size) {
         try (GZIPInputStream z = new GZIPInputStream(new java.io.ByteArrayInputStream(in, offset, length))) {
             int n = z.readNBytes(out, 0, size);
             if (n != size) {
@@ -60,11 +99,16 @@ public final class ParquetCodec {
         } catch (java.io.IOException e) {
             throw new IllegalArgumentException("a damaged gzip page (" + e.getMessage() + ")");
         }
+    }
+
+    static byte[] snappy(byte[] in, int offset, int length, int size) {
+        byte[] out = new byte[size];
+        snappyInto(in, offset, length, out, size);
         return out;
     }
 
-    /** Snappy's raw format: a varint length, then literals and back-references (copies). */
-    static byte[] snappy(byte[] in, int offset, int length, int size) {
+    /** Snappy's raw format: a varint length, then literals and back-references (copies); into {@code out[0, size)}. */
+    private static void snappyInto(byte[] in, int offset, int length, byte[] out, int size) {
         int p = offset;
         int end = offset + length;
         long declared = 0;
@@ -81,7 +125,6 @@ public final class ParquetCodec {
         if (declared != size) {
             throw new IllegalArgumentException("a snappy page of " + declared + " bytes should hold " + size);
         }
-        byte[] out = new byte[size];
         int o = 0;
         try {
             while (p < end) {
@@ -133,7 +176,6 @@ public final class ParquetCodec {
         if (o != size) {
             throw new IllegalArgumentException("a snappy page decompressed to " + o + " bytes instead of " + size);
         }
-        return out;
     }
 
     /**

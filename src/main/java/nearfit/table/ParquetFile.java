@@ -34,9 +34,9 @@ import org.apache.parquet.schema.PrimitiveType;
 import org.apache.parquet.schema.Type.Repetition;
 
 /**
- * One Parquet file: its footer (read once) and the values of a row group's flat columns, decoded by
- * parquet-column's readers from pages this class reads and decompresses itself (no Hadoop file system or
- * codec classes). Values go straight into the loader's {@link ColumnBuilder}s. Thread-safe: each call
+ * One Parquet file: its footer (read once) and the values of a row group's flat columns, decoded from
+ * pages this class reads and decompresses itself (no Hadoop file system or codec classes): plain number
+ * columns by {@link ParquetDirectDecoder}, the rest by parquet-column's readers. Values go straight into the loader's {@link ColumnBuilder}s. Thread-safe: each call
  * opens its own channel.
  */
 final class ParquetFile {
@@ -120,9 +120,11 @@ final class ParquetFile {
     /**
      * Reads field {@code field} of row group {@code group} into {@code into}: numbers as doubles, times as
      * epoch milliseconds, labels into the dictionary; nulls (and NaN) as missing cells; an infinite number
-     * as a bad cell, as in CSV.
+     * as a bad cell, as in CSV. Plain numeric chunks in PLAIN or dictionary encoding go through
+     * {@code direct} (the calling thread's own; null reads every chunk through parquet-column), the rest
+     * through parquet-column's reader.
      */
-    void read(int group, ParquetSchema.Field field, ColumnBuilder into) throws IOException {
+    void read(int group, ParquetSchema.Field field, ColumnBuilder into, ParquetDirectDecoder direct) throws IOException {
         RowGroup rg = footer.getRow_groups().get(group);
         ColumnChunk cc = rg.getColumns().get(field.chunk());
         ColumnMetaData meta = cc.getMeta_data();
@@ -133,6 +135,10 @@ final class ParquetFile {
             throw new IllegalArgumentException("column " + field.name() + " is stored as " + meta.getType()
                     + " in row group " + group + " but the schema says " + field.type());
         }
+        if (meta.getNum_values() != rg.getNum_rows()) {
+            throw new IllegalArgumentException("column " + field.name() + " holds " + meta.getNum_values()
+                    + " values in a row group of " + rg.getNum_rows() + " rows");
+        }
         long start = meta.getData_page_offset();
         if (meta.isSetDictionary_page_offset() && meta.getDictionary_page_offset() > 0
                 && meta.getDictionary_page_offset() < start) {
@@ -142,29 +148,28 @@ final class ParquetFile {
         if (length < 0 || length > Integer.MAX_VALUE - 16) {
             throw new IllegalArgumentException("column " + field.name() + " has a chunk of " + length + " bytes");
         }
-        byte[] bytes = new byte[(int) length];
+        boolean useDirect = direct != null && ParquetDirectDecoder.reads(field);
+        byte[] bytes = useDirect ? direct.chunkBuffer((int) length) : new byte[(int) length];
         try (FileChannel ch = FileChannel.open(path, StandardOpenOption.READ)) {
             if (start < 4 || start + length > ch.size() - 8) {
                 throw new IllegalArgumentException("truncated or damaged: column " + field.name() + " of row group " + group
                         + " lies outside the file");
             }
-            readFully(ch, ByteBuffer.wrap(bytes), start);
+            readFully(ch, ByteBuffer.wrap(bytes, 0, (int) length), start);
         }
-        PrimitiveType type = new PrimitiveType(field.optional() ? Repetition.OPTIONAL : Repetition.REQUIRED,
-                primitive(field.type()), field.typeLength(), field.name());
-        ColumnDescriptor descriptor = new ColumnDescriptor(new String[] {field.name()}, type, 0, field.optional() ? 1 : 0);
-        Pages pages = new Pages(bytes, meta, field);
-        ColumnReader reader;
         try {
-            reader = new ColumnReaderImpl(descriptor, pages, new PrimitiveConverter() { }, writer);
-            long n = reader.getTotalValueCount();
-            if (n != rg.getNum_rows()) {
-                throw new IllegalArgumentException("column " + field.name() + " holds " + n + " values in a row group of "
-                        + rg.getNum_rows() + " rows");
+            if (useDirect) {
+                if (direct.read(bytes, (int) length, meta, field, rg.getNum_rows(), into)) {
+                    return;
+                }
+                bytes = java.util.Arrays.copyOf(bytes, (int) length); // an encoding only parquet-column reads
             }
-            copy(reader, n, field, into);
-        } catch (ParquetException e) {
-            throw e;
+            PrimitiveType type = new PrimitiveType(field.optional() ? Repetition.OPTIONAL : Repetition.REQUIRED,
+                    primitive(field.type()), field.typeLength(), field.name());
+            ColumnDescriptor descriptor = new ColumnDescriptor(new String[] {field.name()}, type, 0, field.optional() ? 1 : 0);
+            Pages pages = new Pages(bytes, meta, field);
+            ColumnReader reader = new ColumnReaderImpl(descriptor, pages, new PrimitiveConverter() { }, writer);
+            copy(reader, reader.getTotalValueCount(), field, into);
         } catch (IllegalArgumentException e) {
             throw e;
         } catch (RuntimeException e) {
@@ -213,7 +218,7 @@ final class ParquetFile {
                 case INT64 -> number(into, r.getLong());
                 case UINT64 -> {
                     long v = r.getLong();
-                    number(into, v >= 0 ? v : (double) (v >>> 1) * 2.0 + (v & 1));
+                    number(into, unsignedToDouble(v));
                 }
                 case DECIMAL_LONG -> {
                     long v = f.type() == org.apache.parquet.format.Type.INT32 ? r.getInteger() : r.getLong();
@@ -241,6 +246,16 @@ final class ParquetFile {
             }
             r.consume();
         }
+    }
+
+    /**
+     * The double nearest the unsigned 64-bit value of {@code v} (ties to even), as Python's float(int) gives it.
+     * Above 2^63 the value is halved with its lost low bit ORed back in (a sticky bit): the conversion of the
+     * halved value then rounds as the full one would, and doubling is exact. (Halving, converting and adding
+     * the low bit back after rounding broke ties wrongly: 2^63 + 2^10 + 1 gave 2^63, not 2^63 + 2^11.)
+     */
+    static double unsignedToDouble(long v) {
+        return v >= 0 ? (double) v : (double) ((v >>> 1) | (v & 1)) * 2.0;
     }
 
     private static final byte[] TRUE = {'t', 'r', 'u', 'e'};

@@ -19,8 +19,8 @@ import java.util.concurrent.Future;
 /**
  * Loads a Parquet file, or a folder of them (a data set, whose {@code key=value} folder names become
  * columns), into a {@link Table} as {@link CsvLoader} loads CSV: the same column types, missing and bad
- * cell counts, kept columns and load report. Only the kept columns are read; row groups are read in
- * parallel, one task per (file, row group), and joined in file order. A row's source-row value is its
+ * cell counts, kept columns and load report. Only the kept columns are read, in parallel, one task per
+ * (file, row group, column), and joined in file order. A row's source-row value is its
  * file and row index ({@link RowSource}). Recognised by the magic bytes {@code PAR1}, never by the name.
  */
 public final class ParquetLoader {
@@ -243,13 +243,24 @@ public final class ParquetLoader {
         return kept.stream().toArray();
     }
 
+    /**
+     * Reads every kept column of every row group: one task per (file, row group, kept column) on
+     * {@code threads} threads, so a file of few row groups still keeps every thread busy. The tasks of a
+     * row group fill the columns of its one {@link ChunkResult} (each task its own column; the first also the
+     * rows' source values), joined in file order. Each task borrows a {@link ParquetDirectDecoder} from a
+     * stack of at most {@code threads}, so the decoders' scratch arrays are reused from task to task.
+     */
     private static List<ChunkResult> readAll(List<ParquetFile> files, List<Part> parts, ParquetSchema schema, int[] kept,
                                              Layout layout, String name, int threads) {
-        List<int[]> tasks = new ArrayList<>(); // (file, row group, first row of the group in its file)
+        List<ChunkResult> out = new ArrayList<>();
+        List<int[]> tasks = new ArrayList<>(); // (file, row group, index of the group's ChunkResult in out, kept column)
         for (int f = 0; f < files.size(); f++) {
             long row = 0;
             for (int g = 0; g < files.get(f).rowGroups().size(); g++) {
-                tasks.add(new int[] {f, g});
+                for (int j = 0; j < Math.max(1, kept.length); j++) {
+                    tasks.add(new int[] {f, g, out.size(), j});
+                }
+                out.add(new ChunkResult(layout, 0));
                 row += files.get(f).rowGroups().get(g).getNum_rows();
             }
             if (row != files.get(f).rowCount()) {
@@ -261,6 +272,7 @@ public final class ParquetLoader {
             return List.of(new ChunkResult(layout, 0));
         }
         int n = Math.max(1, Math.min(threads, tasks.size()));
+        java.util.concurrent.ConcurrentLinkedDeque<ParquetDirectDecoder> decoders = new java.util.concurrent.ConcurrentLinkedDeque<>();
         ExecutorService pool = n == 1 ? null : Executors.newFixedThreadPool(n, r -> {
             Thread t = new Thread(r, "nearfit-parquet");
             t.setDaemon(true);
@@ -268,19 +280,27 @@ public final class ParquetLoader {
         });
         try {
             List<Future<ChunkResult>> futures = new ArrayList<>();
-            List<ChunkResult> out = new ArrayList<>();
             for (int[] t : tasks) {
                 ParquetFile file = files.get(t[0]);
                 Part part = parts.get(t[0]);
-                java.util.concurrent.Callable<ChunkResult> job = () -> readGroup(file, part, t[0], t[1], schema, kept, layout);
+                ChunkResult into = out.get(t[2]);
+                java.util.concurrent.Callable<ChunkResult> job = () -> {
+                    ParquetDirectDecoder decoder = decoders.pollFirst();
+                    if (decoder == null) {
+                        decoder = new ParquetDirectDecoder();
+                    }
+                    readColumn(file, part, t[0], t[1], t[3], into, schema, kept, layout, decoder);
+                    decoders.addFirst(decoder); // not returned after a failure: the load ends anyway
+                    return into;
+                };
                 if (pool == null) {
-                    out.add(call(job, part.shownName));
+                    call(job, part.shownName);
                 } else {
                     futures.add(pool.submit(job));
                 }
             }
             for (int i = 0; i < futures.size(); i++) {
-                out.add(get(futures.get(i), parts.get(tasks.get(i)[0]).shownName));
+                get(futures.get(i), parts.get(tasks.get(i)[0]).shownName);
             }
             return out;
         } finally {
@@ -328,37 +348,43 @@ public final class ParquetLoader {
         }
     }
 
-    private static ChunkResult readGroup(ParquetFile file, Part part, int fileIndex, int group, ParquetSchema schema,
-                                         int[] kept, Layout layout) throws IOException {
-        ChunkResult r = new ChunkResult(layout, 0);
-        long first = 0;
-        for (int g = 0; g < group; g++) {
-            first += file.rowGroups().get(g).getNum_rows();
-        }
+    /**
+     * Reads kept column {@code j} of row group {@code group} into {@code r}; the task of column 0 also adds the
+     * rows' source values (file and row index). With no kept column, only those.
+     */
+    private static void readColumn(ParquetFile file, Part part, int fileIndex, int group, int j, ChunkResult r,
+                                   ParquetSchema schema, int[] kept, Layout layout, ParquetDirectDecoder decoder)
+            throws IOException {
         long rows = file.rowGroups().get(group).getNum_rows();
-        for (long i = 0; i < rows; i++) {
-            r.lines.add(RowSource.pack(fileIndex, first + i));
-        }
-        int fields = schema.fields().size();
-        for (int j = 0; j < kept.length; j++) {
-            ColumnBuilder into = r.columns[j];
-            if (kept[j] < fields) {
-                file.read(group, schema.fields().get(kept[j]), into);
-            } else {
-                String v = part.partition.get(layout.names().get(j));
-                byte[] b = v.getBytes(java.nio.charset.StandardCharsets.UTF_8);
-                boolean missing = isMissingPartition(v);
-                byte[] scratch = new byte[b.length + 1];
-                for (long i = 0; i < rows; i++) {
-                    if (missing) {
-                        into.addMissing();
-                    } else {
-                        into.add(b, 0, b.length, false, scratch, false);
-                    }
-                }
+        if (j == 0) {
+            long first = 0;
+            for (int g = 0; g < group; g++) {
+                first += file.rowGroups().get(g).getNum_rows();
+            }
+            for (long i = 0; i < rows; i++) {
+                r.lines.add(RowSource.pack(fileIndex, first + i));
             }
         }
-        return r;
+        if (j >= kept.length) {
+            return;
+        }
+        int fields = schema.fields().size();
+        ColumnBuilder into = r.columns[j];
+        if (kept[j] < fields) {
+            file.read(group, schema.fields().get(kept[j]), into, decoder);
+            return;
+        }
+        String v = part.partition.get(layout.names().get(j));
+        byte[] b = v.getBytes(java.nio.charset.StandardCharsets.UTF_8);
+        boolean missing = isMissingPartition(v);
+        byte[] scratch = new byte[b.length + 1];
+        for (long i = 0; i < rows; i++) {
+            if (missing) {
+                into.addMissing();
+            } else {
+                into.add(b, 0, b.length, false, scratch, false);
+            }
+        }
     }
 
     /**

@@ -11,8 +11,9 @@
  * <pre>
  * bytes ─▶ Sniffer (delimiter, decimal comma, header) ─▶ ChunkParser per stretch of lines, on every core
  *   (PlainRowReader fast path, RowTokenizer for quoted or unusual rows) ─▶ TableAssembly ─▶ {@link nearfit.table.Table}
- * Parquet ─▶ ParquetFile (footer, ParquetSchema) ─▶ per (file, row group): pages (ParquetCodec) ─▶ parquet-column's
- *   decoders ─▶ ColumnBuilder ─▶ TableAssembly</pre>
+ * Parquet ─▶ ParquetFile (footer, ParquetSchema) ─▶ per (file, row group, column): pages (ParquetCodec) ─▶
+ *   ParquetDirectDecoder (PLAIN and dictionary number pages) or parquet-column's decoders ─▶ ColumnBuilder
+ *   ─▶ TableAssembly</pre>
  * <pre>
  * Table + "column op value and ..." ─▶ {@link nearfit.table.RowCondition} ─▶ {@link nearfit.table.RowSet} (sorted row ids)
  * Column ─▶ {@link nearfit.table.ColumnSummary} (linear: RankSelection for the quantiles)

@@ -155,4 +155,22 @@ class ParquetCommandsTest {
             assertEquals(x, y, x.name());
         }
     }
+
+    /**
+     * A damaged page of a column read by the direct page decoder (DuckDB's file from
+     * scripts/reference/make-parquet-direct-fixtures, its first page header overwritten) ends the command
+     * with exit status 2 and one line naming the file and the column.
+     */
+    @Test
+    void aDamagedNumberPageEndsWithOneLineNamingTheFileAndColumn() throws IOException, URISyntaxException {
+        byte[] b = Files.readAllBytes(Path.of(ParquetCommandsTest.class.getResource("/parquet-direct/duck-none.parquet").toURI()));
+        for (int i = 4; i < 24; i++) {
+            b[i] = (byte) 0xff; // the first column chunk (d_plain) starts right after the magic bytes
+        }
+        Path damaged = dir.resolve("damaged.parquet");
+        Files.write(damaged, b);
+        CliRun.Result r = CliRun.inProcess("describe", damaged.toString());
+        assertEquals(2, r.status(), r.toString());
+        assertEquals("nearfit: " + damaged + ": column d_plain: a damaged page header\n", r.err());
+    }
 }
