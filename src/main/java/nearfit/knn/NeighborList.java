@@ -124,32 +124,26 @@ public final class NeighborList {
         return bound;
     }
 
-    /** Inserts after every held key {@code <= key} (binary search, then one shift of the tail). */
+    /**
+     * Inserts after every held key {@code <= key}: one insertion-sort step from the end, whose
+     * predictable loop beats a binary search and a copy call at the list lengths searched (k up to
+     * a few hundred).
+     */
     private void insert(double key, int slot) {
         if (held == candKey.length) {
             candKey = Arrays.copyOf(candKey, held * 2);
             candSlot = Arrays.copyOf(candSlot, held * 2);
         }
-        int lo = 0;
-        int hi = held;
-        if (held > 0 && candKey[held - 1] <= key) {
-            lo = held; // the usual case while filling: no shift
+        double[] ck = candKey;
+        int[] cs = candSlot;
+        int i = held;
+        while (i > 0 && ck[i - 1] > key) {
+            ck[i] = ck[i - 1];
+            cs[i] = cs[i - 1];
+            i--;
         }
-        while (lo < hi) {
-            int m = (lo + hi) >>> 1;
-            if (candKey[m] <= key) {
-                lo = m + 1;
-            } else {
-                hi = m;
-            }
-        }
-        int tail = held - lo;
-        if (tail > 0) {
-            System.arraycopy(candKey, lo, candKey, lo + 1, tail);
-            System.arraycopy(candSlot, lo, candSlot, lo + 1, tail);
-        }
-        candKey[lo] = key;
-        candSlot[lo] = slot;
+        ck[i] = key;
+        cs[i] = slot;
         held++;
     }
 
