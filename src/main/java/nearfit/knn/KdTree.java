@@ -192,38 +192,7 @@ public final class KdTree implements NeighborIndex {
                 int row = from + (int) ((2L * i + 1) * size / (2L * count));
                 sample[i] = rows[row * d + dim];
             }
-            return selectValue(sample, count >>> 1);
-        }
-
-        /** The kth smallest of a (reordered in place): Hoare-partition quickselect as {@link #select}. */
-        private static double selectValue(double[] a, int kth) {
-            int l = 0;
-            int r = a.length - 1;
-            while (l < r) {
-                double pivot = a[(l + r) >>> 1];
-                int i = l;
-                int j = r;
-                while (i <= j) {
-                    while (a[i] < pivot) {
-                        i++;
-                    }
-                    while (a[j] > pivot) {
-                        j--;
-                    }
-                    if (i <= j) {
-                        double t = a[i];
-                        a[i++] = a[j];
-                        a[j--] = t;
-                    }
-                }
-                if (j < kth) {
-                    l = i;
-                }
-                if (kth < i) {
-                    r = j;
-                }
-            }
-            return a[kth];
+            return WeightedQuantiles.select(sample, 0, count - 1, count >>> 1);
         }
 
         /**
@@ -263,19 +232,10 @@ public final class KdTree implements NeighborIndex {
                 double b = rows[((l + r) >>> 1) * d + dim];
                 double c = rows[r * d + dim];
                 double pivot = Math.max(Math.min(a, b), Math.min(Math.max(a, b), c));
-                int i = l;
-                int j = r;
-                while (i <= j) {
-                    while (rows[i * d + dim] < pivot) {
-                        i++;
-                    }
-                    while (rows[j * d + dim] > pivot) {
-                        j--;
-                    }
-                    if (i <= j) {
-                        swap(i++, j--);
-                    }
-                }
+                int i = partition(l, r + 1, dim, pivot);
+                // rows [l, i) are <= pivot, [i, r] >= pivot; a row i - 1 equal to the pivot is in its
+                // sorted place, so the left part can end before it
+                int j = rows[(i - 1) * d + dim] == pivot ? i - 2 : i - 1;
                 if (j < kth) {
                     l = i;
                 }
