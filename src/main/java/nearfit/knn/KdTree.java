@@ -2,11 +2,14 @@ package nearfit.knn;
 
 /**
  * A k-d tree (Bentley 1975; k-nearest search after Friedman, Bentley &amp; Finkel 1977) over packed
- * coordinates. The tree is implicit and balanced: node i has children 2i+1 and 2i+2, every leaf
- * sits at depth {@code depth} and holds at most {@link #LEAF_SIZE} rows. Each node splits its rows
- * at the median of its cell's widest side (selection on the packed rows): rows left of the split
- * have a coordinate {@code <= splitValue}, rows right {@code >=}. The coordinates are moved into
- * tree order while building, so the rows of a leaf are contiguous and a leaf scan is a linear sweep.
+ * coordinates. The tree is implicit: node i has children 2i+1 and 2i+2 and every leaf sits at depth
+ * {@code depth}, chosen so that exact median splits would leave at most {@link #LEAF_SIZE} rows a leaf.
+ * Each node splits its rows on its cell's widest side: rows left of the split have a coordinate
+ * {@code <= splitValue}, rows right {@code >=} (the one invariant the search relies on). Nodes of up
+ * to {@link #EXACT_UP_TO} rows split at the exact median (selection); larger ones at the median of an
+ * evenly strided sample, with one partition pass (see {@link Builder#build}), so a leaf holds
+ * {@link #LEAF_SIZE} rows on average but may hold somewhat more or fewer. The coordinates are moved
+ * into tree order while building, so the rows of a leaf are contiguous and a leaf scan is a linear sweep.
  *
  * <p>The search keeps, per dimension, the gap between the query and the current cell (Arya &amp;
  * Mount 1993, incremental distance): entering the far child changes one gap, so a node costs O(1)
@@ -18,8 +21,10 @@ package nearfit.knn;
  * rounding tolerance is not pruned either.
  */
 public final class KdTree implements NeighborIndex {
-    /** Rows per leaf at most. */
+    /** Rows per leaf with exact median splits at every level (the depth is chosen for it). */
     static final int LEAF_SIZE = 16;
+    /** Nodes of at most this many rows split at the exact median; larger ones at a sampled median. */
+    static final int EXACT_UP_TO = 256;
 
     private final int d;
     private final int n;
@@ -108,7 +113,15 @@ public final class KdTree implements NeighborIndex {
             }
         }
 
-        /** Builds node's subtree over rows [from, to) in the cell [lo, hi] (arrays owned by this call). */
+        /**
+         * Builds node's subtree over rows [from, to) in the cell [lo, hi] (arrays owned by this call).
+         * Above {@link #EXACT_UP_TO} rows the split value is a sample's median and one partition pass
+         * puts the rows on their sides (about one read of the node, where a quickselect needs about
+         * three); if that leaves the split more than 1/8 of the node away from the middle (a sample
+         * that misses a lopsided distribution), the exact median is selected instead. So each side of
+         * a sampled split holds at most 5/8 of its node, and a leaf under L sampled levels at most
+         * {@code LEAF_SIZE (5/4)^L} rows; the depth is fixed, so the tree never grows deeper.
+         */
         void build(int node, int from, int to, int level, double[] lo, double[] hi, int threads) {
             if (level == depth) {
                 leafStart[node - ((1 << depth) - 1)] = from;
@@ -120,24 +133,40 @@ public final class KdTree implements NeighborIndex {
                     dim = j;
                 }
             }
-            int mid = (from + to) >>> 1;
-            double s = mid < to ? select(from, to, mid, dim) : lo[dim];
+            int split = splitRows(node, from, to, dim, lo[dim]);
+            double s = splitValue[node];
             splitDim[node] = dim;
-            splitValue[node] = s;
             double[] leftHi = hi.clone();
             leftHi[dim] = s;
             double[] rightLo = lo.clone();
             rightLo[dim] = s;
             if (threads > 1 && to - from > 50_000) {
                 int half = threads / 2;
-                Thread t = new Thread(() -> build(2 * node + 1, from, mid, level + 1, lo, leftHi, half));
+                Thread t = new Thread(() -> build(2 * node + 1, from, split, level + 1, lo, leftHi, half));
                 t.start();
-                build(2 * node + 2, mid, to, level + 1, rightLo, hi, threads - half);
+                build(2 * node + 2, split, to, level + 1, rightLo, hi, threads - half);
                 join(t);
             } else {
-                build(2 * node + 1, from, mid, level + 1, lo, leftHi, 1);
-                build(2 * node + 2, mid, to, level + 1, rightLo, hi, 1);
+                build(2 * node + 1, from, split, level + 1, lo, leftHi, 1);
+                build(2 * node + 2, split, to, level + 1, rightLo, hi, 1);
             }
+        }
+
+        /** Splits rows [from, to) on dim, sets the node's split value, returns where the right side starts. */
+        private int splitRows(int node, int from, int to, int dim, double cellLo) {
+            int mid = (from + to) >>> 1;
+            if (to - from <= EXACT_UP_TO) {
+                splitValue[node] = mid < to ? select(from, to, mid, dim) : cellLo;
+                return mid;
+            }
+            double s = sampledMedian(from, to, dim);
+            int split = partition(from, to, dim, s);
+            if (Math.abs(split - mid) > (to - from) >>> 3) {
+                s = select(from, to, mid, dim); // an unrepresentative sample: see build
+                split = mid;
+            }
+            splitValue[node] = s;
+            return split;
         }
 
         private static void join(Thread t) {
@@ -147,6 +176,47 @@ public final class KdTree implements NeighborIndex {
                 Thread.currentThread().interrupt();
                 throw new CancelledException();
             }
+        }
+
+        /**
+         * The median of an evenly strided sample of the rows [from, to) along dim: 127 rows, up to
+         * 1023 for nodes above 64k rows (one in 64), so the split's rank is off by about
+         * 1 / (2 sqrt(sample)) of the node (4.4 % at 127, 1.6 % at 1023). The positions depend only
+         * on the range, never on threads or a seed, so the tree is the same on every run.
+         */
+        private double sampledMedian(int from, int to, int dim) {
+            int size = to - from;
+            int count = Math.min(1023, Math.max(127, size >>> 6)) | 1;
+            double[] sample = new double[count];
+            for (int i = 0; i < count; i++) {
+                int row = from + (int) ((2L * i + 1) * size / (2L * count));
+                sample[i] = rows[row * d + dim];
+            }
+            return WeightedQuantiles.select(sample, 0, count - 1, count >>> 1);
+        }
+
+        /**
+         * One Hoare pass over [from, to) around {@code pivot}, a value some row of the range holds
+         * (so the scans stop inside it). Returns p with rows [from, p) {@code <= pivot} and [p, to)
+         * {@code >= pivot}: the split invariant. The scans stop on rows equal to the pivot from both
+         * sides, so a run of equal values (a constant column, a coarse decimal grid) is dealt out
+         * evenly and cannot put every row on one side.
+         */
+        private int partition(int from, int to, int dim, double pivot) {
+            int i = from;
+            int j = to - 1;
+            while (i <= j) {
+                while (rows[i * d + dim] < pivot) {
+                    i++;
+                }
+                while (rows[j * d + dim] > pivot) {
+                    j--;
+                }
+                if (i <= j) {
+                    swap(i++, j--);
+                }
+            }
+            return i;
         }
 
         /**
@@ -162,19 +232,10 @@ public final class KdTree implements NeighborIndex {
                 double b = rows[((l + r) >>> 1) * d + dim];
                 double c = rows[r * d + dim];
                 double pivot = Math.max(Math.min(a, b), Math.min(Math.max(a, b), c));
-                int i = l;
-                int j = r;
-                while (i <= j) {
-                    while (rows[i * d + dim] < pivot) {
-                        i++;
-                    }
-                    while (rows[j * d + dim] > pivot) {
-                        j--;
-                    }
-                    if (i <= j) {
-                        swap(i++, j--);
-                    }
-                }
+                int i = partition(l, r + 1, dim, pivot);
+                // rows [l, i) are <= pivot, [i, r] >= pivot; a row i - 1 equal to the pivot is in its
+                // sorted place, so the left part can end before it
+                int j = rows[(i - 1) * d + dim] == pivot ? i - 2 : i - 1;
                 if (j < kth) {
                     l = i;
                 }
@@ -213,9 +274,12 @@ public final class KdTree implements NeighborIndex {
     }
 
     /**
-     * An upper bound on the k-th key from the previous search's k best (consecutive queries of a
-     * batch are close, so this prunes from the first node on): the largest key among k of them
-     * other than the excluded row; +infinity when there are fewer. Changes the work, not the result.
+     * An upper bound on the k-th key from the previous search's result (consecutive queries of a
+     * batch are close, so this prunes from the first node on): the largest key among k of its rows
+     * other than the excluded row; +infinity when there are fewer. The row the previous search
+     * excluded counts too: in leave-one-out that is the previous query's own row, and the current
+     * row is usually among the previous k, so without it one row would be missing. Changes the
+     * work, not the result.
      */
     private double capFromPrevious(double[] q, int k, int exclude, NeighborList out) {
         int[] slots = out.previousSlots(this);
@@ -231,6 +295,11 @@ public final class KdTree implements NeighborIndex {
                 cap = Math.max(cap, Metric.key(base, treeCoords, slot, q, d));
                 used++;
             }
+        }
+        int previousExcluded = out.previousExcludedSlot();
+        if (used < k && previousExcluded >= 0 && treePos[previousExcluded] != exclude) {
+            cap = Math.max(cap, Metric.key(base, treeCoords, previousExcluded, q, d));
+            used++;
         }
         return used == k ? cap : Double.POSITIVE_INFINITY;
     }
@@ -277,8 +346,8 @@ public final class KdTree implements NeighborIndex {
         if (base != Metric.EUCLIDEAN) {
             for (int i = from; i < to; i++) {
                 double key = Metric.key(base, treeCoords, i, q, d);
-                if (key <= out.bound() && treePos[i] != exclude) {
-                    out.offer(key, i);
+                if (key <= out.bound()) {
+                    offerUnlessExcluded(key, i, exclude, out);
                 }
             }
         } else if (d == 3) {
@@ -293,11 +362,20 @@ public final class KdTree implements NeighborIndex {
                     double t = treeCoords[o + j] - q[j];
                     key += t * t;
                 }
-                if (key <= out.bound() && treePos[i] != exclude) {
-                    out.offer(key, i);
+                if (key <= out.bound()) {
+                    offerUnlessExcluded(key, i, exclude, out);
                 }
             }
         }
+    }
+
+    /** Offers slot i unless it holds the excluded row, whose slot is noted for the next search's cap instead. */
+    private double offerUnlessExcluded(double key, int i, int exclude, NeighborList out) {
+        if (treePos[i] != exclude) {
+            return out.offer(key, i);
+        }
+        out.noteExcludedSlot(i);
+        return out.bound();
     }
 
     /** Euclidean in three inputs: the general loop's operations in its order, unrolled. */
@@ -313,8 +391,8 @@ public final class KdTree implements NeighborIndex {
             double t1 = c[o + 1] - q1;
             double t2 = c[o + 2] - q2;
             double key = t0 * t0 + t1 * t1 + t2 * t2;
-            if (key <= bound && treePos[i] != exclude) {
-                bound = out.offer(key, i);
+            if (key <= bound) {
+                bound = offerUnlessExcluded(key, i, exclude, out);
             }
         }
     }
@@ -330,10 +408,19 @@ public final class KdTree implements NeighborIndex {
             double t0 = c[o] - q0;
             double t1 = c[o + 1] - q1;
             double key = t0 * t0 + t1 * t1;
-            if (key <= bound && treePos[i] != exclude) {
-                bound = out.offer(key, i);
+            if (key <= bound) {
+                bound = offerUnlessExcluded(key, i, exclude, out);
             }
         }
+    }
+
+    /** The most rows any leaf holds (for tests of the split guard). */
+    int largestLeaf() {
+        int most = 0;
+        for (int i = 0; i + 1 < leafStart.length; i++) {
+            most = Math.max(most, leafStart[i + 1] - leafStart[i]);
+        }
+        return most;
     }
 
     @Override

@@ -5,35 +5,40 @@ import java.util.Arrays;
 /**
  * The neighbours of one query: reference positions and keys, ascending by (key, position), with
  * every row that ties the k-th key included ({@link Metric#tieHigh}: within a relative 1e-12 of the
- * k-th distance), so {@link #count()} can exceed k. Also the search's scratch space (a max-heap of
- * the k best and a buffer of rows that tie the heap's top), reused from query to query: one list
- * per thread, not thread-safe.
+ * k-th distance), so {@link #count()} can exceed k. Also the search's scratch space, reused from
+ * query to query: one list per thread, not thread-safe.
+ *
+ * <p>During a search the candidates are kept ascending by key (equal keys in arrival order) in
+ * primitive arrays, each inserted at its place: the first k are the k best, and the rest are the rows
+ * that tie the k-th. When the k-th key drops, the tail beyond the new tie bound is cut off. So the
+ * held set is always "every offered row with a key up to the tie bound of the k-th smallest", the same
+ * whatever the order of offers, and the end of a search needs no sort: only rows of exactly equal keys
+ * are put in position order once slots are mapped to positions.
  *
  * <p>Keys are those of {@link Metric}: squared distances for Euclidean and Mahalanobis. During a
- * search the heap holds index-specific <em>slots</em> (the k-d tree's tree-order row), mapped to
- * positions by {@link #finish(int[])}; the slots of the last search's k best are kept, so the next
- * search of the same index can start with a bound from them (see {@link #previousSlots}).
+ * search the list holds index-specific <em>slots</em> (the k-d tree's tree-order row), mapped to
+ * positions by {@link #finish(Object, int[])}; the slots of the last search's result are kept, so the
+ * next search of the same index can start with a bound from them (see {@link #previousSlots}).
  */
 public final class NeighborList {
     private int k;
     private Metric metric = Metric.EUCLIDEAN;
-    private int heapSize;
-    private double[] heapKey = new double[16];
-    private int[] heapPos = new int[16];
+    /** Candidates held: ascending keys, their slots; the first min(k, held) are the best. */
+    private int held;
+    private double[] candKey = new double[16];
+    private int[] candSlot = new int[16];
     /**
-     * The key a candidate must not exceed: once k are held, the largest key that ties the heap's top
+     * The key a candidate must not exceed: once k are held, the largest key that ties the k-th
      * ({@link Metric#tieHigh}); +infinity before, unless {@link #limit} lowered it.
      */
     private double bound;
     private double[] gaps = new double[0];
-    private int tieCount;
-    /** The largest key in the tie buffer (meaningful when tieCount &gt; 0). */
-    private double tieMax;
-    private double[] tieKey = new double[16];
-    private int[] tiePos = new int[16];
 
     private Object previousOwner;
     private int previousCount;
+    /** The slot of the row the search excluded, once met (-1 before); the previous search's, after finish. */
+    private int excludedSlot = -1;
+    private int previousExcludedSlot = -1;
     private int[] previousSlots = new int[16];
 
     private int count;
@@ -67,17 +72,17 @@ public final class NeighborList {
     void reset(int newK, Metric base) {
         k = newK;
         metric = base;
-        heapSize = 0;
-        tieCount = 0;
+        held = 0;
         count = 0;
         bound = Double.POSITIVE_INFINITY;
-        if (heapKey.length < newK) {
-            heapKey = new double[newK];
-            heapPos = new int[newK];
+        excludedSlot = -1;
+        if (candKey.length <= newK) {
+            candKey = new double[newK + 1];
+            candSlot = new int[newK + 1];
         }
     }
 
-    /** The key a candidate must not exceed to matter: the tie bound of the heap's top once k are held. */
+    /** The key a candidate must not exceed to matter: the tie bound of the k-th held key once k are held. */
     double bound() {
         return bound;
     }
@@ -94,95 +99,52 @@ public final class NeighborList {
      * Offers a candidate; keeps the k best and every candidate that ties the k-th. Returns the new
      * {@link #bound()}.
      */
-    double offer(double key, int pos) {
-        if (heapSize < k) {
-            push(key, pos);
-            if (heapSize == k) {
-                bound = Math.min(bound, metric.tieHigh(heapKey[0]));
+    double offer(double key, int slot) {
+        if (held < k) {
+            insert(key, slot);
+            if (held == k) {
+                bound = Math.min(bound, metric.tieHigh(candKey[k - 1]));
             }
             return bound;
         }
         if (key > bound) {
             return bound;
         }
-        double top = heapKey[0];
-        if (key >= top) {
-            addTie(key, pos);
-            return bound;
-        }
-        int topPos = heapPos[0];
-        replaceTop(key, pos);
-        addTie(top, topPos);
-        double newTop = heapKey[0];
-        if (newTop < top) {
-            bound = Math.min(bound, metric.tieHigh(newTop));
-            if (tieMax > bound) {
-                dropTiesAbove(bound); // buffered rows that tied the old top but not the new one
+        double kth = candKey[k - 1];
+        insert(key, slot);
+        if (key < kth) {
+            double newKth = candKey[k - 1];
+            if (newKth < kth) {
+                bound = Math.min(bound, metric.tieHigh(newKth));
+                while (held > k && candKey[held - 1] > bound) {
+                    held--; // rows that tied the old k-th but not the new one
+                }
             }
         }
         return bound;
     }
 
-    /** Removes buffered ties whose key exceeds the bound. */
-    private void dropTiesAbove(double b) {
-        int m = 0;
-        double max = Double.NEGATIVE_INFINITY;
-        for (int i = 0; i < tieCount; i++) {
-            if (tieKey[i] <= b) {
-                tieKey[m] = tieKey[i];
-                tiePos[m++] = tiePos[i];
-                max = Math.max(max, tieKey[i]);
-            }
+    /**
+     * Inserts after every held key {@code <= key}: one insertion-sort step from the end, whose
+     * predictable loop beats a binary search and a copy call at the list lengths searched (k up to
+     * a few hundred).
+     */
+    private void insert(double key, int slot) {
+        if (held == candKey.length) {
+            candKey = Arrays.copyOf(candKey, held * 2);
+            candSlot = Arrays.copyOf(candSlot, held * 2);
         }
-        tieCount = m;
-        tieMax = max;
-    }
-
-    private void push(double key, int pos) {
-        int i = heapSize++;
-        while (i > 0) {
-            int parent = (i - 1) >>> 1;
-            if (heapKey[parent] >= key) {
-                break;
-            }
-            heapKey[i] = heapKey[parent];
-            heapPos[i] = heapPos[parent];
-            i = parent;
+        double[] ck = candKey;
+        int[] cs = candSlot;
+        int i = held;
+        while (i > 0 && ck[i - 1] > key) {
+            ck[i] = ck[i - 1];
+            cs[i] = cs[i - 1];
+            i--;
         }
-        heapKey[i] = key;
-        heapPos[i] = pos;
-    }
-
-    private void replaceTop(double key, int pos) {
-        int i = 0;
-        int n = heapSize;
-        while (true) {
-            int c = 2 * i + 1;
-            if (c >= n) {
-                break;
-            }
-            if (c + 1 < n && heapKey[c + 1] > heapKey[c]) {
-                c++;
-            }
-            if (heapKey[c] <= key) {
-                break;
-            }
-            heapKey[i] = heapKey[c];
-            heapPos[i] = heapPos[c];
-            i = c;
-        }
-        heapKey[i] = key;
-        heapPos[i] = pos;
-    }
-
-    private void addTie(double key, int pos) {
-        if (tieCount == tieKey.length) {
-            tieKey = Arrays.copyOf(tieKey, tieCount * 2);
-            tiePos = Arrays.copyOf(tiePos, tieCount * 2);
-        }
-        tieMax = tieCount == 0 ? key : Math.max(tieMax, key);
-        tieKey[tieCount] = key;
-        tiePos[tieCount++] = pos;
+        ck[i] = key;
+        cs[i] = slot;
+        held++;
     }
 
     /**
@@ -210,40 +172,63 @@ public final class NeighborList {
         return previousCount;
     }
 
+    /** Notes the slot of the excluded row when the search meets it (its key is not offered). */
+    void noteExcludedSlot(int slot) {
+        excludedSlot = slot;
+    }
+
+    /** The slot the previous search of the same owner excluded, or -1 (read with {@link #previousSlots}). */
+    int previousExcludedSlot() {
+        return previousExcludedSlot;
+    }
+
     /** Ends a search whose slots are positions. */
     void finish() {
         finish(null, null);
     }
 
     /**
-     * Ends the search of {@code owner}: remembers the heap's slots, moves heap and ties to the
-     * output with slots mapped to positions ({@code slotPosition[slot]}; null: the same), sorted by
-     * (key, position).
+     * Ends the search of {@code owner}: remembers the held slots, moves the candidates to the output
+     * with slots mapped to positions ({@code slotPosition[slot]}; null: the same). They are ascending
+     * by key already; rows of equal keys are put in position order.
      */
     void finish(Object owner, int[] slotPosition) {
-        int n = heapSize + tieCount;
+        int n = held;
         ensureOutput(n);
-        if (previousSlots.length < heapSize) {
-            previousSlots = new int[heapKey.length];
+        if (previousSlots.length < n) {
+            previousSlots = new int[candSlot.length];
         }
-        System.arraycopy(heapPos, 0, previousSlots, 0, heapSize);
-        previousCount = heapSize;
+        System.arraycopy(candSlot, 0, previousSlots, 0, n);
+        previousCount = n;
         previousOwner = owner;
-        System.arraycopy(heapKey, 0, keys, 0, heapSize);
-        System.arraycopy(tieKey, 0, keys, heapSize, tieCount);
+        previousExcludedSlot = excludedSlot;
+        System.arraycopy(candKey, 0, keys, 0, n);
         if (slotPosition == null) {
-            System.arraycopy(heapPos, 0, positions, 0, heapSize);
-            System.arraycopy(tiePos, 0, positions, heapSize, tieCount);
+            System.arraycopy(candSlot, 0, positions, 0, n);
         } else {
-            for (int i = 0; i < heapSize; i++) {
-                positions[i] = slotPosition[heapPos[i]];
-            }
-            for (int i = 0; i < tieCount; i++) {
-                positions[heapSize + i] = slotPosition[tiePos[i]];
+            for (int i = 0; i < n; i++) {
+                positions[i] = slotPosition[candSlot[i]];
             }
         }
         count = n;
-        sortByKeyThenPosition(keys, positions, 0, n);
+        orderEqualKeysByPosition(keys, positions, n);
+    }
+
+    /** With keys ascending, sorts positions within each run of equal keys (insertion: runs are short). */
+    private static void orderEqualKeysByPosition(double[] key, int[] pos, int n) {
+        for (int i = 1; i < n; i++) {
+            double k = key[i];
+            int p = pos[i];
+            if (k != key[i - 1] || p > pos[i - 1]) {
+                continue;
+            }
+            int j = i - 1;
+            while (j >= 0 && key[j] == k && pos[j] > p) {
+                pos[j + 1] = pos[j];
+                j--;
+            }
+            pos[j + 1] = p;
+        }
     }
 
     /** Makes room for n outputs (for indexes that write the output directly). */

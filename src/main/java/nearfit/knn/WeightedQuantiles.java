@@ -48,7 +48,7 @@ final class WeightedQuantiles {
     }
 
     /** Rearranges a[from..to] so that a[k] holds the value a sort would put there; returns it. */
-    private static double select(double[] a, int from, int to, int k) {
+    static double select(double[] a, int from, int to, int k) {
         while (from < to) {
             int mid = (from + to) >>> 1;
             double pivot = medianOfThree(a[from], a[mid], a[to]);

@@ -2,9 +2,11 @@ package nearfit.knn;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.Arrays;
 import java.util.Random;
+import net.jqwik.api.Example;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.IntRange;
@@ -88,6 +90,70 @@ class NeighborIndexPropertiesTest {
                 int kk = Math.min(t % 4 == 0 ? k / 2 + 1 : k, n - 1);
                 assertSameNeighbours(tree, a, brute, b, q, kk, exclude);
             }
+        }
+    }
+
+    /**
+     * Trees large enough that the top levels split at a sampled median ({@link KdTree#EXACT_UP_TO}):
+     * columns that are constant, on a decimal grid (steps of 0.1, not exact in binary, so distances
+     * tie only within rounding) or coarse, over rows drawn from a small pool so whole points repeat.
+     */
+    @Property(tries = 25)
+    void kdTreeWithSampledSplitsEqualsBruteForceOnDuplicatesConstantsAndGrids(
+            @ForAll long seed, @ForAll @IntRange(min = 1, max = 5) int d,
+            @ForAll @IntRange(min = 300, max = 6000) int n, @ForAll @IntRange(min = 1, max = 30) int k) {
+        Random r = new Random(seed);
+        int distinct = 1 + r.nextInt(Math.max(1, n / 4));
+        double[] pool = new double[distinct * d];
+        for (int j = 0; j < d; j++) {
+            int kind = r.nextInt(3);
+            for (int i = 0; i < distinct; i++) {
+                pool[i * d + j] = kind == 0 ? 2.5 : kind == 1 ? r.nextInt(60) * 0.1 : r.nextInt(4);
+            }
+        }
+        double[] c = new double[n * d];
+        for (int i = 0; i < n; i++) {
+            System.arraycopy(pool, r.nextInt(distinct) * d, c, i * d, d);
+        }
+        for (Metric m : new Metric[] {Metric.EUCLIDEAN, Metric.MANHATTAN, Metric.CHEBYSHEV}) {
+            KdTree tree = KdTree.build(c, d, m, 2);
+            BruteForce brute = new BruteForce(c, d, m);
+            NeighborList a = new NeighborList();
+            NeighborList b = new NeighborList();
+            for (int t = 0; t < 12; t++) {
+                int row = r.nextInt(n);
+                double[] q = Arrays.copyOfRange(c, row * d, row * d + d);
+                if (t % 3 == 0) {
+                    q[r.nextInt(d)] += r.nextInt(5) * 0.1;
+                }
+                int exclude = t % 3 == 0 ? -1 : row;
+                assertSameNeighbours(tree, a, brute, b, q, Math.min(k, n - 1), exclude);
+            }
+        }
+    }
+
+    /**
+     * A root whose strided sample holds only the smallest value (every sampled row is 0, the others
+     * distinct and larger): the sampled split would put 127 of 4096 rows on the left, so the build
+     * falls back to the exact median and leaves stay near {@link KdTree#LEAF_SIZE} (without the
+     * fallback the largest leaf holds 34). The answers equal brute force.
+     */
+    @Example
+    void kdTreeFallsBackToTheExactMedianWhenTheSampleIsLopsided() {
+        int n = 4096;
+        int count = 127;
+        double[] c = new double[n * 2];
+        for (int i = 0; i < n; i++) {
+            c[2 * i] = 1 + i;
+        }
+        for (int i = 0; i < count; i++) {
+            c[2 * (int) ((2L * i + 1) * n / (2L * count))] = 0;
+        }
+        KdTree tree = KdTree.build(c, 2, Metric.EUCLIDEAN, 1);
+        assertTrue(tree.largestLeaf() <= 24, "largest leaf " + tree.largestLeaf());
+        BruteForce brute = new BruteForce(c, 2, Metric.EUCLIDEAN);
+        for (int row = 0; row < n; row += 97) {
+            assertSameNeighbours(tree, brute, Arrays.copyOfRange(c, 2 * row, 2 * row + 2), 20, row);
         }
     }
 

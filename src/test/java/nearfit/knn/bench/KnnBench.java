@@ -10,6 +10,8 @@ import java.util.Arrays;
 import java.util.SplittableRandom;
 import nearfit.knn.HeldOutBlocks;
 import nearfit.knn.HeldOutScheme;
+import nearfit.knn.KnnCostBreakdown;
+import nearfit.knn.KnnCostBreakdown.Case;
 import nearfit.knn.KnnModel;
 import nearfit.knn.KnnSettings;
 import nearfit.knn.NeighborIndex;
@@ -26,7 +28,8 @@ import nearfit.knn.TuningTable;
  * warm-up) and prints "case median_seconds" lines, then the check figures every side prints
  * ({@code check_*}); {@code csv DIR ROWS FILE} writes the first ROWS rows as a CSV file for the
  * whole-process mode (shortest round-trip decimals, so every parser that rounds correctly reads the
- * same doubles). Not a test: run by the script only.
+ * same doubles); {@code cost DIR REPS LOO_N} prints where one thread's time goes in the all-k
+ * leave-one-out pass ({@link KnnCostBreakdown}). Not a test: run by the script only.
  */
 public final class KnnBench {
     static final int K = 10;
@@ -40,6 +43,7 @@ public final class KnnBench {
         switch (args[0]) {
             case "generate" -> generate(dir, intArg(args, 2, 1_000_000), intArg(args, 3, 200_000));
             case "csv" -> csv(dir, Integer.parseInt(args[2]), Path.of(args[3]));
+            case "cost" -> cost(dir, Integer.parseInt(args[2]), Integer.parseInt(args[3]));
             case "blocked" -> blocked(dir, Integer.parseInt(args[2]), Integer.parseInt(args[3]),
                     Integer.parseInt(args[4]), Integer.parseInt(args[5]));
             default -> run(dir, Integer.parseInt(args[2]), intArg(args, 3, 1_000_000), intArg(args, 4, 200_000),
@@ -125,10 +129,6 @@ public final class KnnBench {
         return c;
     }
 
-    interface Case {
-        double run() throws Exception;
-    }
-
     static void time(String name, int reps, Case c) throws Exception {
         double sink = c.run(); // warm-up
         sink += c.run();
@@ -191,6 +191,17 @@ public final class KnnBench {
             kdist += q.distances()[i * K + K - 1];
         }
         System.out.printf("check_query_3d_kdist %.9f%n", kdist / queryCount);
+    }
+
+    /** The first {@code looRows} rows, fitted on one thread: build, searches, loads and the whole pass timed apart. */
+    static void cost(Path dir, int reps, int looRows) throws Exception {
+        double[] x3 = read(dir.resolve("x3.bin"));
+        double[] y = read(dir.resolve("y.bin"));
+        double[][] l3 = columns(x3, 3, looRows);
+        KnnSettings s = KnnSettings.defaults().withK(K).withScaling(Scaling.Z).withThreads(1);
+        KnnModel m = KnnModel.fit(ReferenceData.numeric(new String[] {"wind_speed", "air_density", "yaw_error"}, l3,
+                "power_kw", Arrays.copyOf(y, looRows), null), s);
+        KnnCostBreakdown.print(m, KMAX, reps, KnnBench::time);
     }
 
     /**
