@@ -41,6 +41,15 @@ final class CommandOutput {
     }
 
     /** Writes text to {@code target}, or to {@code stdout} when target is {@code -} or {@code null}. */
+    /**
+     * Whether text written for {@code target} lands on a terminal a person reads: standard output ({@code null}
+     * or {@code -}) that is the process's own and connected to a terminal (not a file or a pipe).
+     */
+    static boolean onTerminal(Path target, PrintWriter stdout) {
+        return (target == null || isStandardOutput(target)) && stdout instanceof StandardOutputWriter
+                && System.console() != null;
+    }
+
     static void text(Path target, boolean force, Collection<Path> inputs, PrintWriter stdout, TextBody body) {
         if (target == null || isStandardOutput(target)) {
             try {

@@ -46,7 +46,8 @@ final class LeaveOneOutCsv {
             });
             return;
         }
-        CommandOutput.text(target, force, inputs, stdout, w -> print(model, flags, new ResultCsv(w)));
+        CommandOutput.text(target, force, inputs, stdout, w -> print(model, flags,
+                CommandOutput.onTerminal(target, stdout) ? ResultCsv.forTerminal(w) : new ResultCsv(w)));
     }
 
     private static void requireReference(SourceInfo source, String file) {

@@ -85,7 +85,8 @@ final class PredictionCsv {
             return;
         }
         CommandOutput.text(target, force, inputs, stdout, w -> {
-            PredictionCsv rows = new PredictionCsv(new ResultCsv(w), s, responseName, classLabels, reach);
+            ResultCsv csv = CommandOutput.onTerminal(target, stdout) ? ResultCsv.forTerminal(w) : new ResultCsv(w);
+            PredictionCsv rows = new PredictionCsv(csv, s, responseName, classLabels, reach);
             body.writeTo(rows);
             rows.csv.finish();
         });

@@ -11,6 +11,7 @@ import java.util.ArrayList;
 import java.util.List;
 
 import nearfit.table.RowSource;
+import nearfit.table.VisibleText;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 
@@ -48,10 +49,26 @@ public final class ResultCsv implements ResultSink {
     private static final CSVFormat FORMAT = CSVFormat.RFC4180.builder().setRecordSeparator('\n').get();
 
     private final CSVPrinter printer;
+    /** Whether text cells have their control characters made visible ({@link #forTerminal}). */
+    private final boolean visible;
 
     /** A CSV on {@code w}; the caller writes the header first ({@link #header}). */
     public ResultCsv(Writer w) throws IOException {
+        this(w, false);
+    }
+
+    private ResultCsv(Writer w, boolean visible) throws IOException {
         this.printer = new CSVPrinter(w, FORMAT);
+        this.visible = visible;
+    }
+
+    /**
+     * A CSV that a person reads on a terminal: text cells (names and labels from the file) have every control
+     * character made visible ({@link VisibleText}), so a label holding an escape sequence cannot drive the
+     * terminal. A file, or a pipe, gets the cells as the file holds them ({@link #ResultCsv(Writer)}).
+     */
+    public static ResultCsv forTerminal(Writer w) throws IOException {
+        return new ResultCsv(w, true);
     }
 
     /** A CSV on a byte stream, as UTF-8 through a 64 KiB buffer; {@link #flush} pushes it through. */
@@ -140,7 +157,7 @@ public final class ResultCsv implements ResultSink {
     /** A text cell (a label or a name from the file), neutralised; empty for {@code null}. */
     @Override
     public ResultCsv text(String s) throws IOException {
-        printer.print(CsvCells.text(s));
+        printer.print(visible ? VisibleText.of(CsvCells.text(s)) : CsvCells.text(s));
         return this;
     }
 

@@ -92,6 +92,34 @@ public class TmuxViewTest {
     }
 
     /** Writes the small log into {@code dir} and opens a detached 120x40 session with a plain shell. */
+    @Test
+    void predictOnATerminalShowsALabelsEscapeSequenceAsTextWhileAPipeGetsTheLabelsBytes(@TempDir Path dir)
+            throws Exception {
+        String session = newSession(dir);
+        try {
+            // Turbine labels holding a colour sequence (ESC [ 3 1 m): on a terminal it would turn the text red.
+            String log = smallLog().replace(",T01,", ",T\u001b[31m01,");
+            Files.writeString(dir.resolve("marked.csv"), log, StandardCharsets.UTF_8);
+            Path script = dir.resolve("run-predict.sh");
+            String nearfit = "LANG=C.UTF-8 " + javaCommand();
+            Files.writeString(script, "cd '" + dir + "'\n"
+                    + nearfit + " fit marked.csv -x wind_ms -y power_kw --k 10 --group turbine -o m.nfm --quiet\n"
+                    + "clear\n"
+                    + nearfit + " predict m.nfm marked.csv --quiet\n"
+                    + nearfit + " predict m.nfm marked.csv --quiet | grep -c \"$(printf '\\033')\\\\[31m\" "
+                    + "| sed 's/^/PIPED_ESCAPES=/'\n"
+                    + "echo NEARFIT_EXIT=$?\n", StandardCharsets.UTF_8);
+            tmux("send-keys", "-t", session, "sh " + script, "Enter");
+            String screen = waitFor(session, s -> s.contains("NEARFIT_EXIT="), "the predict runs to end");
+            // On the terminal the label is shown as the file holds it, made visible: T\e[31m01.
+            assertTrue(screen.contains(",T\\e[31m01,"), screen);
+            // Through a pipe every T01 row keeps its bytes (375 of the 1500 rows are T01).
+            assertTrue(screen.contains("PIPED_ESCAPES=375"), screen);
+        } finally {
+            new ProcessBuilder(TmuxSocket.command("kill-session", "-t", session)).start().waitFor(10, TimeUnit.SECONDS);
+        }
+    }
+
     private static String newSession(Path dir) throws IOException, InterruptedException {
         assumeTrue(hasTmux() || System.getenv("CI") != null, "tmux is not installed (CI installs it)");
         Files.writeString(dir.resolve("small-site.csv"), smallLog(), StandardCharsets.UTF_8);
