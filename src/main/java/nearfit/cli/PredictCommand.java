@@ -18,7 +18,8 @@ import picocli.CommandLine.Parameters;
 /** {@code nearfit predict}: the model's fit and band at every row of a file, as CSV. */
 @Command(name = "predict", mixinStandardHelpOptions = true, sortOptions = false,
         description = "Write every row of FILE with the model's fit, band_lo and band_hi, and where FILE has the "
-                + "response, resid and z (a category response: the predicted class and its vote share), as CSV "
+                + "response, resid and z, then beyond (1 where the row lies beyond the reference, so its fit is an "
+                + "extrapolation); a category response: the predicted class and its vote share. CSV (or Parquet) "
                 + "keeping the source line number.")
 final class PredictCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "MODEL", description = "A model file written by fit.")
