@@ -18,8 +18,8 @@ import picocli.CommandLine.Parameters;
 /** {@code nearfit predict}: the model's fit and band at every row of a file, as CSV. */
 @Command(name = "predict", mixinStandardHelpOptions = true, sortOptions = false,
         description = "Write every row of FILE with the model's fit, band_lo and band_hi, and where FILE has the "
-                + "response, resid and z, then beyond (1 where the row lies beyond the reference, so its fit is an "
-                + "extrapolation); a category response: the predicted class and its vote share. CSV (or Parquet) "
+                + "response, resid and z (a category response: the predicted class and its vote share), then beyond "
+                + "(1 where the row lies beyond the reference, so its fit is an extrapolation). CSV (or Parquet) "
                 + "keeping the source line number.")
 final class PredictCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "MODEL", description = "A model file written by fit.")
@@ -55,8 +55,7 @@ final class PredictCommand implements Callable<Integer> {
         } else {
             ScoredRows scored = ScoredRows.open(restored, file, model, restored.settings().flagThreshold(),
                     model.err());
-            // A category response's rows carry no beyond column (its votes report no window width).
-            ReferenceReach reach = scored.categoryResponse() ? null : ReferenceReach.of(restored.engine());
+            ReferenceReach reach = ReferenceReach.of(restored.engine());
             PredictionCsv.write(scored, restored.stored().columns().response(),
                     restored.stored().columns().responseLabels(), reach, output, model.force, inputs, out,
                     (b, i) -> true);

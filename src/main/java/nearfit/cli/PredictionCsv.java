@@ -16,9 +16,9 @@ import nearfit.table.RowSource;
 /**
  * Writes scored rows through {@link ResultCsv}, the one CSV writer: {@code line}, the file's first time
  * column (when it has one and it is not an input), the group, the inputs, the response, then
- * {@code fit, band_lo, band_hi, resid, z, beyond} for a number response or {@code class, share} for a category
- * response. {@code beyond} is the reference's one per-row rule ({@link ReferenceReach#rulesMet}): 1 when the
- * row's fit is an extrapolation, 0 when not, empty where there is no fit.
+ * {@code fit, band_lo, band_hi, resid, z} for a number response or {@code class, share} for a category
+ * response, then {@code beyond}: the reference's one per-row rule ({@link ReferenceReach#rulesMet}), 1 when the
+ * row's fit or vote is an extrapolation, 0 when not, empty where there is none.
  */
 final class PredictionCsv {
     /** Which rows of a block to write. */
@@ -33,7 +33,7 @@ final class PredictionCsv {
     private final List<String> classLabels;
     /** Whether the time column is written on its own (it is not one of the inputs). */
     private final boolean timeColumn;
-    /** The reference's reach for the {@code beyond} column (a number response), or null for none. */
+    /** The reference's reach for the {@code beyond} column, or null for none. */
     private final ReferenceReach reach;
 
     /** Starts {@code sink} (a CSV or Parquet form) with the columns of {@code source}'s rows. */
@@ -44,7 +44,7 @@ final class PredictionCsv {
         this.source = source;
         this.classLabels = classLabels;
         this.timeColumn = source.time() != null && !source.inputNames().contains(source.time().name());
-        this.reach = source.categoryResponse() ? null : reach;
+        this.reach = reach;
         csv.header(ResultCsv.rowColumns(rowSource, timeColumn ? source.time().name() : null,
                 source.group() == null ? null : source.group().name(), source.inputNames(),
                 source.hasResponse() ? responseName : null, source.categoryResponse(), this.reach != null));
@@ -70,7 +70,7 @@ final class PredictionCsv {
     /**
      * Opens the rows' output: Parquet when {@code target}'s name ends in {@code .parquet} (any case), else
      * CSV; standard output ({@code null} or {@code -}) is always CSV. Writes the header, runs {@code body},
-     * then ends the file. With {@code reach} not null, a number response's rows end with {@code beyond}.
+     * then ends the file. With {@code reach} not null, the rows end with {@code beyond}.
      */
     static void open(Path target, boolean force, Collection<Path> inputs, PrintWriter stdout, ScoredRows s,
                      String responseName, List<String> classLabels, ReferenceReach reach, Body body) {
@@ -137,6 +137,7 @@ final class PredictionCsv {
             int c = b.votes().winner()[i];
             csv.text(c < 0 ? "" : classLabels.get(c));
             csv.number(b.votes().share()[i]);
+            beyond(b.x(), i, c < 0, b.votes().windowWidth()[i]);
         }
         csv.endRow();
     }
@@ -150,12 +151,18 @@ final class PredictionCsv {
         if (hasResponse) {
             csv.number(b.scores().residual()[i]).number(b.scores().z()[i]);
         }
-        if (reach != null) {
-            if (Double.isNaN(b.scores().fit()[i])) {
-                csv.empty();
-            } else {
-                csv.whole(reach.rulesMet(b.x(), i, b.estimates().windowWidth()[i], null, null) != 0 ? 1 : 0);
-            }
+        beyond(b.x(), i, Double.isNaN(b.scores().fit()[i]), b.estimates().windowWidth()[i]);
+    }
+
+    /** The {@code beyond} cell, when written: empty where the row has no fit or vote, else 1 or 0. */
+    private void beyond(double[][] x, int i, boolean none, double windowWidth) throws IOException {
+        if (reach == null) {
+            return;
+        }
+        if (none) {
+            csv.empty();
+        } else {
+            csv.whole(reach.rulesMet(x, i, windowWidth, null, null) != 0 ? 1 : 0);
         }
     }
 }

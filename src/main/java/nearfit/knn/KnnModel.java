@@ -213,6 +213,7 @@ public final class KnnModel {
         forEachPoint(columns, progress, (s, p, i) -> s.voteAt(p, out, i), i -> {
             out.winner()[i] = -1;
             out.share()[i] = Double.NaN;
+            out.windowWidth()[i] = Double.NaN;
         });
         return out;
     }

@@ -71,6 +71,7 @@ public final class Searcher {
         out.winner()[i] = winner;
         out.share()[i] = shares[winner];
         out.neighbourCount()[i] = estimator.counted(k);
+        out.windowWidth()[i] = model.windowWidthOfKey(estimator.kthKey(k));
     }
 
     /** Transforms a raw point into the scratch coordinates. */

@@ -84,7 +84,7 @@ public final class ResultCsv implements ResultSink {
      * @param inputs    the model's inputs
      * @param response  the response, or {@code null} when the rows have none
      * @param category  whether the response is a category ({@code class, share} instead of fit and band)
-     * @param beyond    whether a number response's rows end with {@link #BEYOND} (rows scored against a model)
+     * @param beyond    whether the rows end with {@link #BEYOND} (rows scored or voted against a model)
      */
     public static List<String> rowColumns(String time, String group, List<String> inputs, String response,
                                           boolean category, boolean beyond) {
@@ -117,9 +117,9 @@ public final class ResultCsv implements ResultSink {
                 names.add(RESID);
                 names.add(Z);
             }
-            if (beyond) {
-                names.add(BEYOND);
-            }
+        }
+        if (beyond) {
+            names.add(BEYOND);
         }
         return names;
     }

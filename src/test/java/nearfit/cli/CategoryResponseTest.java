@@ -39,14 +39,17 @@ class CategoryResponseTest {
 
     @Test
     void predictGivesTheClassAndItsVoteShareWithFormulaCellsNeutralised() throws IOException {
-        Path query = Files.writeString(dir.resolve("q.csv"), "flow_m3h,head_m\n12,38.8\n90,31\n");
+        Path query = Files.writeString(dir.resolve("q.csv"), "flow_m3h,head_m\n12,38.8\n90,31\n140,27\n,30\n");
         CliRun.Result r = CliRun.inProcess("predict", model, query.toString(), "--quiet");
         assertEquals(0, r.status(), r.toString());
         List<String> lines = r.out().lines().toList();
-        assertEquals("line,flow_m3h,head_m,class,share", lines.get(0));
-        assertEquals("2,12,38.8,normal,1", lines.get(1));
+        assertEquals("line,flow_m3h,head_m,class,share,beyond", lines.get(0));
+        assertEquals("2,12,38.8,normal,1,0", lines.get(1));
         // OWASP CSV injection: a label starting with = gets a leading quote.
-        assertEquals("3,90,31,'=overload,1", lines.get(2));
+        assertEquals("3,90,31,'=overload,1,0", lines.get(2));
+        // The reference's flows end at 99.25 m3/h: a vote at 140 is an extrapolation; no vote, no mark.
+        assertEquals("4,140,27,'=overload,1,1", lines.get(3));
+        assertEquals("5,,30,,,", lines.get(4));
     }
 
     @Test

@@ -203,7 +203,7 @@ final class BlockScorer implements MapPartitionsFunction<Row, Row> {
             }
         }
 
-        /** An output row of a category response: file, row index, [time], [group], inputs, [response], class, share. */
+        /** An output row of a category response: file, row index, [time], [group], inputs, [response], class, share, beyond. */
         private Row voteRow(ClassVotes votes, double[][] xs, int i) {
             List<Object> v = origin(xs, i);
             if (plan.hasResponse()) {
@@ -212,6 +212,7 @@ final class BlockScorer implements MapPartitionsFunction<Row, Row> {
             int c = votes.winner()[i];
             v.add(c < 0 ? null : model.classLabels.get(c));
             v.add(boxed(votes.share()[i]));
+            v.add(c < 0 ? null : model.reach.rulesMet(xs, i, votes.windowWidth()[i], null, null) != 0 ? 1L : 0L);
             return RowFactory.create(v.toArray());
         }
 

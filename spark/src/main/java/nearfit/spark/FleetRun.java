@@ -187,15 +187,15 @@ final class FleetRun {
     /**
      * The output rows' columns, named and ordered as the single-machine predict's ({@link ResultCsv#rowColumns})
      * with {@code file, row} in place of {@code line} (as the tool's Parquet output of a data set): file, row,
-     * [time], [group], inputs, [response], then fit, band_lo, band_hi, [resid, z], beyond (a whole number, as the
-     * single-machine Parquet output writes it), or for a category response class and share.
+     * [time], [group], inputs, [response], then fit, band_lo, band_hi, [resid, z] or for a category response class
+     * and share, then beyond (a whole number, as the single-machine Parquet output writes it).
      */
     StructType outputSchema() {
         ModelColumns c = stored.columns();
         String time = plan.writeTime() ? input.timeColumn : null;
         String group = plan.writeGroup() ? input.groupColumn : null;
         String response = plan.hasResponse() ? c.response() : null;
-        List<String> names = ResultCsv.rowColumns(time, group, c.inputs(), response, plan.category(), !plan.category());
+        List<String> names = ResultCsv.rowColumns(time, group, c.inputs(), response, plan.category(), true);
         StructType s = new StructType().add(ResultCsv.FILE, DataTypes.StringType, false)
                 .add(ResultCsv.ROW, DataTypes.LongType, false);
         for (String name : names.subList(ResultCsv.originColumns(RowSource.CSV_LINES).size(), names.size())) {

@@ -46,7 +46,7 @@ class FleetCategoryTest {
         assertEquals(0, single.status(), single.toString());
         List<String> lines = Files.readAllLines(csv);
         List<String> header = List.of(lines.get(0).split(","));
-        assertEquals(List.of("line", "time", "wind_ms", "power_kw", "turbine", "class", "share"), header);
+        assertEquals(List.of("line", "time", "wind_ms", "power_kw", "turbine", "class", "share", "beyond"), header);
         Map<Long, String[]> byLine = new HashMap<>();
         for (String l : lines.subList(1, lines.size())) {
             String[] c = l.split(",", -1);
@@ -78,6 +78,7 @@ class FleetCategoryTest {
                 assertEquals(Double.parseDouble(c[6]), share, 1e-12, r.toString());
                 split += share < 1 ? 1 : 0;
             }
+            assertEquals(c[7], r.isNullAt(8) ? "" : Long.toString(r.getLong(8)), "beyond " + r);
             differentClass += c[5].equals(c[4]) ? 0 : 1;
         }
         assertTrue(split > 100 && differentClass > 100, "votes are close calls here: " + split + " split, "
