@@ -62,7 +62,7 @@ final class FitCommand implements Callable<Integer> {
         SafeOutput.checkTarget(output, model.force, inputs);
         PrintWriter err = model.err();
         ReferenceInput input = ReferenceInput.load(file, columns, model, err, tuning.timeColumn(),
-                tuning.wantsFirstTime());
+                tuning.wantsFirstTime(), true);
         Source source = new Source(input, model.where);
         HeldOutBlocks blocks = tuning.blocks(source.data, input.source().table(), input.group());
         input = null; // the table goes: at 10M rows it holds more than the fit still needs

@@ -83,7 +83,7 @@ final class PlotCommand implements Callable<Integer> {
         PrintWriter err = model.err();
         boolean auto = chosenK == OptionNumbers.K_AUTO;
         ReferenceInput input = ReferenceInput.load(file, columns, model, err, auto ? tuning.timeColumn() : null,
-                auto && tuning.wantsFirstTime());
+                auto && tuning.wantsFirstTime(), false);
         nearfit.knn.HeldOutBlocks blocks = auto ? tuning.blocks(input.data(), input.source().table(), input.group())
                 : null;
         Scene scene = scene(input, tuning.fit(input.data(), blocks, model.settings(1,

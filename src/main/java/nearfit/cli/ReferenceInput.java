@@ -20,18 +20,13 @@ import nearfit.table.RowSet;
  * @param group          the group column, or {@code null}
  */
 record ReferenceInput(SourceTable source, ReferenceData data, List<String> responseLabels, CategoryColumn group) {
-    /** Loads the file and builds the reference rows for the command's options. */
-    static ReferenceInput load(String file, ColumnOptions columns, ModelOptions model, PrintWriter err) {
-        return load(file, columns, model, err, null, false);
-    }
-
     /**
-     * As {@link #load(String, ColumnOptions, ModelOptions, PrintWriter)}, also keeping the time column a held-out
-     * scheme needs: {@code timeColumn} (the {@code --time} column, or null) or, with {@code firstTime}, the
-     * file's first time column.
+     * Loads the file and builds the reference rows for the command's options, also keeping the time column a
+     * held-out scheme needs: {@code timeColumn} (the {@code --time} column, or null) or, with {@code firstTime},
+     * the file's first time column. {@code digest}: the file's SHA-256 is wanted (fit records it in the model).
      */
     static ReferenceInput load(String file, ColumnOptions columns, ModelOptions model, PrintWriter err,
-                               String timeColumn, boolean firstTime) {
+                               String timeColumn, boolean firstTime, boolean digest) {
         List<String> inputs = columns.inputs();
         model.validate();
         ColumnRequest request = ColumnRequest.NONE.require("-x", inputs).require("-y", columns.response())
@@ -39,7 +34,7 @@ record ReferenceInput(SourceTable source, ReferenceData data, List<String> respo
         if (timeColumn != null) {
             request = request.require("--time", timeColumn);
         }
-        SourceTable source = SourceTable.load(file, request, firstTime, model.threads(), model.quiet, err);
+        SourceTable source = SourceTable.load(file, request, firstTime, digest, model.threads(), model.quiet, err);
         RowSet rows = source.rows(model.where);
         double[][] x = new double[inputs.size()][];
         for (int j = 0; j < x.length; j++) {

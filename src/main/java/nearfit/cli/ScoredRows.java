@@ -142,7 +142,8 @@ final class ScoredRows {
         ModelColumns columns = model.stored().columns();
         ColumnRequest request = ColumnRequest.NONE.require("model input", columns.inputs())
                 .allow(columns.response(), columns.group()).where(options.where);
-        SourceTable source = SourceTable.load(file, request, true, options.threads(), options.quiet, err);
+        // Scoring records no digest of the data file: none is computed.
+        SourceTable source = SourceTable.load(file, request, true, false, options.threads(), options.quiet, err);
         return new ScoredRows(model, source, options, threshold, err);
     }
 

@@ -36,7 +36,8 @@ final class SourceTable {
     private final String name;
     private final Table table;
     private final long sizeBytes;
-    private final CompletableFuture<String> sha256;
+    /** The digest beside the load; null until asked when the load was told it is not needed. */
+    private CompletableFuture<String> sha256;
 
     private SourceTable(String name, Table table, long sizeBytes, CompletableFuture<String> sha256) {
         this.name = name;
@@ -49,16 +50,13 @@ final class SourceTable {
      * Loads {@code name} ({@code -} for standard input), keeping only the columns {@code request} asks
      * for. Unless {@code quiet}, says on {@code err} how many rows were read and how many bad cells they
      * held; the load report's warnings (say, the file changed while it was read) go to {@code err} even
-     * when quiet, since they are about the data, not progress.
+     * when quiet, since they are about the data, not progress. {@code keepTime} also keeps the file's first
+     * time column, so that scored rows can be traced by their time. With {@code digest} the file's SHA-256 is
+     * computed beside the load (a model records it); without, only if {@link #sha256()} is asked, so commands
+     * that never record it do not spend a core on it while the load and the search run.
      */
-    static SourceTable load(String name, ColumnRequest request, int threads, boolean quiet, PrintWriter err) {
-        return load(name, request, false, threads, quiet, err);
-    }
-
-    /** As {@link #load(String, ColumnRequest, int, boolean, PrintWriter)}; {@code keepTime} also keeps the
-     * file's first time column, so that scored rows can be traced by their time. */
-    static SourceTable load(String name, ColumnRequest request, boolean keepTime, int threads, boolean quiet,
-                            PrintWriter err) {
+    static SourceTable load(String name, ColumnRequest request, boolean keepTime, boolean digest, int threads,
+                            boolean quiet, PrintWriter err) {
         boolean stdin = "-".equals(name);
         Path path = stdin ? null : ArgumentPath.of(name);
         if (!stdin && !Files.exists(path)) {
@@ -68,7 +66,7 @@ final class SourceTable {
         // nor has a folder (a Parquet data set).
         boolean stream = stdin || !Files.isRegularFile(path);
         CompletableFuture<String> sha = stream ? CompletableFuture.completedFuture(null)
-                : CompletableFuture.supplyAsync(() -> sha256Of(path, name));
+                : digest ? CompletableFuture.supplyAsync(() -> sha256Of(path, name)) : null;
         LoadOptions options = LoadOptions.builder().threads(threads).keepColumns(request.required())
                 .keepIfPresent(request.optional()).keepFirstTimeColumn(keepTime).build();
         long start = System.nanoTime();
@@ -144,6 +142,9 @@ final class SourceTable {
 
     /** The file's SHA-256 in lower-case hex, or {@code null} for standard input; waits for it. */
     String sha256() {
+        if (sha256 == null) {
+            sha256 = CompletableFuture.completedFuture(sha256Of(ArgumentPath.of(name), name));
+        }
         try {
             return sha256.join();
         } catch (CompletionException e) {

@@ -40,7 +40,7 @@ final class TuneCommand implements Callable<Integer> {
         tuning.validate();
         PrintWriter err = model.err();
         ReferenceInput input = ReferenceInput.load(file, columns, model, err, tuning.timeColumn(),
-                tuning.wantsFirstTime());
+                tuning.wantsFirstTime(), false);
         HeldOutBlocks blocks = tuning.blocks(input.data(), input.source().table(), input.group());
         KnnModel engine = KnnModel.fit(input.data(), model.settings(1, KnnSettings.DEFAULT_FLAG_THRESHOLD));
         TuningOptions.Result r = tuning.run(engine, blocks, tuning.largestK(),
