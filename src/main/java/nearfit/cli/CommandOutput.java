@@ -7,6 +7,7 @@ import java.io.Writer;
 import java.nio.file.Path;
 import java.util.Collection;
 
+import nearfit.model.ResultCsv;
 import nearfit.model.SafeOutput;
 import nearfit.table.NearfitException;
 
@@ -42,12 +43,14 @@ final class CommandOutput {
 
     /** Writes text to {@code target}, or to {@code stdout} when target is {@code -} or {@code null}. */
     /**
-     * Whether text written for {@code target} lands on a terminal a person reads: standard output ({@code null}
-     * or {@code -}) that is the process's own and connected to a terminal (not a file or a pipe).
+     * The CSV writer for rows written on {@code w} for {@code target}: {@link ResultCsv#forTerminal} when they
+     * land on a terminal a person reads (standard output, {@code null} or {@code -}, that is the process's own
+     * and connected to a terminal), else the plain writer (a file or a pipe keeps the source's bytes).
      */
-    static boolean onTerminal(Path target, PrintWriter stdout) {
-        return (target == null || isStandardOutput(target)) && stdout instanceof StandardOutputWriter
+    static ResultCsv csv(Writer w, Path target, PrintWriter stdout) throws IOException {
+        boolean terminal = (target == null || isStandardOutput(target)) && stdout instanceof StandardOutputWriter
                 && System.console() != null;
+        return terminal ? ResultCsv.forTerminal(w) : new ResultCsv(w);
     }
 
     static void text(Path target, boolean force, Collection<Path> inputs, PrintWriter stdout, TextBody body) {

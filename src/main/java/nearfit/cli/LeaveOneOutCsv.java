@@ -46,8 +46,8 @@ final class LeaveOneOutCsv {
             });
             return;
         }
-        CommandOutput.text(target, force, inputs, stdout, w -> print(model, flags,
-                CommandOutput.onTerminal(target, stdout) ? ResultCsv.forTerminal(w) : new ResultCsv(w)));
+        CommandOutput.text(target, force, inputs, stdout,
+                w -> print(model, flags, CommandOutput.csv(w, target, stdout)));
     }
 
     private static void requireReference(SourceInfo source, String file) {

@@ -85,8 +85,8 @@ final class PredictionCsv {
             return;
         }
         CommandOutput.text(target, force, inputs, stdout, w -> {
-            ResultCsv csv = CommandOutput.onTerminal(target, stdout) ? ResultCsv.forTerminal(w) : new ResultCsv(w);
-            PredictionCsv rows = new PredictionCsv(csv, s, responseName, classLabels, reach);
+            PredictionCsv rows = new PredictionCsv(CommandOutput.csv(w, target, stdout), s, responseName, classLabels,
+                    reach);
             body.writeTo(rows);
             rows.csv.finish();
         });
