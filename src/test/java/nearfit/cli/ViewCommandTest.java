@@ -124,10 +124,16 @@ class ViewCommandTest {
     }
 
     /** Polls the virtual terminal until its text holds {@code wanted}; returns that text. */
+    /**
+     * The screen once it shows {@code wanted} and two reads 20 ms apart agree: the explorer draws on its own
+     * thread, and a read in the middle of a redraw mixed a new header with the old one's characters.
+     */
     private static String awaitFrame(DefaultVirtualTerminal vt, String wanted) throws InterruptedException {
+        String before = "";
         String text = "";
-        while (!text.contains(wanted)) {
+        while (!text.contains(wanted) || !text.equals(before)) {
             Thread.sleep(20);
+            before = text;
             text = screenText(vt);
         }
         return text;
